@@ -1,0 +1,58 @@
+package org.linemass.engine.moments;
+
+import org.linemass.geometry.Affine;
+import org.linemass.geometry.Vec3;
+
+/**
+ * The moments of a curve with linear density λ: {@code mass = ∫ λ ds} (the length when λ = 1),
+ * {@code centroid = (1/mass) ∫ λ r ds} and the central second moment (covariance)
+ * {@code covariance = ∫ λ (r - g)(r - g)^T ds}. {@code errorBound} bounds the absolute error of
+ * {@code mass}. Central moments are kept (never raw moments about a far origin) so that
+ * combination stays accurate. {@link #ZERO} has mass 0 and is the identity of {@link #plus}.
+ */
+public record Moments(double mass, Vec3 centroid, Sym3 covariance, double errorBound) {
+
+    public static final Moments ZERO = new Moments(0, Vec3.ZERO, Sym3.ZERO, 0);
+
+    /** Combination by the parallel-axis rule: {@code C = Ca + Cb + (ma mb / m)(gb - ga)(gb - ga)^T}. */
+    public Moments plus(Moments o) {
+        if (o.mass == 0) {
+            return new Moments(mass, centroid, covariance.plus(o.covariance), errorBound + o.errorBound);
+        }
+        if (mass == 0) {
+            return new Moments(o.mass, o.centroid, covariance.plus(o.covariance), errorBound + o.errorBound);
+        }
+        double m = mass + o.mass;
+        Vec3 d = o.centroid.minus(centroid);
+        Vec3 g = centroid.plusScaled(d, o.mass / m);
+        Sym3 c = covariance.plus(o.covariance).plus(Sym3.outer(d).times(mass * o.mass / m));
+        return new Moments(m, g, c, errorBound + o.errorBound);
+    }
+
+    /** The same moments for a density multiplied by {@code lambda} (kg/m for length moments). */
+    public Moments scaledDensity(double lambda) {
+        return new Moments(mass * lambda, centroid, covariance.times(lambda), errorBound * Math.abs(lambda));
+    }
+
+    /**
+     * The moments of the image of the curve under a similarity {@code x' = s Q x + t} for a density
+     * fixed per unit length: {@code m' = s m}, {@code g' = s Q g + t}, {@code C' = s^3 Q C Q^T}.
+     *
+     * @param map a similarity (the caller checks with {@link Affine#similarityScale})
+     * @param scale its scale s
+     */
+    public Moments transformedBySimilarity(Affine map, double scale) {
+        double[] m = map.linearRowMajor();
+        double[] q = new double[9];
+        for (int i = 0; i < 9; i++) {
+            q[i] = m[i] / scale;
+        }
+        return new Moments(mass * scale, map.apply(centroid), covariance.rotated(q).times(scale * scale * scale),
+                errorBound * scale);
+    }
+
+    /** Second moment about the centroid in inertia form: {@code trace(C) I - C}. */
+    public Sym3 inertia() {
+        return covariance.inertiaFromCovariance();
+    }
+}

@@ -1,0 +1,26 @@
+package org.linemass.engine.result;
+
+/** The finding kinds the engine reports; the strings are the stable JSON values. */
+public final class FindingKind {
+
+    public static final String GAP = "gap";
+    public static final String JOINED_ACROSS_GAP = "joined_across_gap";
+    public static final String DUPLICATE = "duplicate";
+    public static final String OVERLAP = "overlap";
+    public static final String T_JUNCTION = "t_junction";
+    public static final String CROSSING = "crossing";
+    public static final String BRANCH = "branch";
+    public static final String ZERO_LENGTH = "zero_length";
+    public static final String TINY_SEGMENT = "tiny_segment";
+    public static final String SELF_CROSSING = "self_crossing";
+    public static final String TIGHT_BEND = "tight_bend";
+    public static final String SHARP_CORNER = "sharp_corner";
+    public static final String NO_SECTION = "no_section";
+    public static final String UNITS_ASSUMED = "units_assumed";
+    public static final String SKIPPED_ENTITY = "skipped_entity";
+    public static final String IGNORED_ENTITY = "ignored_entity";
+    public static final String LIMIT_REACHED = "limit_reached";
+
+    private FindingKind() {
+    }
+}
