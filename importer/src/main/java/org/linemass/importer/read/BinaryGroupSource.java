@@ -91,7 +91,7 @@ public final class BinaryGroupSource extends GroupSource {
                 dblValue = Double.longBitsToDouble(le(8));
             }
             case INT -> {
-                int width = wideCodes ? intWidth(code) : Math.min(intWidth(code), 2);
+                int width = intWidth(code);
                 need(width, width + "-byte integer for group code " + code);
                 long v = le(width);
                 intValue = width == 2 ? (short) v : width == 4 ? (int) v : v;

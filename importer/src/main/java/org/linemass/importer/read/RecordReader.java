@@ -44,6 +44,12 @@ public final class RecordReader {
         rec.clear();
         rec.type = src.pooledValue().trim();
         rec.position = src.position();
+        if (rec.type.equals("EOF")) {
+            // nothing after EOF is read: trailing bytes may be anything
+            atEnd = true;
+            rec.endOfInput = true;
+            return true;
+        }
         try {
             while (true) {
                 if (!src.next()) {
