@@ -24,6 +24,15 @@ final class LwPolylineConverter {
         int flags = Values.integer(r, 70, 0, "flags");
         double elevation = Values.coordinate(r.num(38, 0), 38);
         Affine ocs = Ocs.of(Values.extrusion(r));
+        int given = 0;
+        for (int i = 0; i < r.size(); i++) {
+            if (r.code(i) == 10) {
+                given++;
+            }
+        }
+        if (given != declared) {
+            throw new EntitySkip("declares " + declared + " vertices but has " + given);
+        }
         double[] xs = new double[Math.max(declared, 1)];
         double[] ys = new double[xs.length];
         double[] bs = new double[xs.length];

@@ -44,6 +44,33 @@ final class SplineConverter {
                 throw new EntitySkip("declares " + c[0] + " " + what(c[1]) + ", more than the limit " + maxPoints);
             }
         }
+        // arrays are sized by what the record holds, never by the declared counts alone
+        int hasKnots = 0;
+        int hasCtrl = 0;
+        int hasFit = 0;
+        int hasWeights = 0;
+        for (int i = 0; i < end; i++) {
+            switch (r.code(i)) {
+                case 40 -> hasKnots++;
+                case 41 -> hasWeights++;
+                case 10 -> hasCtrl++;
+                case 11 -> hasFit++;
+                default -> {
+                }
+            }
+        }
+        if (hasKnots != nKnots) {
+            throw new EntitySkip("declares " + nKnots + " knots but has " + hasKnots);
+        }
+        if (hasCtrl != nCtrl) {
+            throw new EntitySkip("declares " + nCtrl + " control points but has " + hasCtrl);
+        }
+        if (hasFit != nFit) {
+            throw new EntitySkip("declares " + nFit + " fit points but has " + hasFit);
+        }
+        if (hasWeights != 0 && hasWeights != nCtrl) {
+            throw new EntitySkip("has " + hasWeights + " weights for " + nCtrl + " control points");
+        }
         double[] knots = new double[nKnots];
         double[] weights = new double[nCtrl];
         Vec3[] ctrl = new Vec3[nCtrl];
