@@ -1,10 +1,28 @@
 package org.linemass.importer;
 
+import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.channels.FileChannel;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
 import org.linemass.drawing.Drawing;
+import org.linemass.importer.parse.DrawingReader;
+import org.linemass.importer.read.AsciiGroupSource;
+import org.linemass.importer.read.BinaryGroupSource;
+import org.linemass.importer.read.GroupSource;
 
-/** Reads one DXF file (ASCII or binary) into a {@link Drawing}. */
+/**
+ * Reads one DXF file (ASCII or binary) into a {@link Drawing}. The file is opened read-only and
+ * streamed in chunks, so memory follows the geometry, not the file text. Whatever the input, the
+ * only exception that leaves these methods is {@link DxfInputException}: malformed structure is
+ * reported with file, line (or byte offset for binary files), entity and handle; entities that
+ * cannot be used are skipped with an error note in {@link Drawing#notes()}; unexpected internal
+ * failures are reported as input errors asking for a report rather than escaping.
+ */
 public final class DxfImporter {
+
+    private static final byte[] UTF8_BOM = {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF};
 
     private DxfImporter() {
     }
@@ -15,6 +33,62 @@ public final class DxfImporter {
      * @throws DxfInputException when the file cannot be read as a drawing (one-line message with location)
      */
     public static Drawing read(Path file, ImportOptions options) throws DxfInputException {
-        throw new UnsupportedOperationException("importer not written yet");
+        String name = file.toString();
+        try (FileChannel ch = FileChannel.open(file, StandardOpenOption.READ)) {
+            byte[] head = new byte[BinaryGroupSource.SENTINEL.length];
+            ByteBuffer hb = ByteBuffer.wrap(head);
+            while (hb.hasRemaining() && ch.read(hb) >= 0) {
+                // keep reading until the head is full or the file ends
+            }
+            int got = hb.position();
+            GroupSource src;
+            if (BinaryGroupSource.startsWithSentinel(head, got)) {
+                ch.position(BinaryGroupSource.SENTINEL.length);
+                src = BinaryGroupSource.of(name, ch, options.maxLineBytes());
+            } else {
+                ch.position(startsWithBom(head, got) ? UTF8_BOM.length : 0);
+                src = AsciiGroupSource.of(name, ch, options.maxLineBytes());
+            }
+            return guarded(name, src, options);
+        } catch (NoSuchFileException e) {
+            throw new DxfInputException(name, 0, "", "", "file not found");
+        } catch (IOException e) {
+            throw new DxfInputException(name, 0, "", "", "cannot read the file: " + e.getMessage());
+        }
+    }
+
+    /**
+     * Reads a drawing held in memory (tests, fuzzing, uploads); {@code displayName} stands for the
+     * file in messages and provenance.
+     *
+     * @throws DxfInputException when the content cannot be read as a drawing
+     */
+    public static Drawing read(String displayName, byte[] content, ImportOptions options) throws DxfInputException {
+        GroupSource src;
+        if (BinaryGroupSource.startsWithSentinel(content, content.length)) {
+            src = BinaryGroupSource.of(displayName, content, options.maxLineBytes());
+        } else {
+            src = AsciiGroupSource.of(displayName, content, startsWithBom(content, content.length) ? 3 : 0,
+                    options.maxLineBytes());
+        }
+        return guarded(displayName, src, options);
+    }
+
+    private static Drawing guarded(String name, GroupSource src, ImportOptions options) throws DxfInputException {
+        try {
+            return DrawingReader.read(src, options);
+        } catch (IOException e) {
+            throw new DxfInputException(name, 0, "", "", "cannot read the file: " + e.getMessage());
+        } catch (StackOverflowError | OutOfMemoryError e) {
+            throw new DxfInputException(name, 0, "", "", "drawing too large or too deeply nested to read ("
+                    + e.getClass().getSimpleName() + ")");
+        } catch (RuntimeException e) {
+            throw new DxfInputException(name, 0, "", "", "internal error while reading the drawing ("
+                    + e.getClass().getSimpleName() + ": " + e.getMessage() + "); please report this file");
+        }
+    }
+
+    private static boolean startsWithBom(byte[] head, int length) {
+        return length >= 3 && head[0] == UTF8_BOM[0] && head[1] == UTF8_BOM[1] && head[2] == UTF8_BOM[2];
     }
 }

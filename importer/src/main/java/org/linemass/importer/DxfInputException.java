@@ -16,12 +16,28 @@ public final class DxfInputException extends Exception {
     private final String problem;
 
     public DxfInputException(String file, int line, String entityType, String handle, String problem) {
-        super(format(file, line, entityType, handle, problem));
+        this(format(file, line, entityType, handle, problem), file, line, entityType, handle, problem);
+    }
+
+    private DxfInputException(String message, String file, int line, String entityType, String handle,
+            String problem) {
+        super(message);
         this.file = file;
         this.line = line;
         this.entityType = entityType == null ? "" : entityType;
         this.handle = handle == null ? "" : handle;
         this.problem = problem;
+    }
+
+    /**
+     * An error in a binary DXF, located by byte offset instead of line number: the message reads
+     * {@code file:byte N: ENTITY (handle H): problem}; {@link #line()} is 0.
+     */
+    public static DxfInputException atByte(String file, long byteOffset, String entityType, String handle,
+            String problem) {
+        String where = (file == null ? "<input>" : file) + ":byte " + byteOffset;
+        return new DxfInputException(format(where, 0, entityType, handle, problem), file, 0, entityType, handle,
+                problem);
     }
 
     static String format(String file, int line, String entityType, String handle, String problem) {

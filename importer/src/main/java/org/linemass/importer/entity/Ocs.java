@@ -1,0 +1,36 @@
+package org.linemass.importer.entity;
+
+import org.linemass.geometry.Affine;
+import org.linemass.geometry.Vec3;
+
+/**
+ * The object coordinate system of a planar entity from its extrusion direction N, by the
+ * Arbitrary Axis Algorithm (DXF Reference; FACTS.md §7.4): if |Nx| and |Ny| are both below 1/64
+ * the OCS x axis is Wy x N, otherwise Wz x N; the y axis is N x Ax. The result maps OCS points to
+ * world points and is a proper rotation (determinant +1).
+ */
+public final class Ocs {
+
+    /** The cap around world Z inside which Wy is used (exactly representable 1/64). */
+    private static final double ARBITRARY_AXIS_CAP = 1.0 / 64.0;
+
+    private Ocs() {
+    }
+
+    /** OCS-to-world map; {@link EntitySkip} for a zero or non-finite direction. */
+    public static Affine of(Vec3 extrusion) throws EntitySkip {
+        double len = extrusion.norm();
+        if (!(len > 0) || !Double.isFinite(len)) {
+            throw new EntitySkip("extrusion direction (210/220/230) is zero or not finite: " + extrusion);
+        }
+        if (extrusion.x() == 0 && extrusion.y() == 0 && extrusion.z() > 0) {
+            return Affine.IDENTITY;
+        }
+        Vec3 n = extrusion.times(1 / len);
+        Vec3 ax = Math.abs(n.x()) < ARBITRARY_AXIS_CAP && Math.abs(n.y()) < ARBITRARY_AXIS_CAP
+                ? Vec3.Y.cross(n) : Vec3.Z.cross(n);
+        ax = ax.unit();
+        Vec3 ay = n.cross(ax).unit();
+        return Affine.ofColumns(ax, ay, n, Vec3.ZERO);
+    }
+}

@@ -1,0 +1,165 @@
+package org.linemass.importer.parse;
+
+import java.io.IOException;
+import java.util.List;
+import org.linemass.drawing.ImportNote;
+import org.linemass.geometry.Provenance;
+import org.linemass.importer.DxfInputException;
+import org.linemass.importer.ImportOptions;
+import org.linemass.importer.entity.Converters;
+import org.linemass.importer.entity.EntitySkip;
+import org.linemass.importer.entity.InsertSpec;
+import org.linemass.importer.entity.PolylineBuilder;
+import org.linemass.importer.read.Record;
+
+/**
+ * Handles one entity record of an ENTITIES or BLOCKS section, including the records that belong
+ * to it (VERTEX...SEQEND after POLYLINE, ATTRIB...SEQEND after an INSERT with 66 = 1). Curve
+ * entities become segments of the target block; an entity that cannot be used is skipped with an
+ * error note; every other type is counted. Paper-space entities are only counted.
+ */
+final class EntityHandler {
+
+    private final String file;
+    private final ImportOptions options;
+    private final List<ImportNote> notes;
+    private final boolean binary;
+    long paperSpaceEntities;
+
+    EntityHandler(String file, boolean binary, ImportOptions options, List<ImportNote> notes) {
+        this.file = file;
+        this.binary = binary;
+        this.options = options;
+        this.notes = notes;
+    }
+
+    /** Handles {@code r}; reads its follower records from {@code in}. Null target = paper space. */
+    void handle(Record r, RecordStream in, BlockBuilder target) throws DxfInputException, IOException {
+        String type = r.type();
+        boolean paper = target == null;
+        int line = lineOf(r.position());
+        Provenance p = Provenance.of(file, r.layer(), line, r.handle(), type);
+        String layer = r.layer();
+        String handle = r.handle();
+        if (type.equals("POLYLINE")) {
+            handlePolyline(r, in, paper ? null : target, p);
+            return;
+        }
+        if (type.equals("INSERT")) {
+            boolean attribs = r.num(66, 0) == 1;
+            if (paper) {
+                paperSpaceEntities++;
+            } else if (r.hasBadValue()) {
+                skip(p, badValue(r));
+            } else {
+                try {
+                    target.insertSpecs.add(InsertSpec.read(r, p));
+                } catch (EntitySkip e) {
+                    skip(p, e.getMessage());
+                }
+            }
+            if (attribs) {
+                skipFollowers(in, "ATTRIB", paper ? null : target);
+            }
+            return;
+        }
+        if (paper) {
+            paperSpaceEntities++;
+            return;
+        }
+        if (!Converters.isCurveType(type)) {
+            target.countOther(type.isEmpty() ? "(unnamed)" : type);
+            return;
+        }
+        if (r.hasBadValue()) {
+            skip(p, badValue(r));
+            return;
+        }
+        try {
+            Converters.convert(r, p, options.maxVertices(), options.maxControlPoints(), target.segments);
+            target.countCurve(type);
+        } catch (EntitySkip e) {
+            notes.add(new ImportNote("error", "skipped_entity", file, line, type, handle, layer, e.getMessage()));
+        }
+    }
+
+    private void handlePolyline(Record r, RecordStream in, BlockBuilder target, Provenance p)
+            throws DxfInputException, IOException {
+        boolean bad = r.hasBadValue();
+        String badMessage = bad ? badValue(r) : "";
+        PolylineBuilder b = PolylineBuilder.start(r, options.maxVertices());
+        long startPos = r.position();
+        String type = r.type();
+        String handle = r.handle();
+        while (true) {
+            Record v = in.next();
+            if (v == null) {
+                throw in.source().error(startPos, type, handle,
+                        "file ends before the SEQEND that closes this POLYLINE");
+            }
+            if (v.type().equals("VERTEX")) {
+                b.vertex(v);
+                continue;
+            }
+            if (!v.type().equals("SEQEND")) {
+                in.pushBack();
+            }
+            break;
+        }
+        if (target == null) {
+            paperSpaceEntities++;
+            return;
+        }
+        String counted = b.countedType();
+        if (counted == null) {
+            target.countOther(b.meshKind().equals("polyface mesh") ? "POLYFACE_MESH" : "POLYGON_MESH");
+            notes.add(new ImportNote("info", "ignored_entity", file, p.line(), type, handle, p.layer(),
+                    b.meshKind() + " carries no wire geometry; ignored"));
+            return;
+        }
+        if (bad) {
+            skip(p, badMessage);
+            return;
+        }
+        try {
+            Converters.finish(b, p, target.segments);
+            target.countCurve(counted);
+        } catch (EntitySkip e) {
+            skip(p, e.getMessage());
+        }
+    }
+
+    private void skipFollowers(RecordStream in, String followerType, BlockBuilder target)
+            throws DxfInputException, IOException {
+        while (true) {
+            Record a = in.next();
+            if (a == null) {
+                return;
+            }
+            if (a.type().equals(followerType)) {
+                if (target != null) {
+                    target.countOther(followerType);
+                }
+                continue;
+            }
+            if (!a.type().equals("SEQEND")) {
+                in.pushBack();
+            }
+            return;
+        }
+    }
+
+    private void skip(Provenance p, String message) {
+        notes.add(new ImportNote("error", "skipped_entity", file, p.line(), p.entityType(), p.handle(), p.layer(),
+                message));
+    }
+
+    private String badValue(Record r) {
+        String where = binary ? "byte " + r.badPosition() : "line " + (r.badPosition() + 1);
+        return "value of group code " + r.badCode() + " at " + where + " is not a number: '" + r.badText() + "'";
+    }
+
+    private static int lineOf(long position) {
+        return (int) Math.min(position, Integer.MAX_VALUE);
+    }
+}

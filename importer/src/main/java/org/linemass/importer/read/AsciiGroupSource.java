@@ -1,0 +1,222 @@
+package org.linemass.importer.read;
+
+import ch.randelshofer.fastdoubleparser.JavaDoubleParser;
+import java.io.IOException;
+import java.nio.channels.ReadableByteChannel;
+import org.linemass.importer.DxfInputException;
+
+/**
+ * Tokenizer for ASCII DXF: lines end in LF or CRLF; a group code line may be padded with spaces;
+ * 999 comments are skipped. Works on a byte window (never a whole-file String, no regular
+ * expressions); numbers are parsed straight from the bytes. A line longer than the configured
+ * limit, a code line that is not an integer, or a code without a value line is an input error.
+ */
+public final class AsciiGroupSource extends GroupSource {
+
+    private static final int MAX_EXCERPT = 40;
+
+    private final ByteWindow w;
+    private final int maxLineBytes;
+    private long lineNo;
+    private int lineStart;
+    private int lineEnd;
+    private int code;
+    private long codeLine;
+
+    private AsciiGroupSource(String file, ByteWindow w, int maxLineBytes) {
+        super(file);
+        this.w = w;
+        this.maxLineBytes = maxLineBytes;
+    }
+
+    public static AsciiGroupSource of(String file, byte[] content, int offset, int maxLineBytes) {
+        ByteWindow w = ByteWindow.of(content);
+        w.pos = offset;
+        return new AsciiGroupSource(file, w, maxLineBytes);
+    }
+
+    public static AsciiGroupSource of(String file, ReadableByteChannel channel, int maxLineBytes) {
+        int capacity = (int) Math.min(Integer.MAX_VALUE - 16L, Math.max(1 << 20, maxLineBytes + (1L << 16)));
+        return new AsciiGroupSource(file, ByteWindow.of(channel, capacity), maxLineBytes);
+    }
+
+    /** Reads one line into [lineStart, lineEnd); false at end of input. */
+    private boolean readLine() throws DxfInputException, IOException {
+        int i = w.pos;
+        while (true) {
+            byte[] b = w.buf;
+            int lim = w.limit;
+            while (i < lim && b[i] != '\n') {
+                i++;
+            }
+            if (i < lim || i - w.pos > maxLineBytes + 1) {
+                break;
+            }
+            int offset = i - w.pos;
+            boolean more = w.fill();
+            i = w.pos + offset;
+            if (!more) {
+                break;
+            }
+        }
+        int start = w.pos;
+        if (start >= w.limit) {
+            return false;
+        }
+        lineNo++;
+        if (i - start > maxLineBytes + 1) {
+            throw error(lineNo, "", "", "line longer than " + maxLineBytes + " bytes");
+        }
+        byte[] b = w.buf;
+        int end = i;
+        if (end > start && b[end - 1] == '\r') {
+            end--;
+        }
+        lineStart = start;
+        lineEnd = end;
+        w.pos = i < w.limit ? i + 1 : i;
+        return true;
+    }
+
+    @Override
+    public boolean next() throws DxfInputException, IOException {
+        while (true) {
+            if (!readLine()) {
+                return false;
+            }
+            codeLine = lineNo;
+            code = parseCode();
+            if (!readLine()) {
+                throw error(codeLine, "", "", "group code " + code
+                        + " has no value line (odd number of lines: file truncated?)");
+            }
+            if (code != 999) {
+                return true;
+            }
+        }
+    }
+
+    private int parseCode() throws DxfInputException {
+        byte[] b = w.buf;
+        int s = lineStart;
+        int e = lineEnd;
+        while (s < e && (b[s] == ' ' || b[s] == '\t')) {
+            s++;
+        }
+        while (e > s && (b[e - 1] == ' ' || b[e - 1] == '\t' || b[e - 1] == '\r')) {
+            e--;
+        }
+        boolean neg = false;
+        if (s < e && b[s] == '-') {
+            neg = true;
+            s++;
+        }
+        if (s == e || e - s > 6) {
+            throw badCode();
+        }
+        int v = 0;
+        for (int i = s; i < e; i++) {
+            int d = b[i] - '0';
+            if (d < 0 || d > 9) {
+                throw badCode();
+            }
+            v = v * 10 + d;
+        }
+        return neg ? -v : v;
+    }
+
+    private DxfInputException badCode() {
+        return error(lineNo, "", "", "expected a group code (an integer), got '" + excerpt() + "'");
+    }
+
+    @Override
+    public int code() {
+        return code;
+    }
+
+    @Override
+    public long position() {
+        return codeLine;
+    }
+
+    @Override
+    public boolean binary() {
+        return false;
+    }
+
+    @Override
+    public double doubleValue() {
+        byte[] b = w.buf;
+        int s = lineStart;
+        int e = lineEnd;
+        while (s < e && b[s] == ' ') {
+            s++;
+        }
+        while (e > s && (b[e - 1] == ' ' || b[e - 1] == '\t')) {
+            e--;
+        }
+        if (e - s > 0 && e - s <= 9 && isPlainInteger(b, s, e)) {
+            return parseSmallInt(b, s, e);
+        }
+        if (e == s) {
+            throw new NumberFormatException("empty");
+        }
+        return JavaDoubleParser.parseDouble(b, s, e - s);
+    }
+
+    private static boolean isPlainInteger(byte[] b, int s, int e) {
+        int i = b[s] == '-' || b[s] == '+' ? s + 1 : s;
+        if (i == e) {
+            return false;
+        }
+        for (; i < e; i++) {
+            if (b[i] < '0' || b[i] > '9') {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static double parseSmallInt(byte[] b, int s, int e) {
+        boolean neg = b[s] == '-';
+        int i = b[s] == '-' || b[s] == '+' ? s + 1 : s;
+        int v = 0;
+        for (; i < e; i++) {
+            v = v * 10 + (b[i] - '0');
+        }
+        return neg ? -v : v;
+    }
+
+    @Override
+    public String stringValue() {
+        return decoder.decode(w.buf, lineStart, lineEnd);
+    }
+
+    @Override
+    public String pooledValue() {
+        int e = lineEnd;
+        byte[] b = w.buf;
+        while (e > lineStart && (b[e - 1] == ' ' || b[e - 1] == '\t')) {
+            e--;
+        }
+        return decoder.pooled(b, lineStart, e);
+    }
+
+    @Override
+    public String valueExcerpt() {
+        return excerpt();
+    }
+
+    private String excerpt() {
+        int len = Math.min(lineEnd - lineStart, MAX_EXCERPT);
+        StringBuilder sb = new StringBuilder(len);
+        for (int i = lineStart; i < lineStart + len; i++) {
+            int c = w.buf[i] & 0xff;
+            sb.append(c >= 0x20 && c < 0x7f ? (char) c : '?');
+        }
+        if (lineEnd - lineStart > MAX_EXCERPT) {
+            sb.append("...");
+        }
+        return sb.toString();
+    }
+}

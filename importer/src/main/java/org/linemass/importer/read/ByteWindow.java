@@ -1,0 +1,89 @@
+package org.linemass.importer.read;
+
+import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.channels.ReadableByteChannel;
+
+/**
+ * A sliding window over the bytes of one input: either a whole in-memory array (no copy) or a
+ * channel read in chunks into a fixed buffer. Not thread-safe; owned by one tokenizer.
+ */
+final class ByteWindow {
+
+    byte[] buf;
+    /** Next unread index in {@link #buf}. */
+    int pos;
+    /** End of valid bytes in {@link #buf}. */
+    int limit;
+    /** Absolute offset in the input of {@code buf[0]}. */
+    long base;
+    private final ReadableByteChannel channel;
+    private boolean exhausted;
+
+    private ByteWindow(byte[] buf, int limit, ReadableByteChannel channel) {
+        this.buf = buf;
+        this.limit = limit;
+        this.channel = channel;
+        this.exhausted = channel == null;
+    }
+
+    static ByteWindow of(byte[] content) {
+        return new ByteWindow(content, content.length, null);
+    }
+
+    static ByteWindow of(ReadableByteChannel channel, int capacity) {
+        return new ByteWindow(new byte[capacity], 0, channel);
+    }
+
+    boolean exhausted() {
+        return exhausted;
+    }
+
+    int capacity() {
+        return buf.length;
+    }
+
+    /**
+     * Moves the unread bytes to the front and reads more. Returns false when nothing more could be
+     * read (end of input or buffer full).
+     */
+    boolean fill() throws IOException {
+        if (exhausted) {
+            return false;
+        }
+        if (pos > 0) {
+            System.arraycopy(buf, pos, buf, 0, limit - pos);
+            base += pos;
+            limit -= pos;
+            pos = 0;
+        }
+        if (limit == buf.length) {
+            return false;
+        }
+        ByteBuffer bb = ByteBuffer.wrap(buf, limit, buf.length - limit);
+        int total = 0;
+        while (bb.hasRemaining()) {
+            int n = channel.read(bb);
+            if (n < 0) {
+                exhausted = true;
+                break;
+            }
+            if (n == 0 && total > 0) {
+                break;
+            }
+            total += n;
+        }
+        limit = bb.position();
+        return total > 0;
+    }
+
+    /** Makes at least {@code n} unread bytes available if the input has them; returns whether it could. */
+    boolean ensure(int n) throws IOException {
+        while (limit - pos < n) {
+            if (!fill()) {
+                return limit - pos >= n;
+            }
+        }
+        return true;
+    }
+}

@@ -1,0 +1,121 @@
+package org.linemass.importer.read;
+
+import java.io.IOException;
+import java.nio.charset.Charset;
+import org.linemass.importer.DxfInputException;
+
+/**
+ * A stream of DXF (group code, value) pairs. After {@link #next()} returns true the current pair's
+ * code, position and value are available until the following call. Comments (999) are skipped.
+ * Values are converted on request; the caller decides the type from the group code.
+ */
+public abstract class GroupSource {
+
+    /** Value kinds by group code (DXF Reference, group code value types). */
+    public enum Kind { STRING, DOUBLE, INT, BOOL, BINARY }
+
+    private final String file;
+    final TextDecoder decoder = new TextDecoder();
+
+    private long lastErrorPosition;
+
+    GroupSource(String file) {
+        this.file = file;
+    }
+
+    public final String file() {
+        return file;
+    }
+
+    /** Advances to the next pair; false at the clean end of the input. */
+    public abstract boolean next() throws DxfInputException, IOException;
+
+    public abstract int code();
+
+    /** DXF line number of the current group code line (ASCII) or its byte offset (binary). */
+    public abstract long position();
+
+    public abstract boolean binary();
+
+    /** The current value as a number; NumberFormatException when it is not one. */
+    public abstract double doubleValue();
+
+    /** The current value decoded as text (trailing CR removed; no other trimming). */
+    public abstract String stringValue();
+
+    /** The current value decoded through a small pool, for names that repeat (types, layers). */
+    public abstract String pooledValue();
+
+    /** A short printable excerpt of the raw value for error messages. */
+    public abstract String valueExcerpt();
+
+    /** Sets the code page for strings of pre-2007 files (UTF-8 files ignore it). */
+    public final void charset(Charset cs) {
+        decoder.charset(cs);
+    }
+
+    /** Builds the input error for the current position, in the location style of this source. */
+    public final DxfInputException error(long where, String entityType, String handle, String problem) {
+        lastErrorPosition = where;
+        return error(file, binary(), where, entityType, handle, problem);
+    }
+
+    public static DxfInputException error(String file, boolean binary, long where, String entityType,
+            String handle, String problem) {
+        if (binary) {
+            return DxfInputException.atByte(file, where, entityType, handle, problem);
+        }
+        return new DxfInputException(file, (int) Math.min(where, Integer.MAX_VALUE), entityType, handle, problem);
+    }
+
+    /** Position passed to the most recent {@link #error(long, String, String, String)}. */
+    public final long lastErrorPosition() {
+        return lastErrorPosition;
+    }
+
+    /** Value kind of a group code. */
+    public static Kind kind(int code) {
+        if (code < 0) {
+            return Kind.STRING;
+        }
+        if (code <= 9) {
+            return Kind.STRING;
+        }
+        if (code <= 59) {
+            return Kind.DOUBLE;
+        }
+        if (code <= 99) {
+            return code >= 80 && code < 90 ? Kind.STRING : Kind.INT;
+        }
+        if (code >= 110 && code <= 149) {
+            return Kind.DOUBLE;
+        }
+        if ((code >= 160 && code <= 179) || (code >= 270 && code <= 289) || (code >= 370 && code <= 389)
+                || (code >= 400 && code <= 409) || (code >= 420 && code <= 429) || (code >= 440 && code <= 459)
+                || (code >= 1060 && code <= 1071)) {
+            return Kind.INT;
+        }
+        if ((code >= 210 && code <= 239) || (code >= 460 && code <= 469) || (code >= 1010 && code <= 1059)) {
+            return Kind.DOUBLE;
+        }
+        if (code >= 290 && code <= 299) {
+            return Kind.BOOL;
+        }
+        if ((code >= 310 && code <= 319) || code == 1004) {
+            return Kind.BINARY;
+        }
+        return Kind.STRING;
+    }
+
+    /** Byte width of an integer value in binary DXF. */
+    static int intWidth(int code) {
+        if ((code >= 90 && code <= 99) || (code >= 420 && code <= 429) || (code >= 440 && code <= 449)
+                || code == 1071) {
+            return 4;
+        }
+        if ((code >= 160 && code <= 169) || (code >= 450 && code <= 459)) {
+            return 8;
+        }
+        return 2;
+    }
+}

@@ -1,0 +1,129 @@
+package org.linemass.importer.read;
+
+import java.util.Arrays;
+
+/**
+ * The groups of one DXF record (an entity, a table entry, a section header): everything from its
+ * {@code 0} group up to the next {@code 0}. Numeric values are held as doubles (integers exactly),
+ * names and texts as strings; group codes whose values the importer never uses keep no value.
+ * Mutable and reused by {@link RecordReader}; not thread-safe.
+ */
+public final class Record {
+
+    String type = "";
+    long position;
+    String handle = "";
+    String layer = "0";
+    int n;
+    int[] codes = new int[64];
+    double[] nums = new double[64];
+    String[] strs = new String[64];
+    long badPosition = -1;
+    int badCode;
+    String badText = "";
+    boolean endOfInput;
+
+    void clear() {
+        if (n > 0) {
+            Arrays.fill(strs, 0, n, null);
+        }
+        n = 0;
+        handle = "";
+        layer = "0";
+        badPosition = -1;
+        endOfInput = false;
+    }
+
+    void add(int code, double num, String str) {
+        if (n == codes.length) {
+            int cap = n * 2;
+            codes = Arrays.copyOf(codes, cap);
+            nums = Arrays.copyOf(nums, cap);
+            strs = Arrays.copyOf(strs, cap);
+        }
+        codes[n] = code;
+        nums[n] = num;
+        strs[n] = str;
+        n++;
+    }
+
+    /** The record type: the value of its 0 group (SECTION, LINE, VERTEX...). */
+    public String type() {
+        return type;
+    }
+
+    /** DXF line number (or binary byte offset) of the record's 0 group. */
+    public long position() {
+        return position;
+    }
+
+    public String handle() {
+        return handle;
+    }
+
+    public String layer() {
+        return layer;
+    }
+
+    /** True when the input ended right after this record (no following 0 group). */
+    public boolean endOfInput() {
+        return endOfInput;
+    }
+
+    public int size() {
+        return n;
+    }
+
+    public int code(int i) {
+        return codes[i];
+    }
+
+    public double num(int i) {
+        return nums[i];
+    }
+
+    public String str(int i) {
+        return strs[i];
+    }
+
+    /** Index of the first group with {@code code} at or after {@code from}, or -1. */
+    public int indexOf(int code, int from) {
+        for (int i = from; i < n; i++) {
+            if (codes[i] == code) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    public int indexOf(int code) {
+        return indexOf(code, 0);
+    }
+
+    public double num(int code, double dflt) {
+        int i = indexOf(code);
+        return i < 0 ? dflt : nums[i];
+    }
+
+    public String str(int code, String dflt) {
+        int i = indexOf(code);
+        return i < 0 || strs[i] == null ? dflt : strs[i];
+    }
+
+    /** True when some numeric value of this record could not be read as a number. */
+    public boolean hasBadValue() {
+        return badPosition >= 0;
+    }
+
+    public long badPosition() {
+        return badPosition;
+    }
+
+    public int badCode() {
+        return badCode;
+    }
+
+    public String badText() {
+        return badText;
+    }
+}
