@@ -51,6 +51,41 @@ public record Moments(double mass, Vec3 centroid, Sym3 covariance, double errorB
                 errorBound * scale);
     }
 
+    /**
+     * The moments of the material left when {@code o} (a part of this curve) is taken away: the
+     * inverse of {@link #plus}, {@code m = ma - mb}, {@code g = (ma ga - mb gb) / m},
+     * {@code C = Ca - Cb - (ma mb / m)(gb - ga)(gb - ga)^T}. Error bounds add (removal is not
+     * exact either). Removing everything, to within rounding ({@link #REMOVAL_SLACK} relative plus
+     * both error bounds), gives a zero-mass result at this centroid.
+     *
+     * @throws IllegalArgumentException when {@code o} has clearly more mass than this
+     */
+    public Moments minus(Moments o) {
+        if (o.mass == 0) {
+            return new Moments(mass, centroid, covariance.minus(o.covariance), errorBound + o.errorBound);
+        }
+        double m = mass - o.mass;
+        double slack = REMOVAL_SLACK * Math.max(Math.abs(mass), Math.abs(o.mass)) + errorBound + o.errorBound;
+        if (m <= slack) {
+            if (m < -slack) {
+                throw new IllegalArgumentException("cannot remove mass " + o.mass + " from mass " + mass);
+            }
+            return new Moments(0, centroid, Sym3.ZERO, errorBound + o.errorBound);
+        }
+        Vec3 d = o.centroid.minus(centroid);
+        Vec3 g = centroid.plusScaled(d, -o.mass / m);
+        Sym3 c = covariance.minus(o.covariance).minus(Sym3.outer(d).times(mass * o.mass / m));
+        return new Moments(m, g, c, errorBound + o.errorBound);
+    }
+
+    /** Relative rounding slack of {@link #minus} (64 units of double rounding). */
+    public static final double REMOVAL_SLACK = 64 * Math.ulp(1.0);
+
+    /** The moments of the same curve seen with its centroid moved by {@code shift} (a pure translation). */
+    public Moments translated(Vec3 shift) {
+        return new Moments(mass, centroid.plus(shift), covariance, errorBound);
+    }
+
     /** Second moment about the centroid in inertia form: {@code trace(C) I - C}. */
     public Sym3 inertia() {
         return covariance.inertiaFromCovariance();

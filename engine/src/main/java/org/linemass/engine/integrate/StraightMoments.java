@@ -1,0 +1,31 @@
+package org.linemass.engine.integrate;
+
+import org.linemass.engine.moments.Moments;
+import org.linemass.engine.moments.Sym3;
+import org.linemass.geometry.Straight;
+import org.linemass.geometry.Vec3;
+
+/**
+ * Closed-form length moments of a straight segment (unit density): {@code L = |b - a|},
+ * {@code g = (a + b) / 2}, {@code C = (L / 12)(b - a)(b - a)^T} (thin rod, e.g. Beer and Johnston,
+ * Vector Mechanics, ch. 9). The error bound is {@link #ROUNDING_ULPS} units of double rounding times
+ * the length. A zero-length segment has mass 0 at its point.
+ */
+public final class StraightMoments {
+
+    /** Rounding bound of the closed forms, in units of double rounding of the length. */
+    public static final double ROUNDING_ULPS = 8;
+
+    private StraightMoments() {
+    }
+
+    public static Moments of(Straight s) {
+        Vec3 d = s.b().minus(s.a());
+        double length = d.norm();
+        Vec3 g = s.a().plusScaled(d, 0.5);
+        if (length == 0) {
+            return new Moments(0, g, Sym3.ZERO, 0);
+        }
+        return new Moments(length, g, Sym3.outer(d).times(length / 12), ROUNDING_ULPS * Math.ulp(1.0) * length);
+    }
+}

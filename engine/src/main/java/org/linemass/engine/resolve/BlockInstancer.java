@@ -1,0 +1,215 @@
+package org.linemass.engine.resolve;
+
+import java.util.ArrayDeque;
+import java.util.Deque;
+import java.util.HashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.Set;
+import org.linemass.drawing.Block;
+import org.linemass.drawing.Drawing;
+import org.linemass.drawing.Insert;
+import org.linemass.engine.integrate.LinearDensity;
+import org.linemass.engine.integrate.MomentIntegrator;
+import org.linemass.engine.moments.Moments;
+import org.linemass.geometry.Affine;
+import org.linemass.geometry.Segment;
+import org.linemass.geometry.Vec3;
+
+/**
+ * Per-layer length moments of a whole drawing by instancing: each (block, inherited layer) pair is
+ * integrated once in block coordinates and its moments are transformed by every rigid insert
+ * ({@link Moments#transformedBySimilarity}, mirrors allowed); MINSERT arrays are summed in closed
+ * form ({@link LayerTotals#arrayed}). A block bomb whose expansion has 10^12 segments therefore
+ * costs the number of distinct blocks. Inserts whose map is not a similarity are integrated on the
+ * transformed curves (arcs become elliptical arcs), at most {@code directBudget} segment copies in
+ * all; beyond that the remaining copies are left out and an incompleteness reason is recorded.
+ * Nesting is walked with an explicit stack, so any depth works; an insert that would place a block
+ * inside itself is skipped and recorded. Single use, not thread-safe.
+ */
+final class BlockInstancer {
+
+    /** Relative tolerance for recognising a similarity (rotation, mirror, uniform scale). */
+    static final double SIMILARITY_TOLERANCE = 1e-12;
+
+    private final Drawing drawing;
+    private final LayerRules rules;
+    private final double relative;
+    private final Map<String, Moments[]> segmentMoments = new HashMap<>();
+    private final Map<Key, LayerTotals> memo = new HashMap<>();
+    private final Map<String, Integer> active = new HashMap<>();
+    private final Set<String> reasons = new LinkedHashSet<>();
+    private long directBudget;
+
+    private record Key(String block, String inherited) {
+    }
+
+    private static final class Frame {
+        final Block block;
+        final String inherited;
+        final Affine map;
+        final Key memoKey;
+        final Frame parent;
+        final LayerTotals.Builder acc = new LayerTotals.Builder();
+        int nextInsert;
+        boolean segmentsDone;
+        LayerTotals childResult;
+
+        Frame(Block block, String inherited, Affine map, Key memoKey, Frame parent) {
+            this.block = block;
+            this.inherited = inherited;
+            this.map = map;
+            this.memoKey = memoKey;
+            this.parent = parent;
+        }
+    }
+
+    BlockInstancer(Drawing drawing, LayerRules rules, double relative, long directBudget) {
+        this.drawing = drawing;
+        this.rules = rules;
+        this.relative = relative;
+        this.directBudget = directBudget;
+    }
+
+    /** Reasons why some content was left out (cycles, unknown blocks, budget), in the order found. */
+    List<String> reasons() {
+        return List.copyOf(reasons);
+    }
+
+    /** Moments of the model space content under {@code world}, a similarity of scale {@code scale}. */
+    LayerTotals modelSpace(Affine world, double scale) {
+        Block model = drawing.modelSpace();
+        if (model == null) {
+            return LayerTotals.EMPTY;
+        }
+        return inBlockFrame(model, null).transformed(world, scale);
+    }
+
+    private LayerTotals inBlockFrame(Block block, String inherited) {
+        Key key = new Key(block.name(), inherited);
+        LayerTotals done = memo.get(key);
+        if (done != null) {
+            return done;
+        }
+        run(new Frame(block, inherited, null, key, null));
+        return memo.get(key);
+    }
+
+    private void run(Frame root) {
+        Deque<Frame> stack = new ArrayDeque<>();
+        push(stack, root);
+        while (!stack.isEmpty()) {
+            Frame f = stack.peek();
+            if (!f.segmentsDone) {
+                addSegments(f);
+                f.segmentsDone = true;
+            }
+            List<Insert> inserts = f.block.inserts();
+            if (f.nextInsert < inserts.size()) {
+                Insert ins = inserts.get(f.nextInsert);
+                if (step(stack, f, ins)) {
+                    f.nextInsert++;
+                }
+                continue;
+            }
+            stack.pop();
+            active.merge(f.block.name(), -1, Integer::sum);
+            LayerTotals result = f.acc.build();
+            if (f.memoKey != null) {
+                memo.put(f.memoKey, result);
+            } else if (f.parent != null) {
+                f.parent.childResult = result;
+            }
+        }
+    }
+
+    private void push(Deque<Frame> stack, Frame f) {
+        stack.push(f);
+        active.merge(f.block.name(), 1, Integer::sum);
+    }
+
+    private boolean onStack(String block) {
+        return active.getOrDefault(block, 0) > 0;
+    }
+
+    /** Handles one insert of frame f; false when a child frame was pushed and the insert must be revisited. */
+    private boolean step(Deque<Frame> stack, Frame f, Insert ins) {
+        String inherited = LayerRules.effective(ins.source().layer(), f.inherited);
+        if (!rules.insertShown(inherited)) {
+            return true;
+        }
+        Block child = drawing.blocks().get(ins.blockName());
+        if (child == null) {
+            reasons.add("insert of undefined block " + ins.blockName() + " (" + ins.source().describe() + ") left out");
+            return true;
+        }
+        Affine composite = f.map == null ? ins.placement() : ins.placement().andThen(f.map);
+        Vec3 cs = f.map == null ? ins.columnStep() : f.map.applyLinear(ins.columnStep());
+        Vec3 rs = f.map == null ? ins.rowStep() : f.map.applyLinear(ins.rowStep());
+        LayerTotals sub;
+        if (f.childResult != null) {
+            sub = f.childResult;
+            f.childResult = null;
+        } else {
+            OptionalDouble s = composite.similarityScale(SIMILARITY_TOLERANCE);
+            if (onStack(child.name())) {
+                reasons.add("block " + child.name() + " inserts itself (" + ins.source().describe()
+                        + "); that insert was left out");
+                return true;
+            }
+            if (s.isPresent()) {
+                Key key = new Key(child.name(), inherited);
+                LayerTotals cached = memo.get(key);
+                if (cached == null) {
+                    push(stack, new Frame(child, inherited, null, key, f));
+                    return false;
+                }
+                sub = cached.transformed(composite, s.getAsDouble());
+            } else {
+                push(stack, new Frame(child, inherited, composite, null, f));
+                return false;
+            }
+        }
+        f.acc.addAll(sub.arrayed(ins.columns(), ins.rows(), cs, rs));
+        return true;
+    }
+
+    private void addSegments(Frame f) {
+        List<Segment> segs = f.block.segments();
+        Moments[] cached = f.map == null ? segmentMoments(f.block) : null;
+        for (int i = 0; i < segs.size(); i++) {
+            Segment seg = segs.get(i);
+            String layer = LayerRules.effective(seg.source().layer(), f.inherited);
+            if (!rules.counts(layer)) {
+                continue;
+            }
+            if (cached != null) {
+                f.acc.add(layer, cached[i], 1);
+            } else if (directBudget > 0) {
+                directBudget--;
+                f.acc.add(layer, integrate(seg.transformed(f.map)), 1);
+            } else {
+                reasons.add("too many segments under non-uniformly scaled inserts; some copies of block "
+                        + f.block.name() + " were left out");
+            }
+        }
+    }
+
+    private Moments[] segmentMoments(Block block) {
+        return segmentMoments.computeIfAbsent(block.name(), k -> {
+            List<Segment> segs = block.segments();
+            Moments[] m = new Moments[segs.size()];
+            for (int i = 0; i < m.length; i++) {
+                m[i] = integrate(segs.get(i));
+            }
+            return m;
+        });
+    }
+
+    private Moments integrate(Segment seg) {
+        return MomentIntegrator.integrate(seg, LinearDensity.UNIT, 0, relative,
+                MomentIntegrator.DEFAULT_MAX_EVALUATIONS).moments();
+    }
+}
