@@ -1,10 +1,47 @@
 package org.linemass.engine.pieces;
 
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
 import org.linemass.engine.Tolerances;
+import org.linemass.engine.pieces.checks.BendCheck;
+import org.linemass.engine.pieces.checks.BendFinder;
+import org.linemass.engine.pieces.checks.ContactCheck;
+import org.linemass.engine.pieces.checks.Findings;
+import org.linemass.engine.pieces.checks.GapCheck;
+import org.linemass.engine.pieces.checks.SectionCache;
+import org.linemass.engine.pieces.checks.SizeCheck;
+import org.linemass.engine.pieces.dedup.DedupResult;
+import org.linemass.engine.pieces.dedup.Deduplicator;
+import org.linemass.engine.pieces.geom.Curves;
+import org.linemass.engine.pieces.join.Chain;
+import org.linemass.engine.pieces.join.JoinResult;
+import org.linemass.engine.pieces.join.Joiner;
+import org.linemass.engine.pieces.marks.Grouper;
+import org.linemass.engine.result.Bend;
+import org.linemass.engine.result.Finding;
+import org.linemass.engine.section.Section;
+import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
 
-/** Joins world segments into pieces, checks the drawing and groups identical pieces. */
+/**
+ * Joins world segments into pieces, checks the drawing and groups identical pieces. The stages,
+ * in order: material drawn twice is removed ({@link Deduplicator}); zero-length segments are
+ * reported and dropped, segments shorter than the join tolerance are reported and kept as pieces
+ * of their own ({@link SizeCheck}); the rest are joined end to end on each layer
+ * ({@link Joiner}); each piece gets its bends ({@link BendFinder}, {@link BendCheck}); free ends
+ * are checked for gaps ({@link GapCheck}) and pieces for T-junctions and crossings
+ * ({@link ContactCheck}); identical pieces are grouped ({@link Grouper}). Every stage uses a hash
+ * grid or an STR-tree, so the whole costs O(n log n) for n segments.
+ *
+ * <p>Pieces are listed by layer, then start point, then end point (lexicographic), findings by
+ * kind, layer and place, so the output does not depend on the order or direction of the input
+ * segments. An empty input gives an empty analysis.
+ */
 public final class PieceAnalyzer {
 
     private PieceAnalyzer() {
@@ -12,9 +49,81 @@ public final class PieceAnalyzer {
 
     /**
      * @param world segments in world coordinates and metres, layer in each provenance
+     * @param tol the drawing's tolerances
+     * @param sections the section of each layer
+     * @param mirrorGrouping whether mirror images count as identical pieces
      */
     public static PieceAnalysis analyze(List<Segment> world, Tolerances tol, SectionLookup sections,
             boolean mirrorGrouping) {
-        throw new UnsupportedOperationException("pieces not written yet");
+        Objects.requireNonNull(world, "world segments");
+        Objects.requireNonNull(tol, "tolerances");
+        Objects.requireNonNull(sections, "section lookup");
+        SectionCache cache = new SectionCache(sections);
+        DedupResult dedup = Deduplicator.run(world, tol.joinM(), cache);
+        List<Finding> findings = new ArrayList<>(dedup.findings());
+
+        List<Segment> joinable = new ArrayList<>(dedup.kept().size());
+        List<Piece> pieces = new ArrayList<>();
+        for (Segment s : dedup.kept()) {
+            double len = Curves.length(s);
+            Finding f = SizeCheck.check(s, len, tol);
+            if (f != null) {
+                findings.add(f);
+                if (len > tol.noiseM()) {
+                    pieces.add(piece(List.of(s), false, cache, tol, findings));
+                }
+            } else {
+                joinable.add(s);
+            }
+        }
+        Map<String, Integer> layerIds = new HashMap<>();
+        int[] layerOf = new int[joinable.size()];
+        for (int i = 0; i < layerOf.length; i++) {
+            layerOf[i] = layerIds.computeIfAbsent(joinable.get(i).source().layer(), k -> layerIds.size());
+        }
+        JoinResult joined = Joiner.join(joinable, layerOf, tol);
+        findings.addAll(joined.findings());
+        double[] chainLength = new double[joined.chains().size()];
+        for (int c = 0; c < chainLength.length; c++) {
+            Chain chain = joined.chains().get(c);
+            for (Segment s : chain.segments()) {
+                chainLength[c] += Curves.length(s);
+            }
+            pieces.add(piece(chain.segments(), chain.closed(), cache, tol, findings));
+        }
+        findings.addAll(GapCheck.check(joinable, layerOf, joined.freeEnd(), joined.endPoint(),
+                joined.chainOfSegment(), chainLength, tol));
+        findings.addAll(ContactCheck.check(joinable, layerOf, joined.freeEnd(), joined.chainOfSegment(), tol));
+
+        pieces.sort(PIECE_ORDER);
+        List<String> keys = new ArrayList<>(pieces.size());
+        for (Piece p : pieces) {
+            keys.add(cache.forLayer(p.layer()).map(s -> "section:" + s.id()).orElse("layer:" + p.layer()));
+        }
+        List<List<Integer>> groups = Grouper.group(pieces, keys, tol, mirrorGrouping);
+        findings.sort(Findings.ORDER);
+        return new PieceAnalysis(pieces, findings, dedup.removed(), groups);
     }
+
+    private static Piece piece(List<Segment> segments, boolean closed, SectionCache cache, Tolerances tol,
+            List<Finding> findings) {
+        String layer = segments.get(0).source().layer();
+        Optional<Section> section = cache.forLayer(layer);
+        List<Bend> bends = BendFinder.bends(segments, closed, section, tol.angleRad(), tol.joinM());
+        if (!bends.isEmpty() && section.isPresent()) {
+            List<Provenance> sources = new ArrayList<>();
+            for (Segment s : segments) {
+                sources.add(s.source());
+            }
+            findings.addAll(BendCheck.check(layer, bends, section.get(), sources));
+        }
+        return new Piece(layer, segments, closed, bends);
+    }
+
+    /** Layer, then start point, then end point, then segment count. */
+    static final Comparator<Piece> PIECE_ORDER = Comparator.comparing(Piece::layer)
+            .thenComparing(p -> p.segments().get(0).start(), Curves::compare)
+            .thenComparing(p -> p.segments().get(p.segments().size() - 1).end(), Curves::compare)
+            .thenComparing(p -> !p.closed())
+            .thenComparingInt(p -> p.segments().size());
 }

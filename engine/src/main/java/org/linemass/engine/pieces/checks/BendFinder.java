@@ -1,0 +1,86 @@
+package org.linemass.engine.pieces.checks;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.linemass.engine.pieces.geom.Curves;
+import org.linemass.engine.result.Bend;
+import org.linemass.engine.section.Section;
+import org.linemass.geometry.CircularArc;
+import org.linemass.geometry.Segment;
+import org.linemass.geometry.Vec3;
+
+/**
+ * The bends of one oriented run of segments. A sharp corner is where the tangent turns by more
+ * than the angle tolerance between consecutive segments (and between the last and the first of a
+ * closed run): a bend with that angle and no radius. Every circular arc is a bend with its sweep
+ * angle and centre-line radius; consecutive arcs on the same circle meeting tangentially are one
+ * bend. The inside radius is the centre-line radius minus half the diameter for round sections,
+ * and the centre-line radius when the section's diameter is unknown (no section or not round).
+ * Elliptical arcs and splines are shaped curves, not bends.
+ */
+public final class BendFinder {
+
+    private BendFinder() {
+    }
+
+    public static List<Bend> bends(List<Segment> run, boolean closed, Optional<Section> section, double angleRad,
+            double joinM) {
+        List<Bend> out = new ArrayList<>();
+        int n = run.size();
+        Double halfDiameter = section.map(Section::diameterM).map(d -> d / 2).orElse(null);
+        int i = 0;
+        while (i < n) {
+            Segment s = run.get(i);
+            int last = i;
+            if (s instanceof CircularArc arc) {
+                double sweep = arc.sweep();
+                while (last + 1 < n && run.get(last + 1) instanceof CircularArc next && sameCircle(arc, next, joinM)
+                        && corner(run.get(last), next) <= angleRad) {
+                    sweep += next.sweep();
+                    last++;
+                }
+                Vec3 at = middle(run, i, last);
+                double r = arc.radius();
+                double inside = halfDiameter == null ? r : r - halfDiameter;
+                out.add(new Bend(at, Math.toDegrees(sweep), inside, r));
+            }
+            boolean hasNext = last + 1 < n || (closed && n > 1);
+            if (hasNext) {
+                Segment next = run.get((last + 1) % n);
+                double a = corner(run.get(last), next);
+                if (a > angleRad) {
+                    out.add(new Bend(run.get(last).end(), Math.toDegrees(a), null, null));
+                }
+            }
+            i = last + 1;
+        }
+        return out;
+    }
+
+    /** Turning angle between the end tangent of {@code a} and the start tangent of {@code b}. */
+    public static double corner(Segment a, Segment b) {
+        return Curves.angleBetween(Curves.endTangent(a), Curves.startTangent(b));
+    }
+
+    private static boolean sameCircle(CircularArc a, CircularArc b, double tol) {
+        return a.centre().distance(b.centre()) <= tol && Math.abs(a.radius() - b.radius()) <= tol;
+    }
+
+    private static Vec3 middle(List<Segment> run, int from, int to) {
+        double total = 0;
+        for (int k = from; k <= to; k++) {
+            total += ((CircularArc) run.get(k)).length();
+        }
+        double half = total / 2;
+        for (int k = from; k <= to; k++) {
+            CircularArc a = (CircularArc) run.get(k);
+            if (half <= a.length() || k == to) {
+                double t = a.t0() + Math.min(1, half / a.length()) * a.sweep();
+                return a.point(t);
+            }
+            half -= a.length();
+        }
+        return run.get(from).start();
+    }
+}

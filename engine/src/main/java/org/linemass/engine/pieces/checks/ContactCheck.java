@@ -1,0 +1,169 @@
+package org.linemass.engine.pieces.checks;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.linemass.engine.Tolerances;
+import org.linemass.engine.pieces.geom.ClosestPoints;
+import org.linemass.engine.pieces.geom.Contact;
+import org.linemass.engine.pieces.geom.PlanarCrossing;
+import org.linemass.engine.pieces.geom.SegmentIndex;
+import org.linemass.engine.result.Finding;
+import org.linemass.engine.result.FindingKind;
+import org.linemass.engine.result.Severity;
+import org.linemass.geometry.Provenance;
+import org.linemass.geometry.Segment;
+import org.linemass.geometry.Straight;
+import org.linemass.geometry.Vec3;
+
+/**
+ * Contacts between pieces on the same layer, found from STR-tree candidates and decided on the
+ * true curves ({@link ClosestPoints}; for two straights in one horizontal plane the JTS robust
+ * intersector decides a proper crossing exactly):
+ * <ul>
+ * <li>{@code t_junction} (info): a free end within the join tolerance of another segment's
+ * interior (farther than the tolerance from that segment's ends); once per free end.</li>
+ * <li>{@code crossing} (info): two pieces touch where neither has a free end and at least one is
+ * in its interior (no shared vertex); once per pair of pieces and place.</li>
+ * <li>{@code self_crossing} (warning): the same for two parts of one piece.</li>
+ * </ul>
+ * In welded wire products each T-junction and crossing is a weld; every message carries the
+ * drawing's totals. Only the closest approach of each pair of segments is examined, so a curve
+ * meeting another twice is reported once.
+ */
+public final class ContactCheck {
+
+    private ContactCheck() {
+    }
+
+    private record Hit(String kind, Vec3 at, int a, int b) {
+    }
+
+    public static List<Finding> check(List<Segment> segments, int[] layerOf, boolean[] free, int[] chainOf,
+            Tolerances tol) {
+        double j = tol.joinM();
+        SegmentIndex index = new SegmentIndex(segments, j);
+        List<Hit> hits = new ArrayList<>();
+        for (int e = 0; e < free.length; e++) {
+            if (free[e]) {
+                Hit h = tJunction(segments, layerOf, index, e, j);
+                if (h != null) {
+                    hits.add(h);
+                }
+            }
+        }
+        Map<Long, List<Vec3>> seen = new HashMap<>();
+        for (int i = 0; i < segments.size(); i++) {
+            final int ii = i;
+            Segment a = segments.get(i);
+            index.query(index.box(i), k -> {
+                if (k <= ii || layerOf[k] != layerOf[ii]) {
+                    return;
+                }
+                Vec3 at = crossing(a, segments.get(k), 2 * ii, 2 * k, free, j);
+                if (at == null) {
+                    return;
+                }
+                int ca = Math.min(chainOf[ii], chainOf[k]);
+                int cb = Math.max(chainOf[ii], chainOf[k]);
+                List<Vec3> places = seen.computeIfAbsent(((long) ca << 32) | cb, x -> new ArrayList<>());
+                for (Vec3 p : places) {
+                    if (p.distance(at) <= j) {
+                        return;
+                    }
+                }
+                places.add(at);
+                hits.add(new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, at, ii, k));
+            });
+        }
+        long tees = hits.stream().filter(h -> h.kind().equals(FindingKind.T_JUNCTION)).count();
+        long crossings = hits.stream().filter(h -> h.kind().equals(FindingKind.CROSSING)).count();
+        String totals = String.format(Locale.ROOT, " Drawing total: %d T-junction%s and %d crossing%s.", tees,
+                tees == 1 ? "" : "s", crossings, crossings == 1 ? "" : "s");
+        List<Finding> out = new ArrayList<>(hits.size());
+        for (Hit h : hits) {
+            Provenance pa = segments.get(h.a()).source();
+            Provenance pb = segments.get(h.b()).source();
+            String message;
+            Severity sev = Severity.INFO;
+            switch (h.kind()) {
+                case FindingKind.T_JUNCTION -> message = "The end of " + pa.describe() + " touches "
+                        + pb.describe() + " away from its ends (a T-junction; a weld in welded mesh)." + totals;
+                case FindingKind.CROSSING -> message = pa.describe() + " and " + pb.describe()
+                        + " cross without a shared vertex (a weld in welded mesh)." + totals;
+                default -> {
+                    sev = Severity.WARNING;
+                    message = "The piece through " + pa.describe() + " crosses itself at " + pb.describe() + ".";
+                }
+            }
+            out.add(Findings.of(h.kind(), sev, h.at(), null, pa.layer(), List.of(pa, pb), null, message));
+        }
+        return out;
+    }
+
+    private static Hit tJunction(List<Segment> segments, int[] layerOf, SegmentIndex index, int end, double tol) {
+        int own = end >> 1;
+        Segment s = segments.get(own);
+        Vec3 p = (end & 1) == 0 ? s.start() : s.end();
+        org.linemass.geometry.Box3 box = new org.linemass.geometry.Box3(p, p).expandedBy(tol);
+        double[] best = {Double.POSITIVE_INFINITY};
+        int[] who = {-1};
+        Vec3[] at = {null};
+        index.query(box, k -> {
+            if (k == own || layerOf[k] != layerOf[own]) {
+                return;
+            }
+            Segment c = segments.get(k);
+            Contact ct = ClosestPoints.toPoint(c, p);
+            if (ct.distance() > tol || ct.pa().distance(c.start()) <= tol || ct.pa().distance(c.end()) <= tol) {
+                return;
+            }
+            if (ct.distance() < best[0] || (ct.distance() == best[0] && k < who[0])) {
+                best[0] = ct.distance();
+                who[0] = k;
+                at[0] = ct.pa();
+            }
+        });
+        return who[0] < 0 ? null : new Hit(FindingKind.T_JUNCTION, p, own, who[0]);
+    }
+
+    /** Where a and b cross without a shared vertex, or null. */
+    private static Vec3 crossing(Segment a, Segment b, int endsA, int endsB, boolean[] free, double tol) {
+        if (a instanceof Straight sa && b instanceof Straight sb && PlanarCrossing.applies(sa, sb)) {
+            Vec3 x = PlanarCrossing.properCrossing(sa, sb);
+            if (x != null) {
+                boolean nearA = x.distance(sa.a()) <= tol || x.distance(sa.b()) <= tol;
+                boolean nearB = x.distance(sb.a()) <= tol || x.distance(sb.b()) <= tol;
+                if (!nearA && !nearB) {
+                    return x;
+                }
+            }
+        }
+        Contact c = ClosestPoints.between(a, b);
+        if (c.distance() > tol) {
+            return null;
+        }
+        int nearA = nearEnd(a, c.pa(), tol);
+        int nearB = nearEnd(b, c.pb(), tol);
+        if (nearA >= 0 && nearB >= 0) {
+            return null;
+        }
+        if (nearA >= 0 && free[endsA + nearA]) {
+            return null;
+        }
+        if (nearB >= 0 && free[endsB + nearB]) {
+            return null;
+        }
+        return c.middle();
+    }
+
+    /** 0 when p is within tol of the start, 1 of the end, -1 otherwise. */
+    private static int nearEnd(Segment s, Vec3 p, double tol) {
+        if (p.distance(s.start()) <= tol) {
+            return 0;
+        }
+        return p.distance(s.end()) <= tol ? 1 : -1;
+    }
+}

@@ -1,0 +1,35 @@
+package org.linemass.engine.pieces.checks;
+
+import java.util.List;
+import org.linemass.engine.Tolerances;
+import org.linemass.engine.result.Finding;
+import org.linemass.engine.result.FindingKind;
+import org.linemass.engine.result.Severity;
+import org.linemass.geometry.Segment;
+
+/**
+ * Classifies a segment by length: {@code zero_length} (warning) at or below
+ * {@link Tolerances#noiseM()}, {@code tiny_segment} (warning) below {@link Tolerances#joinM()},
+ * otherwise nothing.
+ */
+public final class SizeCheck {
+
+    private SizeCheck() {
+    }
+
+    /** The finding for a segment of the given length, or null when it is long enough. */
+    public static Finding check(Segment s, double lengthM, Tolerances tol) {
+        if (lengthM <= tol.noiseM()) {
+            return Findings.of(FindingKind.ZERO_LENGTH, Severity.WARNING, s.start(), lengthM, s.source().layer(),
+                    List.of(s.source()), null, s.source().describe() + " has no length (its ends coincide); it"
+                            + " carries no material and is left out of the pieces.");
+        }
+        if (lengthM < tol.joinM()) {
+            return Findings.of(FindingKind.TINY_SEGMENT, Severity.WARNING, s.point(0.5 * (s.tStart() + s.tEnd())),
+                    lengthM, s.source().layer(), List.of(s.source()), null, s.source().describe() + " is only "
+                            + Findings.mm(lengthM) + " long, shorter than the join tolerance "
+                            + Findings.mm(tol.joinM()) + "; it is kept as a piece of its own.");
+        }
+        return null;
+    }
+}

@@ -1,0 +1,18 @@
+package org.linemass.engine.pieces.dedup;
+
+import java.util.List;
+import org.linemass.engine.result.Finding;
+import org.linemass.geometry.Segment;
+
+/**
+ * The segments to build pieces from (each drawn material counted once), the sub-curves removed
+ * because they were drawn before (with the removed copy's provenance), and the findings.
+ */
+public record DedupResult(List<Segment> kept, List<Segment> removed, List<Finding> findings) {
+
+    public DedupResult {
+        kept = List.copyOf(kept);
+        removed = List.copyOf(removed);
+        findings = List.copyOf(findings);
+    }
+}
