@@ -11,7 +11,7 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
- * {@code linemass demo}: copies the built-in demo drawing and its layer assignments to a new
+ * {@code linemass demo}: copies the built-in demo drawing, its section table and its layer assignments to a new
  * temporary folder, runs {@code check} on it with the HTML and JSON reports written beside it,
  * and prints where they are. Exits 0 when done: the demo's findings are deliberate.
  */
@@ -23,7 +23,8 @@ final class DemoCommand implements Callable<Integer> {
     /** Classpath folder of the demo files. */
     static final String RESOURCE_DIR = "/org/linemass/app/demo/";
     static final String DRAWING = "garden-planter.dxf";
-    static final String ASSIGNMENTS = "garden-planter-sections.csv";
+    static final String SECTION_TABLE = "garden-planter-section-table.csv";
+    static final String ASSIGNMENTS = "garden-planter-layers.csv";
 
     @Mixin
     CommonOptions common;
@@ -42,8 +43,10 @@ final class DemoCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         Path dir = into != null ? Files.createDirectories(into) : Files.createTempDirectory("linemass-demo-");
         Path dxf = copy(DRAWING, dir);
+        Path table = copy(SECTION_TABLE, dir);
         Path csv = copy(ASSIGNMENTS, dir);
         DrawingOptions d = new DrawingOptions();
+        d.sectionTable = table;
         d.assignFiles = List.of(csv);
         OutputOptions o = new OutputOptions();
         o.html = dir.resolve("garden-planter-report.html").toString();
