@@ -132,8 +132,8 @@ public final class ConsoleReport {
         int e = n.getOrDefault(Severity.ERROR, 0);
         int w = n.getOrDefault(Severity.WARNING, 0);
         int i = n.getOrDefault(Severity.INFO, 0);
-        return (e > 0 ? paint("31", e + " errors") : "0 errors") + ", " + (w > 0 ? paint("33", w + " warnings")
-                : "0 warnings") + ", " + i + " notes";
+        return (e > 0 ? paint("31", count(e, "error")) : count(e, "error")) + ", "
+                + (w > 0 ? paint("33", count(w, "warning")) : count(w, "warning")) + ", " + count(i, "note");
     }
 
     private void bom(DrawingResult r, PrintWriter out) {
@@ -186,6 +186,10 @@ public final class ConsoleReport {
                     orDash(f.layer()), f.message()));
         }
         out.print(bold("Findings") + "\n" + t.render("  ") + "\n");
+    }
+
+    private static String count(int n, String what) {
+        return n + " " + what + (n == 1 ? "" : "s");
     }
 
     private static void field(PrintWriter out, String name, String value) {
