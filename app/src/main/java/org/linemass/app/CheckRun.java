@@ -1,0 +1,124 @@
+package org.linemass.app;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.linemass.engine.AnalysisException;
+import org.linemass.engine.AnalysisSettings;
+import org.linemass.engine.result.Finding;
+import org.linemass.importer.DxfInputException;
+import org.linemass.importer.ImportOptions;
+import org.linemass.reports.Report;
+import org.linemass.reports.UnitSystem;
+import org.linemass.reports.console.ConsoleReport;
+import org.linemass.reports.csv.BomCsvWriter;
+import org.linemass.reports.csv.FindingsCsvWriter;
+import org.linemass.reports.csv.PiecesCsvWriter;
+import org.linemass.reports.dxf.DxfMarkupWriter;
+import org.linemass.reports.html.HtmlReportWriter;
+import org.linemass.reports.json.JsonReportWriter;
+
+/**
+ * One run of {@code check}: expand the inputs, build the settings, refuse outputs that would land
+ * on an input, analyse each drawing (a bad drawing among several is reported on stderr and the
+ * others go on), print the summary, write the requested reports, and work out the exit code.
+ */
+final class CheckRun {
+
+    private final AppContext ctx;
+    private final CommonOptions common;
+    private final DrawingOptions drawing;
+    private final OutputOptions outputs;
+
+    CheckRun(AppContext ctx, CommonOptions common, DrawingOptions drawing, OutputOptions outputs) {
+        this.ctx = ctx;
+        this.common = common;
+        this.drawing = drawing;
+        this.outputs = outputs;
+    }
+
+    /** Runs and returns the exit code; single-drawing input errors propagate as exceptions (exit 2). */
+    int run(List<Path> args) throws InputProblem, AnalysisException, DxfInputException, IOException {
+        List<Path> files = InputFiles.collect(args);
+        long toStdout = outputs.targets().stream().filter(OutputOptions.STDOUT::equals).count();
+        if (toStdout > 1) {
+            throw new InputProblem("only one report can go to standard output ('-')");
+        }
+        if (OutputOptions.STDOUT.equals(outputs.markupDxf)) {
+            throw new InputProblem("--markup-dxf needs a file name, not '-'");
+        }
+        ReportFiles sink = new ReportFiles(ctx.out(), files);
+        for (String t : outputs.targets()) {
+            sink.guard(t);
+        }
+        ImportOptions io = drawing.importOptions();
+        AnalysisSettings settings = drawing.settings(ctx.sections());
+
+        List<Report> reports = new ArrayList<>();
+        List<Path> analysed = new ArrayList<>();
+        boolean badInput = false;
+        try (Progress progress = new Progress(ctx.err(), files.size(), ctx.terminal() && !common.quiet)) {
+            for (Path f : files) {
+                try {
+                    reports.add(ctx.pipeline().analyse(f, io, settings));
+                    analysed.add(f);
+                } catch (DxfInputException | AnalysisException e) {
+                    if (files.size() == 1) {
+                        throw e;
+                    }
+                    ctx.err().println(e.getMessage());
+                    ctx.err().flush();
+                    badInput = true;
+                }
+                progress.step(f.getFileName().toString());
+            }
+        }
+        if (reports.isEmpty()) {
+            throw new InputProblem("none of the " + files.size() + " drawings could be read");
+        }
+        UnitSystem units = common.units();
+        if (!outputs.usesStdout()) {
+            new ConsoleReport(units, ctx.terminal(), common.quiet).print(reports, ctx.out());
+        }
+        sink.text(outputs.json, reports, JsonReportWriter::write);
+        sink.text(outputs.bomCsv, reports, (r, w) -> BomCsvWriter.write(r, units, w));
+        sink.text(outputs.piecesCsv, reports, (r, w) -> PiecesCsvWriter.write(r, units, w));
+        sink.text(outputs.findingsCsv, reports, (r, w) -> FindingsCsvWriter.write(r, units, w));
+        sink.text(outputs.html, reports, (r, w) -> new HtmlReportWriter(units).write(r, w));
+        if (outputs.markupDxf != null) {
+            markup(sink, reports, analysed);
+        }
+        if (badInput) {
+            return ExitCodes.BAD_INPUT;
+        }
+        List<Finding> all = new ArrayList<>();
+        reports.forEach(r -> all.addAll(r.result().findings()));
+        return outputs.failAt.tripped(all) ? ExitCodes.FINDINGS : ExitCodes.OK;
+    }
+
+    private void markup(ReportFiles sink, List<Report> reports, List<Path> analysed) throws IOException {
+        Path target = Path.of(outputs.markupDxf);
+        boolean folder = reports.size() > 1 || Files.isDirectory(target);
+        for (int i = 0; i < reports.size(); i++) {
+            Path in = analysed.get(i);
+            Path out = folder ? target.resolve(markedName(in)) : target;
+            byte[] original = Files.readAllBytes(in);
+            Report r = reports.get(i);
+            sink.bytes(out, os -> DxfMarkupWriter.write(original, r.result(), os));
+            if (!common.quiet && !outputs.usesStdout()) {
+                ctx.out().println("marked-up drawing: " + out);
+            }
+        }
+        ctx.out().flush();
+    }
+
+    /** {@code name.dxf} becomes {@code name-findings.dxf}. */
+    static String markedName(Path in) {
+        String n = in.getFileName().toString();
+        int dot = n.toLowerCase(Locale.ROOT).lastIndexOf(".dxf");
+        return (dot > 0 ? n.substring(0, dot) : n) + "-findings.dxf";
+    }
+}

@@ -1,0 +1,101 @@
+package org.linemass.app;
+
+import java.io.IOException;
+import java.lang.reflect.Constructor;
+import org.linemass.engine.AnalysisException;
+import org.linemass.importer.DxfInputException;
+import picocli.CommandLine;
+import picocli.CommandLine.IExecutionExceptionHandler;
+import picocli.CommandLine.IParameterExceptionHandler;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.ParseResult;
+
+/**
+ * Builds the picocli command tree for an {@link AppContext} and runs it. Usage errors, bad input
+ * ({@link DxfInputException}, {@link AnalysisException}, {@link InputProblem}, I/O failures) give
+ * one line on stderr and exit 2; anything else is a bug: one line asking for a report, exit 3.
+ * With {@code --debug} the stack trace follows the line.
+ */
+public final class Cli {
+
+    private Cli() {
+    }
+
+    /** Runs {@code linemass args...} and returns the exit code. */
+    public static int run(AppContext ctx, String... args) {
+        CommandLine cl = new CommandLine(new LinemassCommand(), new Factory(ctx));
+        cl.setOut(ctx.out());
+        cl.setErr(ctx.err());
+        cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setParameterExceptionHandler(usage(ctx));
+        cl.setExecutionExceptionHandler(failure(ctx));
+        int code = cl.execute(args);
+        ctx.out().flush();
+        ctx.err().flush();
+        return code;
+    }
+
+    private static IParameterExceptionHandler usage(AppContext ctx) {
+        return (ParameterException e, String[] args) -> {
+            String name = e.getCommandLine().getCommandName();
+            ctx.err().println("linemass: " + oneLine(e.getMessage()) + " (see 'linemass "
+                    + ("linemass".equals(name) ? "" : name + " ") + "--help')");
+            if (debug(args)) {
+                e.printStackTrace(ctx.err());
+            }
+            ctx.err().flush();
+            return ExitCodes.BAD_INPUT;
+        };
+    }
+
+    private static IExecutionExceptionHandler failure(AppContext ctx) {
+        return (Exception e, CommandLine cmd, ParseResult parsed) -> {
+            boolean bad = e instanceof DxfInputException || e instanceof AnalysisException
+                    || e instanceof InputProblem || e instanceof IOException || e instanceof IllegalArgumentException;
+            if (bad) {
+                ctx.err().println("linemass: " + oneLine(e.getMessage()));
+            } else {
+                ctx.err().println("linemass: internal error (" + e.getClass().getSimpleName() + ": "
+                        + oneLine(e.getMessage()) + "); please report it with the drawing and the command line");
+            }
+            if (debug(parsed.originalArgs().toArray(new String[0]))) {
+                e.printStackTrace(ctx.err());
+            }
+            ctx.err().flush();
+            return bad ? ExitCodes.BAD_INPUT : ExitCodes.INTERNAL;
+        };
+    }
+
+    private static boolean debug(String[] args) {
+        for (String a : args) {
+            if ("--debug".equals(a)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    static String oneLine(String s) {
+        return s == null ? "" : s.replace("\r\n", " ").replace('\n', ' ').replace('\r', ' ').strip();
+    }
+
+    /** Creates command classes that take the context in their constructor. */
+    private static final class Factory implements CommandLine.IFactory {
+        private final AppContext ctx;
+        private final CommandLine.IFactory fallback = CommandLine.defaultFactory();
+
+        Factory(AppContext ctx) {
+            this.ctx = ctx;
+        }
+
+        @Override
+        public <K> K create(Class<K> cls) throws Exception {
+            try {
+                Constructor<K> c = cls.getDeclaredConstructor(AppContext.class);
+                return c.newInstance(ctx);
+            } catch (NoSuchMethodException e) {
+                return fallback.create(cls);
+            }
+        }
+    }
+}

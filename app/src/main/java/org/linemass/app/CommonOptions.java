@@ -1,0 +1,21 @@
+package org.linemass.app;
+
+import org.linemass.reports.UnitSystem;
+import picocli.CommandLine.Option;
+
+/** Options every command shares: output detail and units. */
+public final class CommonOptions {
+
+    @Option(names = "--debug", description = "Print the full stack trace when something fails.")
+    boolean debug;
+
+    @Option(names = {"-q", "--quiet"}, description = "Print one line per drawing instead of the full summary.")
+    boolean quiet;
+
+    @Option(names = "--imperial", description = "Show lengths in ft and in and masses in lb (JSON stays in SI).")
+    boolean imperial;
+
+    UnitSystem units() {
+        return imperial ? UnitSystem.IMPERIAL : UnitSystem.METRIC;
+    }
+}

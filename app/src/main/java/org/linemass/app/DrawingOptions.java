@@ -1,0 +1,96 @@
+package org.linemass.app;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.linemass.drawing.LengthUnit;
+import org.linemass.engine.AnalysisException;
+import org.linemass.engine.AnalysisSettings;
+import org.linemass.engine.section.LayerAssignment;
+import org.linemass.engine.section.SectionTable;
+import org.linemass.importer.ImportOptions;
+import picocli.CommandLine.Option;
+
+/**
+ * Options that decide how a drawing is read and analysed: units, layers, sections and
+ * tolerances. {@link #importOptions} and {@link #settings} turn them into the engine's settings.
+ */
+public final class DrawingOptions {
+
+    @Option(names = "--units", paramLabel = "UNIT", converter = Converters.Unit.class,
+            description = "Drawing unit to use instead of the file's own (mm, cm, m, in, ft, ...).")
+    LengthUnit units;
+
+    @Option(names = "--only-layer", paramLabel = "GLOB",
+            description = "Count only layers matching GLOB (* and ?, case-insensitive); repeatable.")
+    List<String> onlyLayers = new ArrayList<>();
+
+    @Option(names = "--skip-layer", paramLabel = "GLOB", description = "Do not count layers matching GLOB; repeatable.")
+    List<String> skipLayers = new ArrayList<>();
+
+    @Option(names = "--count-hidden-layers", description = "Also count layers that are switched off or frozen.")
+    boolean hiddenLayers;
+
+    @Option(names = "--section-table", paramLabel = "CSV",
+            description = "Extra section rows (CSV); they replace built-in rows with the same id.")
+    Path sectionTable;
+
+    @Option(names = "--assign-file", paramLabel = "CSV", description = "Layer-to-section rules from a CSV file; repeatable.")
+    List<Path> assignFiles = new ArrayList<>();
+
+    @Option(names = {"-a", "--assign"}, paramLabel = "LAYER=SECTION",
+            description = "Layers matching LAYER (a glob) are made of SECTION; repeatable, later rules win.")
+    List<String> assign = new ArrayList<>();
+
+    @Option(names = "--join", paramLabel = "LENGTH", converter = Converters.Length.class,
+            description = "Ends closer than this are joined, e.g. 0.01mm (default 0.01 mm).")
+    Double joinM;
+
+    @Option(names = "--gap-limit", paramLabel = "LENGTH", converter = Converters.Length.class,
+            description = "Openings up to this size are reported as gaps, e.g. 2mm (default 5 mm).")
+    Double gapLimitM;
+
+    @Option(names = "--mirror-alike", description = "Count mirror images as identical pieces (same mark).")
+    boolean mirrorAlike;
+
+    /** Import options with the unit override, if any. */
+    ImportOptions importOptions() {
+        return units == null ? ImportOptions.DEFAULTS : ImportOptions.DEFAULTS.withUnit(units);
+    }
+
+    /**
+     * The analysis settings: built-in sections overridden by the user's table, file rules first and
+     * command-line rules after them (so the command line wins).
+     */
+    AnalysisSettings settings(SectionCatalog catalog) throws AnalysisException, InputProblem {
+        SectionTable table = catalog.builtIn();
+        if (sectionTable != null) {
+            table = table.overriddenBy(catalog.readTable(sectionTable));
+        }
+        List<LayerAssignment> rules = new ArrayList<>();
+        for (Path p : assignFiles) {
+            rules.addAll(catalog.readAssignments(p));
+        }
+        for (String a : assign) {
+            rules.add(parseAssignment(a));
+        }
+        if (joinM != null && gapLimitM != null && gapLimitM < joinM) {
+            throw new InputProblem("--gap-limit (" + LengthParser.describe(gapLimitM) + ") is below --join ("
+                    + LengthParser.describe(joinM) + ")");
+        }
+        return new AnalysisSettings(Optional.ofNullable(joinM), Optional.ofNullable(gapLimitM), Optional.empty(),
+                AnalysisSettings.defaults(table).integrationRelative(), mirrorAlike, onlyLayers, skipLayers,
+                hiddenLayers, table, rules, java.util.Map.of(), AnalysisSettings.DEFAULT_MAX_EXPANDED_SEGMENTS);
+    }
+
+    /** {@code LAYER=SECTION}; the layer glob may itself contain '=', so the last '=' splits. */
+    static LayerAssignment parseAssignment(String text) throws InputProblem {
+        int eq = text.lastIndexOf('=');
+        if (eq <= 0 || eq == text.length() - 1) {
+            throw new InputProblem("--assign '" + text + "': expected LAYER=SECTION, e.g. FRAME*=B8");
+        }
+        return new LayerAssignment(text.substring(0, eq).trim(), text.substring(eq + 1).trim(),
+                "command line --assign " + text);
+    }
+}

@@ -1,0 +1,22 @@
+package org.linemass.app;
+
+import java.nio.file.Path;
+import org.linemass.engine.AnalysisException;
+import org.linemass.engine.AnalysisSettings;
+import org.linemass.importer.DxfInputException;
+import org.linemass.importer.ImportOptions;
+import org.linemass.reports.Report;
+
+/** From a drawing file to what the reports print. */
+@FunctionalInterface
+public interface DrawingPipeline {
+
+    /**
+     * Imports and analyses {@code file}.
+     *
+     * @throws DxfInputException when the file cannot be read as a drawing
+     * @throws AnalysisException when the settings or section data make the analysis impossible
+     */
+    Report analyse(Path file, ImportOptions importOptions, AnalysisSettings settings)
+            throws DxfInputException, AnalysisException;
+}

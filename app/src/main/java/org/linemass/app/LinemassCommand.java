@@ -1,0 +1,20 @@
+package org.linemass.app;
+
+import picocli.CommandLine.Command;
+
+/** The top-level {@code linemass} command; all work is done by its subcommands. */
+@Command(name = "linemass", mixinStandardHelpOptions = true, version = "linemass 0.1.0",
+        description = "Centre-line length, mass, centre of gravity and drawing checks for wire, bar, tube and "
+                + "cable drawn in DXF.",
+        subcommands = {CheckCommand.class, DemoCommand.class, SectionsCommand.class, IntegrateCommand.class})
+final class LinemassCommand implements Runnable {
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        throw new picocli.CommandLine.ParameterException(spec.commandLine(),
+                "missing command: use check, demo, sections or integrate (linemass --help)");
+    }
+}

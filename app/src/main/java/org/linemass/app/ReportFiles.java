@@ -1,0 +1,82 @@
+package org.linemass.app;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
+import java.io.PrintWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.linemass.reports.Report;
+import org.linemass.reports.io.AtomicWrite;
+import org.linemass.reports.io.OutputGuard;
+
+/**
+ * Sends one text report to its target: standard output for {@code -}, otherwise a file written
+ * atomically after checking that it is not one of the input drawings.
+ */
+final class ReportFiles {
+
+    /** Writes text to a Writer. */
+    @FunctionalInterface
+    interface TextReport {
+        void write(List<Report> reports, Writer out) throws IOException;
+    }
+
+    private final PrintWriter stdout;
+    private final List<Path> inputs;
+
+    ReportFiles(PrintWriter stdout, List<Path> inputs) {
+        this.stdout = stdout;
+        this.inputs = List.copyOf(inputs);
+    }
+
+    /** Refuses an output path that resolves to an input (checked before any work is done). */
+    void guard(String target) throws IOException {
+        if (target != null && !target.equals(OutputOptions.STDOUT)) {
+            OutputGuard.check(Path.of(target), inputs);
+        }
+    }
+
+    void text(String target, List<Report> reports, TextReport writer) throws IOException {
+        if (target == null) {
+            return;
+        }
+        if (target.equals(OutputOptions.STDOUT)) {
+            writer.write(reports, stdout);
+            stdout.flush();
+            return;
+        }
+        Path p = Path.of(target);
+        OutputGuard.check(p, inputs);
+        AtomicWrite.write(p, os -> {
+            Writer w = new OutputStreamWriter(nonClosing(os), StandardCharsets.UTF_8);
+            writer.write(reports, w);
+            w.flush();
+        });
+    }
+
+    void bytes(Path target, AtomicWrite.Content content) throws IOException {
+        OutputGuard.check(target, inputs);
+        if (Files.isDirectory(target)) {
+            throw new IOException(target + " is a folder; give a file name for one drawing");
+        }
+        AtomicWrite.write(target, content);
+    }
+
+    private static OutputStream nonClosing(OutputStream os) {
+        return new java.io.FilterOutputStream(os) {
+            @Override
+            public void write(byte[] b, int off, int len) throws IOException {
+                out.write(b, off, len);
+            }
+
+            @Override
+            public void close() throws IOException {
+                flush();
+            }
+        };
+    }
+}

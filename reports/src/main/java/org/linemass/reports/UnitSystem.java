@@ -1,0 +1,80 @@
+package org.linemass.reports;
+
+import java.util.Locale;
+
+/**
+ * How quantities are shown to people: metric (m, mm, kg) or imperial (ft, in, lb). JSON always
+ * stays in SI. Conversion factors are exact by definition (international yard and pound, 1959):
+ * 1 in = 0.0254 m, 1 ft = 0.3048 m, 1 lb = 0.45359237 kg.
+ */
+public enum UnitSystem {
+    /** Long lengths and coordinates in m, cut lengths and small sizes in mm, mass in kg. */
+    METRIC("m", 1.0, 3, "mm", 0.001, 1, "kg", 1.0, 3),
+    /** Long lengths and coordinates in ft, cut lengths and small sizes in in, mass in lb. */
+    IMPERIAL("ft", 0.3048, 3, "in", 0.0254, 3, "lb", 0.45359237, 3);
+
+    private final String longUnit;
+    private final double longM;
+    private final int longDecimals;
+    private final String shortUnit;
+    private final double shortM;
+    private final int shortDecimals;
+    private final String massUnit;
+    private final double massKg;
+    private final int massDecimals;
+
+    UnitSystem(String longUnit, double longM, int longDecimals, String shortUnit, double shortM, int shortDecimals,
+            String massUnit, double massKg, int massDecimals) {
+        this.longUnit = longUnit;
+        this.longM = longM;
+        this.longDecimals = longDecimals;
+        this.shortUnit = shortUnit;
+        this.shortM = shortM;
+        this.shortDecimals = shortDecimals;
+        this.massUnit = massUnit;
+        this.massKg = massKg;
+        this.massDecimals = massDecimals;
+    }
+
+    /** Unit symbol for totals and coordinates (m or ft). */
+    public String longUnit() {
+        return longUnit;
+    }
+
+    /** Unit symbol for cut lengths and small sizes (mm or in). */
+    public String shortUnit() {
+        return shortUnit;
+    }
+
+    /** Unit symbol for mass (kg or lb). */
+    public String massUnit() {
+        return massUnit;
+    }
+
+    /** A length in metres shown in the long unit, fixed decimals; empty text for null. */
+    public String longLength(Double metres) {
+        return metres == null ? "" : fixed(metres / longM, longDecimals);
+    }
+
+    /** A length in metres shown in the short unit, fixed decimals; empty text for null. */
+    public String shortLength(Double metres) {
+        return metres == null ? "" : fixed(metres / shortM, shortDecimals);
+    }
+
+    /** A mass in kilograms shown in the mass unit, fixed decimals; empty text for null. */
+    public String mass(Double kg) {
+        return kg == null ? "" : fixed(kg / massKg, massDecimals);
+    }
+
+    /** A number with a fixed count of decimals, Locale.ROOT, no grouping; "-0.000" shown as "0.000". */
+    public static String fixed(double v, int decimals) {
+        if (!Double.isFinite(v)) {
+            return Double.isNaN(v) ? "NaN" : (v > 0 ? "inf" : "-inf");
+        }
+        String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
+        if (s.startsWith("-") && s.chars().skip(1).allMatch(c -> c == '0' || c == '.')) {
+            return s.substring(1);
+        }
+        return s;
+    }
+}

@@ -1,0 +1,210 @@
+package org.linemass.reports.console;
+
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import org.linemass.engine.result.DrawingResult;
+import org.linemass.engine.result.Finding;
+import org.linemass.engine.result.LayerResult;
+import org.linemass.engine.result.MarkResult;
+import org.linemass.engine.result.Severity;
+import org.linemass.engine.result.Totals;
+import org.linemass.geometry.Vec3;
+import org.linemass.reports.Caution;
+import org.linemass.reports.CombinedTotals;
+import org.linemass.reports.Report;
+import org.linemass.reports.UnitSystem;
+
+/**
+ * The terminal report. Per drawing: a summary (file, DXF version, units and their source, total
+ * length and mass, centre of gravity, pieces and marks, findings by severity, and a warning line
+ * when totals are incomplete), then the bill of materials, layer totals and findings as aligned
+ * tables. Several drawings end with the combined totals. Quiet mode prints one line per drawing
+ * (and one for the total). Colour is used only when {@code colour} is true.
+ */
+public final class ConsoleReport {
+
+    private final UnitSystem units;
+    private final boolean colour;
+    private final boolean quiet;
+
+    public ConsoleReport(UnitSystem units, boolean colour, boolean quiet) {
+        this.units = units;
+        this.colour = colour;
+        this.quiet = quiet;
+    }
+
+    public void print(List<Report> reports, PrintWriter out) {
+        for (Report r : reports) {
+            if (quiet) {
+                out.print(oneLine(r.result().drawing().file(), r.result().totals(), r.result().findings(),
+                        r.result().complete()) + "\n");
+            } else {
+                drawing(r.result(), out);
+            }
+        }
+        if (reports.size() > 1) {
+            List<Totals> all = new ArrayList<>();
+            List<Finding> findings = new ArrayList<>();
+            boolean complete = true;
+            for (Report r : reports) {
+                all.add(r.result().totals());
+                findings.addAll(r.result().findings());
+                complete &= r.result().complete();
+            }
+            Totals t = CombinedTotals.of(all);
+            if (quiet) {
+                out.print(oneLine("all " + reports.size() + " drawings", t, findings, complete) + "\n");
+            } else {
+                out.print(bold("All " + reports.size() + " drawings together") + "\n");
+                totalsLines(t, complete, out);
+                field(out, "findings", severityCounts(findings));
+                out.print("\n");
+            }
+        }
+        if (!quiet) {
+            out.print("Caution: " + Caution.TEXT + "\n");
+        }
+        out.flush();
+    }
+
+    private String oneLine(String name, Totals t, List<Finding> findings, boolean complete) {
+        String mass = t.massKg() == null ? "mass unknown" : units.mass(t.massKg()) + " " + units.massUnit()
+                + (t.massComplete() ? "" : " (partial)");
+        return TextTable.clean(name) + ": " + units.longLength(t.lengthM()) + " " + units.longUnit() + ", " + mass
+                + ", findings " + severityCounts(findings) + (complete ? "" : ", INCOMPLETE");
+    }
+
+    private void drawing(DrawingResult r, PrintWriter out) {
+        out.print(bold(TextTable.clean(r.drawing().file())) + "\n");
+        field(out, "DXF version", r.drawing().dxfVersion().isEmpty() ? "(no header)" : r.drawing().dxfVersion());
+        field(out, "units", r.drawing().unit().symbol() + " (" + unitSource(r) + ")");
+        totalsLines(r.totals(), r.complete(), out);
+        field(out, "pieces", r.pieces().size() + " in " + r.groups().size() + " marks");
+        field(out, "findings", severityCounts(r.findings()));
+        for (String reason : r.incompleteReasons()) {
+            out.print("  " + paint("31", "incomplete: " + TextTable.clean(reason)) + "\n");
+        }
+        out.print("\n");
+        bom(r, out);
+        layers(r, out);
+        findings(r, out);
+    }
+
+    private void totalsLines(Totals t, boolean complete, PrintWriter out) {
+        field(out, "length", units.longLength(t.lengthM()) + " " + units.longUnit()
+                + (t.drawnLengthM() != t.lengthM() ? " (drawn " + units.longLength(t.drawnLengthM()) + " "
+                        + units.longUnit() + ", overlaps counted once)" : ""));
+        if (t.massKg() == null) {
+            field(out, "mass", "unknown (no layer has a section)");
+        } else {
+            field(out, "mass", units.mass(t.massKg()) + " " + units.massUnit()
+                    + (t.massComplete() ? "" : " (only layers with a section)"));
+        }
+        Vec3 g = t.centroidM() != null ? t.centroidM() : t.lengthCentroidM();
+        String which = t.centroidM() != null ? "centre of gravity" : "length centroid";
+        field(out, which, g == null ? "none" : point(g));
+        if (!complete) {
+            field(out, "complete", paint("31", "NO: some of the drawing was not counted, see below"));
+        }
+    }
+
+    private String unitSource(DrawingResult r) {
+        return switch (r.drawing().unitSource()) {
+            case HEADER -> "from the file header";
+            case OPTION -> "set on the command line";
+            case ASSUMED -> "assumed, the file does not say";
+        };
+    }
+
+    private String point(Vec3 g) {
+        return "x " + units.longLength(g.x()) + "  y " + units.longLength(g.y()) + "  z " + units.longLength(g.z())
+                + " " + units.longUnit();
+    }
+
+    private String severityCounts(List<Finding> findings) {
+        Map<Severity, Integer> n = new EnumMap<>(Severity.class);
+        for (Finding f : findings) {
+            n.merge(f.severity(), 1, Integer::sum);
+        }
+        int e = n.getOrDefault(Severity.ERROR, 0);
+        int w = n.getOrDefault(Severity.WARNING, 0);
+        int i = n.getOrDefault(Severity.INFO, 0);
+        return (e > 0 ? paint("31", count(e, "error")) : count(e, "error")) + ", "
+                + (w > 0 ? paint("33", count(w, "warning")) : count(w, "warning")) + ", " + count(i, "note");
+    }
+
+    private void bom(DrawingResult r, PrintWriter out) {
+        if (r.groups().isEmpty()) {
+            return;
+        }
+        TextTable t = new TextTable(List.of("mark", "qty", "section", "material",
+                "cut length each [" + units.shortUnit() + "]", "bends", "mass each [" + units.massUnit() + "]",
+                "mass total [" + units.massUnit() + "]", "layer"),
+                false, true, false, false, true, true, true, true, false);
+        for (MarkResult m : r.groups()) {
+            t.add(List.of(m.mark(), Integer.toString(m.quantity()), orDash(m.section()), orDash(m.material()),
+                    units.shortLength(m.lengthEachM()), Integer.toString(m.bendsEach()), orDash(units.mass(m.massEachKg())),
+                    orDash(units.mass(m.massTotalKg())), orDash(m.layer())));
+        }
+        out.print(bold("Bill of materials") + "\n" + t.render("  ") + "\n");
+    }
+
+    private void layers(DrawingResult r, PrintWriter out) {
+        if (r.layers().isEmpty()) {
+            return;
+        }
+        TextTable t = new TextTable(List.of("layer", "section", "length [" + units.longUnit() + "]",
+                "mass [" + units.massUnit() + "]", "pieces", "cog x [" + units.longUnit() + "]",
+                "cog y [" + units.longUnit() + "]", "cog z [" + units.longUnit() + "]"),
+                false, false, true, true, true, true, true, true);
+        for (LayerResult l : r.layers()) {
+            Vec3 g = l.centroidM() != null ? l.centroidM() : l.lengthCentroidM();
+            t.add(List.of(l.name(), orDash(l.section()), units.longLength(l.lengthM()), orDash(units.mass(l.massKg())),
+                    Integer.toString(l.pieces()), g == null ? "-" : units.longLength(g.x()),
+                    g == null ? "-" : units.longLength(g.y()), g == null ? "-" : units.longLength(g.z())));
+        }
+        out.print(bold("Layers") + "\n" + t.render("  ") + "\n");
+    }
+
+    private void findings(DrawingResult r, PrintWriter out) {
+        if (r.findings().isEmpty()) {
+            return;
+        }
+        TextTable t = new TextTable(List.of("#", "severity", "kind", "x [" + units.longUnit() + "]",
+                "y [" + units.longUnit() + "]", "z [" + units.longUnit() + "]", "size [" + units.shortUnit() + "]",
+                "layer", "message"), true, false, false, true, true, true, true, false, false);
+        int n = 0;
+        for (Finding f : r.findings()) {
+            n++;
+            Vec3 a = f.atM();
+            t.add(List.of(Integer.toString(n), f.severity().jsonName(), f.kind(),
+                    a == null ? "-" : units.longLength(a.x()), a == null ? "-" : units.longLength(a.y()),
+                    a == null ? "-" : units.longLength(a.z()), orDash(units.shortLength(f.sizeM())),
+                    orDash(f.layer()), f.message()));
+        }
+        out.print(bold("Findings") + "\n" + t.render("  ") + "\n");
+    }
+
+    private static String count(int n, String what) {
+        return n + " " + what + (n == 1 ? "" : "s");
+    }
+
+    private static void field(PrintWriter out, String name, String value) {
+        out.print("  " + String.format(java.util.Locale.ROOT, "%-18s", name) + value + "\n");
+    }
+
+    private static String orDash(String s) {
+        return s == null || s.isEmpty() ? "-" : s;
+    }
+
+    private String bold(String s) {
+        return paint("1", s);
+    }
+
+    private String paint(String code, String s) {
+        return colour ? "\u001b[" + code + "m" + s + "\u001b[0m" : s;
+    }
+}

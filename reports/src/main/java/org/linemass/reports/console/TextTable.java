@@ -1,0 +1,86 @@
+package org.linemass.reports.console;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A plain-text table: columns padded to their widest cell, numeric columns right-aligned, two
+ * spaces between columns, a dashed rule under the header. Control characters in cells (from
+ * drawing names) are replaced by '?', so a layer name cannot move the cursor or inject colour.
+ */
+final class TextTable {
+
+    private final List<String> header;
+    private final boolean[] numeric;
+    private final List<List<String>> rows = new ArrayList<>();
+
+    TextTable(List<String> header, boolean... numeric) {
+        if (numeric.length != header.size()) {
+            throw new IllegalArgumentException("alignment flags " + numeric.length + " for " + header.size() + " columns");
+        }
+        this.header = List.copyOf(header);
+        this.numeric = numeric.clone();
+    }
+
+    void add(List<String> cells) {
+        if (cells.size() != header.size()) {
+            throw new IllegalArgumentException("row of " + cells.size() + " cells for " + header.size() + " columns");
+        }
+        List<String> clean = new ArrayList<>();
+        for (String c : cells) {
+            clean.add(clean(c));
+        }
+        rows.add(clean);
+    }
+
+    boolean isEmpty() {
+        return rows.isEmpty();
+    }
+
+    /** The table as lines ending in "\n", each line prefixed with {@code indent}. */
+    String render(String indent) {
+        int[] width = new int[header.size()];
+        for (int i = 0; i < width.length; i++) {
+            width[i] = header.get(i).length();
+            for (List<String> r : rows) {
+                width[i] = Math.max(width[i], r.get(i).length());
+            }
+        }
+        StringBuilder sb = new StringBuilder();
+        line(sb, indent, header, width);
+        StringBuilder rule = new StringBuilder();
+        for (int i = 0; i < width.length; i++) {
+            rule.append(i == 0 ? "" : "  ").append("-".repeat(width[i]));
+        }
+        sb.append(indent).append(rule).append('\n');
+        for (List<String> r : rows) {
+            line(sb, indent, r, width);
+        }
+        return sb.toString();
+    }
+
+    private void line(StringBuilder sb, String indent, List<String> cells, int[] width) {
+        StringBuilder l = new StringBuilder(indent);
+        for (int i = 0; i < cells.size(); i++) {
+            if (i > 0) {
+                l.append("  ");
+            }
+            String c = cells.get(i);
+            String pad = " ".repeat(width[i] - c.length());
+            l.append(numeric[i] ? pad + c : c + pad);
+        }
+        sb.append(l.toString().stripTrailing()).append('\n');
+    }
+
+    static String clean(String s) {
+        if (s == null) {
+            return "";
+        }
+        StringBuilder b = new StringBuilder(s.length());
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            b.append(Character.isISOControl(c) ? '?' : c);
+        }
+        return b.toString();
+    }
+}

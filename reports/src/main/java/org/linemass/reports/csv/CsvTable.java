@@ -1,0 +1,33 @@
+package org.linemass.reports.csv;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.List;
+
+/** Writes rows of already-formatted cells as RFC 4180 records ending in "\n". */
+final class CsvTable {
+
+    private final Writer out;
+    private final int columns;
+
+    CsvTable(Writer out, List<String> header) throws IOException {
+        this.out = out;
+        this.columns = header.size();
+        row(header);
+    }
+
+    void row(List<String> cells) throws IOException {
+        if (cells.size() != columns) {
+            throw new IllegalArgumentException("CSV row has " + cells.size() + " cells, header has " + columns);
+        }
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < cells.size(); i++) {
+            if (i > 0) {
+                sb.append(',');
+            }
+            sb.append(CsvCell.quote(cells.get(i) == null ? "" : cells.get(i)));
+        }
+        sb.append('\n');
+        out.write(sb.toString());
+    }
+}

@@ -1,0 +1,55 @@
+package org.linemass.reports.csv;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.ArrayList;
+import java.util.List;
+import org.linemass.engine.result.DrawingResult;
+import org.linemass.engine.result.Finding;
+import org.linemass.reports.Report;
+import org.linemass.reports.UnitSystem;
+
+/**
+ * The drawing defects and notices: one row per finding, numbered from 1 in each drawing (the same
+ * numbers as the HTML markers and the marked-up DXF labels), with kind, severity, place, size,
+ * layer, mass concerned, entities and message.
+ */
+public final class FindingsCsvWriter {
+
+    private FindingsCsvWriter() {
+    }
+
+    public static void write(List<Report> reports, UnitSystem units, Writer out) throws IOException {
+        boolean multi = reports.size() > 1;
+        String lu = units.longUnit();
+        List<String> header = new ArrayList<>();
+        if (multi) {
+            header.add("drawing");
+        }
+        header.addAll(List.of("number", "kind", "severity", "x [" + lu + "]", "y [" + lu + "]", "z [" + lu + "]",
+                "size [" + units.shortUnit() + "]", "layer", "mass [" + units.massUnit() + "]", "entities",
+                "message"));
+        CsvTable table = new CsvTable(out, header);
+        for (Report report : reports) {
+            DrawingResult r = report.result();
+            int n = 0;
+            for (Finding f : r.findings()) {
+                n++;
+                List<String> row = new ArrayList<>();
+                if (multi) {
+                    row.add(CsvCell.text(r.drawing().file()));
+                }
+                row.add(Integer.toString(n));
+                row.add(CsvCell.text(f.kind()));
+                row.add(f.severity().jsonName());
+                PiecesCsvWriter.addPoint(row, f.atM(), units);
+                row.add(units.shortLength(f.sizeM()));
+                row.add(CsvCell.text(f.layer()));
+                row.add(units.mass(f.massKg()));
+                row.add(CsvCell.text(PiecesCsvWriter.refs(f.entities())));
+                row.add(CsvCell.text(f.message()));
+                table.row(row);
+            }
+        }
+    }
+}

@@ -1,0 +1,76 @@
+package org.linemass.reports.csv;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Collectors;
+import org.linemass.engine.result.DrawingResult;
+import org.linemass.engine.result.PieceResult;
+import org.linemass.engine.result.SourceRef;
+import org.linemass.geometry.Vec3;
+import org.linemass.reports.Report;
+import org.linemass.reports.UnitSystem;
+
+/**
+ * The cut list: one row per piece with its mark, layer, section, length, mass, closed flag,
+ * segment and bend counts, centre of gravity and end points, and the DXF entities it was built
+ * from ({@code line:handle} pairs). With several drawings the first column names the drawing.
+ */
+public final class PiecesCsvWriter {
+
+    private PiecesCsvWriter() {
+    }
+
+    public static void write(List<Report> reports, UnitSystem units, Writer out) throws IOException {
+        boolean multi = reports.size() > 1;
+        String lu = units.longUnit();
+        List<String> header = new ArrayList<>();
+        if (multi) {
+            header.add("drawing");
+        }
+        header.addAll(List.of("piece", "mark", "layer", "section", "length [" + units.shortUnit() + "]",
+                "mass [" + units.massUnit() + "]", "closed", "segments", "bends",
+                "cog x [" + lu + "]", "cog y [" + lu + "]", "cog z [" + lu + "]",
+                "start x [" + lu + "]", "start y [" + lu + "]", "start z [" + lu + "]",
+                "end x [" + lu + "]", "end y [" + lu + "]", "end z [" + lu + "]", "entities"));
+        CsvTable table = new CsvTable(out, header);
+        for (Report report : reports) {
+            DrawingResult r = report.result();
+            for (PieceResult p : r.pieces()) {
+                List<String> row = new ArrayList<>();
+                if (multi) {
+                    row.add(CsvCell.text(r.drawing().file()));
+                }
+                row.add(Integer.toString(p.id()));
+                row.add(CsvCell.text(p.mark()));
+                row.add(CsvCell.text(p.layer()));
+                row.add(CsvCell.text(p.section()));
+                row.add(units.shortLength(p.lengthM()));
+                row.add(units.mass(p.massKg()));
+                row.add(p.closed() ? "yes" : "no");
+                row.add(Integer.toString(p.segments()));
+                row.add(Integer.toString(p.bends().size()));
+                addPoint(row, p.centroidM(), units);
+                addPoint(row, p.startM(), units);
+                addPoint(row, p.endM(), units);
+                row.add(CsvCell.text(refs(p.sources())));
+                table.row(row);
+            }
+        }
+    }
+
+    static void addPoint(List<String> row, Vec3 p, UnitSystem units) {
+        row.add(p == null ? "" : units.longLength(p.x()));
+        row.add(p == null ? "" : units.longLength(p.y()));
+        row.add(p == null ? "" : units.longLength(p.z()));
+    }
+
+    /** Entity references as "line:handle" separated by spaces (handle omitted when empty). */
+    static String refs(List<SourceRef> sources) {
+        return sources.stream()
+                .map(s -> s.handle() == null || s.handle().isEmpty() ? Integer.toString(s.line())
+                        : s.line() + ":" + s.handle())
+                .collect(Collectors.joining(" "));
+    }
+}

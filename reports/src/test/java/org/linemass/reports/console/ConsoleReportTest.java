@@ -1,0 +1,105 @@
+package org.linemass.reports.console;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.util.List;
+import java.util.Locale;
+import org.linemass.reports.Fixtures;
+import org.linemass.reports.Report;
+import org.linemass.reports.UnitSystem;
+import org.junit.jupiter.api.Test;
+
+class ConsoleReportTest {
+
+    private static String print(List<Report> reports, UnitSystem u, boolean colour, boolean quiet) {
+        StringWriter w = new StringWriter();
+        new ConsoleReport(u, colour, quiet).print(reports, new PrintWriter(w));
+        return w.toString();
+    }
+
+    @Test
+    void print_summaryComesBeforeTables() {
+        String s = print(List.of(Report.of(Fixtures.flatFrame("a.dxf"))), UnitSystem.METRIC, false, false);
+        int summary = s.indexOf("centre of gravity");
+        assertTrue(summary > 0, s);
+        assertTrue(s.indexOf("mm (from the file header)") < s.indexOf("Bill of materials"));
+        assertTrue(summary < s.indexOf("Bill of materials"));
+        assertTrue(s.indexOf("Bill of materials") < s.indexOf("Layers"));
+        assertTrue(s.indexOf("Layers") < s.indexOf("Findings"));
+        assertTrue(s.contains("1 error, 1 warning, 1 note"), s);
+        assertTrue(s.contains("cut length each [mm]"));
+        assertTrue(s.contains("3 in 2 marks"));
+        // mass of the two B10 bars: 2 x 0.617 kg (FACTS.md section 1.1)
+        assertTrue(s.contains("1.234 kg (only layers with a section)"), s);
+        assertFalse(s.contains("\u001b["), "no colour when not a terminal");
+        assertTrue(s.contains("Caution:"));
+    }
+
+    @Test
+    void print_tableColumnsAreAligned() {
+        String s = print(List.of(Report.of(Fixtures.flatFrame("a.dxf"))), UnitSystem.METRIC, false, false);
+        String[] lines = s.split("\n");
+        int header = -1;
+        for (int i = 0; i < lines.length; i++) {
+            if (lines[i].trim().startsWith("mark")) {
+                header = i;
+                break;
+            }
+        }
+        assertTrue(header > 0);
+        // the right edge of the right-aligned "qty" column is the same on header and rows
+        int end = lines[header].indexOf("qty") + 3;
+        assertEquals('2', lines[header + 2].charAt(end - 1), lines[header + 2]);
+        assertEquals('1', lines[header + 3].charAt(end - 1), lines[header + 3]);
+    }
+
+    @Test
+    void print_colourOnlyWhenAsked() {
+        String s = print(List.of(Report.of(Fixtures.flatFrame("a.dxf"))), UnitSystem.METRIC, true, false);
+        assertTrue(s.contains("\u001b[31m1 error\u001b[0m"));
+    }
+
+    @Test
+    void print_quiet_oneLinePerDrawingPlusTotal() {
+        String s = print(List.of(Report.of(Fixtures.flatFrame("a.dxf")), Report.of(Fixtures.frame("b.dxf", 0, true))),
+                UnitSystem.METRIC, false, true);
+        String[] lines = s.split("\n");
+        assertEquals(3, lines.length, s);
+        assertTrue(lines[0].startsWith("a.dxf: "));
+        assertTrue(lines[1].endsWith("INCOMPLETE"));
+        assertTrue(lines[2].startsWith("all 2 drawings: "));
+        // 2 x (2 bars + ring of 0.2 pi m) rounded to mm
+        assertTrue(lines[2].contains(UnitSystem.fixed(2 * (2 + 0.2 * Math.PI), 3) + " m"), lines[2]);
+    }
+
+    @Test
+    void print_imperialAndGermanLocale_usesFeetPoundsAndDots() {
+        Locale before = Locale.getDefault();
+        try {
+            Locale.setDefault(Locale.GERMANY);
+            String s = print(List.of(Report.of(Fixtures.flatFrame("a.dxf"))), UnitSystem.IMPERIAL, false, false);
+            // 1.234 kg = 2.7205 lb, shown 2.721 (1 lb = 0.45359237 kg, FACTS.md section 0.1)
+            assertTrue(s.contains("2.721 lb"), s);
+            assertTrue(s.contains("cut length each [in]"));
+            assertFalse(s.contains(" kg"));
+        } finally {
+            Locale.setDefault(before);
+        }
+    }
+
+    @Test
+    void print_controlCharactersInNamesAreNeutralised() {
+        assertEquals("a?[31mb", TextTable.clean("a\u001b[31mb"));
+    }
+
+    @Test
+    void print_incompleteDrawing_saysSo() {
+        String s = print(List.of(Report.of(Fixtures.frame("a.dxf", 0, true))), UnitSystem.METRIC, false, false);
+        assertTrue(s.contains("incomplete: SPLINE at line 400 skipped"), s);
+        assertTrue(s.contains("NO: some of the drawing was not counted"));
+    }
+}

@@ -1,0 +1,97 @@
+package org.linemass.reports.csv;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.StringWriter;
+import java.util.List;
+import org.linemass.reports.Fixtures;
+import org.linemass.reports.Report;
+import org.linemass.reports.UnitSystem;
+import org.junit.jupiter.api.Test;
+
+class CsvWritersTest {
+
+    /** Cells carry 3 decimals of kg: sums agree to half a unit in the last place of each of 2 rows. */
+    private static final double MASS_TOL = 1e-3;
+
+    private static List<List<String>> bom(List<Report> reports, UnitSystem u) throws IOException {
+        StringWriter w = new StringWriter();
+        BomCsvWriter.write(reports, u, w);
+        return CsvParse.parse(w.toString());
+    }
+
+    @Test
+    void bom_oneDrawing_rowPerMarkTotalsAndNote() throws IOException {
+        List<List<String>> rows = bom(List.of(Report.of(Fixtures.flatFrame("a.dxf"))), UnitSystem.METRIC);
+        assertEquals(List.of("mark", "quantity", "section", "material", "cut length each [mm]", "bends each",
+                "mass each [kg]", "mass total [kg]", "layer"), rows.get(0));
+        assertEquals(List.of("A", "2", "B10", "steel", "1000.0", "0", "0.617", "1.234", "BARS"), rows.get(1));
+        // formula-looking mark from the drawing is guarded; ring has no section so mass cells are empty
+        assertEquals("'" + Fixtures.FORMULA_MARK, rows.get(2).get(0));
+        assertEquals("", rows.get(2).get(7));
+        List<String> total = rows.get(3);
+        assertEquals("TOTAL", total.get(0));
+        assertEquals("3", total.get(1));
+        assertEquals(2 * Fixtures.B10_KG_PER_M, Double.parseDouble(total.get(7)), MASS_TOL);
+        assertEquals("NOTE", rows.get(4).get(0));
+        assertTrue(rows.get(4).get(2).contains("no section"), rows.get(4).toString());
+        assertEquals(5, rows.size());
+    }
+
+    @Test
+    void bom_severalDrawings_oneBillWithDrawingColumn() throws IOException {
+        List<List<String>> rows = bom(List.of(Report.of(Fixtures.flatFrame("=evil.dxf")),
+                Report.of(Fixtures.frame("b.dxf", 0.2, true))), UnitSystem.METRIC);
+        assertEquals("drawing", rows.get(0).get(0));
+        assertEquals("'=evil.dxf", rows.get(1).get(0));
+        assertEquals("b.dxf", rows.get(3).get(0));
+        List<String> total = rows.get(5);
+        assertEquals("TOTAL", total.get(1));
+        assertEquals("6", total.get(2));
+        assertEquals(4 * Fixtures.B10_KG_PER_M, Double.parseDouble(total.get(8)), MASS_TOL);
+        assertTrue(rows.get(6).get(3).contains("b.dxf: drawing read incompletely"), rows.get(6).toString());
+    }
+
+    @Test
+    void bom_imperial_unitsInHeadersAndValues() throws IOException {
+        List<List<String>> rows = bom(List.of(Report.of(Fixtures.flatFrame("a.dxf"))), UnitSystem.IMPERIAL);
+        assertEquals("cut length each [in]", rows.get(0).get(4));
+        assertEquals("mass each [lb]", rows.get(0).get(6));
+        // 1 m = 39.370 in; 0.617 kg = 1.360 lb (1 in = 0.0254 m, 1 lb = 0.45359237 kg, FACTS.md section 0.1)
+        assertEquals("39.370", rows.get(1).get(4));
+        assertEquals("1.360", rows.get(1).get(6));
+    }
+
+    @Test
+    void pieces_rowPerPieceWithEntitiesAndGuard() throws IOException {
+        StringWriter w = new StringWriter();
+        PiecesCsvWriter.write(List.of(Report.of(Fixtures.flatFrame("a.dxf"))), UnitSystem.METRIC, w);
+        List<List<String>> rows = CsvParse.parse(w.toString());
+        assertEquals(4, rows.size());
+        assertEquals("piece", rows.get(0).get(0));
+        assertTrue(rows.get(0).contains("length [mm]"));
+        assertEquals("1", rows.get(1).get(0));
+        assertEquals("120:2A", rows.get(1).get(rows.get(1).size() - 1));
+        assertEquals(Fixtures.SCRIPT_LAYER, rows.get(3).get(2));
+        assertEquals("'" + Fixtures.FORMULA_MARK, rows.get(3).get(1));
+        // cog x of bar 1 is its midpoint 0.5 m (closed form)
+        assertEquals("0.500", rows.get(1).get(9));
+    }
+
+    @Test
+    void findings_numberedWithGuardedMessage() throws IOException {
+        StringWriter w = new StringWriter();
+        FindingsCsvWriter.write(List.of(Report.of(Fixtures.flatFrame("a.dxf"))), UnitSystem.METRIC, w);
+        List<List<String>> rows = CsvParse.parse(w.toString());
+        assertEquals(List.of("number", "kind", "severity", "x [m]", "y [m]", "z [m]", "size [mm]", "layer", "mass [kg]",
+                "entities", "message"), rows.get(0));
+        // 1.0005 m shown with 3 decimals rounds half up (java.util.Formatter)
+        assertEquals(List.of("1", "gap", "error", "1.001", "0.000", "0.000", "1.0", "BARS", "", "120:2A",
+                "ends 1 mm apart on layer BARS were not joined"), rows.get(1));
+        assertEquals("134:2B 120:2A", rows.get(2).get(9));
+        assertEquals("'-1+1 message starting with a minus", rows.get(3).get(10));
+        assertEquals("", rows.get(3).get(3));
+    }
+}

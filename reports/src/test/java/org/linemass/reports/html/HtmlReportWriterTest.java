@@ -1,0 +1,115 @@
+package org.linemass.reports.html;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.StringWriter;
+import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.linemass.reports.Fixtures;
+import org.linemass.reports.Report;
+import org.linemass.reports.UnitSystem;
+import org.junit.jupiter.api.Test;
+
+class HtmlReportWriterTest {
+
+    private static String html(List<Report> reports) throws IOException {
+        StringWriter w = new StringWriter();
+        new HtmlReportWriter(UnitSystem.METRIC).write(reports, w);
+        return w.toString();
+    }
+
+    @Test
+    void write_scriptLayerName_rendersAsText() throws IOException {
+        String s = html(List.of(Report.of(Fixtures.flatFrame("a.dxf"))));
+        assertFalse(s.contains(Fixtures.SCRIPT_LAYER), "raw <script> from the drawing must not appear");
+        assertTrue(s.contains("&lt;script&gt;alert(1)&lt;/script&gt;"));
+        // the page's own single script block is the only one
+        assertEquals(1, count(s, "<script>"));
+    }
+
+    @Test
+    void write_selfContained_noNetworkReferences() throws IOException {
+        String s = html(List.of(Report.of(Fixtures.frame("a.dxf", 0.3, false))));
+        assertFalse(Pattern.compile("(src|href)\\s*=\\s*\"(https?:)?//").matcher(s).find(), "no external resources");
+        assertFalse(s.contains("<link"));
+        assertFalse(s.contains("@import"));
+        assertTrue(s.startsWith("<!DOCTYPE html>"));
+        assertTrue(s.trim().endsWith("</html>"));
+    }
+
+    @Test
+    void write_findingMarkersAndRowsLinkBothWays() throws IOException {
+        String s = html(List.of(Report.of(Fixtures.flatFrame("a.dxf"))));
+        for (int n = 1; n <= 2; n++) {
+            assertTrue(s.contains("id=\"marker-" + n + "\" href=\"#finding-" + n + "\""), "marker " + n);
+            assertTrue(s.contains("<tr id=\"finding-" + n + "\""), "row " + n);
+            assertTrue(s.contains("<a href=\"#marker-" + n + "\">" + n + "</a>"), "row link " + n);
+        }
+        // finding 3 has no place: a row but no marker
+        assertTrue(s.contains("<tr id=\"finding-3\""));
+        assertFalse(s.contains("id=\"marker-3\""));
+        // every href="#x" points at an id that exists
+        Matcher m = Pattern.compile("href=\"#([^\"]+)\"").matcher(s);
+        while (m.find()) {
+            assertTrue(s.contains("id=\"" + m.group(1) + "\""), "dangling link #" + m.group(1));
+        }
+    }
+
+    @Test
+    void write_flatDrawing_onePlanView_3dDrawing_addsElevation() throws IOException {
+        assertEquals(1, count(html(List.of(Report.of(Fixtures.flatFrame("a.dxf")))), "<svg class=\"view\""));
+        // ring lifted 0.3 m above bars spanning 1 m: z extent 30 % of the horizontal one
+        String s = html(List.of(Report.of(Fixtures.frame("a.dxf", 0.3, false))));
+        assertEquals(2, count(s, "<svg class=\"view\""));
+        assertTrue(s.contains("Front elevation"));
+    }
+
+    @Test
+    void write_hasLegendCogScaleBarAndSections() throws IOException {
+        String s = html(List.of(Report.of(Fixtures.flatFrame("a.dxf"))));
+        assertTrue(s.contains("class=\"legend\""));
+        assertTrue(s.contains("<g class=\"cog\" id=\"cog-plan\""));
+        assertTrue(s.contains("<g class=\"scale\">"));
+        assertTrue(s.contains("BS 4449 nominal mass &lt;table 1&gt;"), "section source shown, escaped");
+        assertTrue(s.contains("Caution"));
+        assertEquals(3, count(s, "<polyline class=\"piece\""));
+    }
+
+    @Test
+    void write_severalDrawings_uniqueIdsAndCombinedTotals() throws IOException {
+        String s = html(List.of(Report.of(Fixtures.flatFrame("a.dxf")), Report.of(Fixtures.frame("b.dxf", 0, true))));
+        assertTrue(s.contains("id=\"d1-finding-1\""));
+        assertTrue(s.contains("id=\"d2-finding-1\""));
+        assertTrue(s.contains("All drawings together"));
+        assertTrue(s.contains("Totals are incomplete."));
+        Matcher m = Pattern.compile(" id=\"([^\"]+)\"").matcher(s);
+        java.util.Set<String> seen = new java.util.HashSet<>();
+        while (m.find()) {
+            assertTrue(seen.add(m.group(1)), "duplicate id " + m.group(1));
+        }
+    }
+
+    @Test
+    void niceBelow_picksOneTwoFive() {
+        assertEquals(0.2, SvgView.niceBelow(0.25), 0.0);
+        assertEquals(5.0, SvgView.niceBelow(9.9), 0.0);
+        assertEquals(100.0, SvgView.niceBelow(100.0), 0.0);
+    }
+
+    @Test
+    void escape_coversQuotesAndControls() {
+        assertEquals("&amp;&lt;&gt;&quot;&#39;ab", Html.escape("&<>\"'a\u0000b"));
+    }
+
+    private static int count(String s, String what) {
+        int n = 0;
+        for (int i = s.indexOf(what); i >= 0; i = s.indexOf(what, i + 1)) {
+            n++;
+        }
+        return n;
+    }
+}

@@ -1,0 +1,74 @@
+package org.linemass.reports.io;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStreamReader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class AtomicWriteTest {
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void write_replacesContentAndLeavesNoTemporaryFile() throws IOException {
+        Path f = dir.resolve("report.csv");
+        Files.writeString(f, "old");
+        AtomicWrite.write(f, out -> out.write("new".getBytes(StandardCharsets.UTF_8)));
+        assertEquals("new", Files.readString(f));
+        assertEquals(List.of(f), list());
+    }
+
+    @Test
+    void write_failingHalfway_keepsPreviousFile() throws IOException {
+        Path f = dir.resolve("report.html");
+        Files.writeString(f, "previous complete report");
+        IOException e = assertThrows(IOException.class, () -> AtomicWrite.write(f, out -> {
+            out.write("<html><body>half".getBytes(StandardCharsets.UTF_8));
+            throw new IOException("disk full (simulated)");
+        }));
+        assertEquals("disk full (simulated)", e.getMessage());
+        assertEquals("previous complete report", Files.readString(f));
+        assertEquals(List.of(f), list(), "the temporary file is removed");
+    }
+
+    @Test
+    void write_processKilledHalfway_keepsPreviousFile() throws Exception {
+        Path f = dir.resolve("report.json");
+        Files.writeString(f, "{\"previous\": true}");
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        Process p = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"),
+                SlowWriter.class.getName(), f.toString()).redirectErrorStream(true).start();
+        try (BufferedReader r = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8))) {
+            String line = r.readLine();
+            assertEquals("started", line);
+            p.destroyForcibly();
+            assertTrue(p.waitFor(30, TimeUnit.SECONDS));
+        }
+        assertEquals("{\"previous\": true}", Files.readString(f));
+    }
+
+    @Test
+    void write_createsMissingFolders() throws IOException {
+        Path f = dir.resolve("a/b/out.txt");
+        AtomicWrite.write(f, out -> out.write('x'));
+        assertEquals("x", Files.readString(f));
+    }
+
+    private List<Path> list() throws IOException {
+        try (Stream<Path> s = Files.list(dir)) {
+            return s.sorted().toList();
+        }
+    }
+}
