@@ -272,13 +272,8 @@ public final class DrawingReader {
             built.put(b.name, b.build());
         }
         Map<String, Layer> allLayers = new HashMap<>(layers);
-        for (BlockBuilder b : list) {
-            for (var s : b.segments) {
-                allLayers.computeIfAbsent(s.source().layer(), Layer::undefined);
-            }
-            for (var i : b.inserts) {
-                allLayers.computeIfAbsent(i.source().layer(), Layer::undefined);
-            }
+        for (String name : handler.usedLayers) {
+            allLayers.computeIfAbsent(name, Layer::undefined);
         }
         UnitChoice u = UnitChoice.of(header, options, file);
         u.note().ifPresent(n -> notes.add(0, n));

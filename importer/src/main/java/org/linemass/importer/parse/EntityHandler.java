@@ -25,6 +25,8 @@ final class EntityHandler {
     private final List<ImportNote> notes;
     private final boolean binary;
     long paperSpaceEntities;
+    /** Layer names used by entities read into blocks (pooled strings, so lookups are cheap). */
+    final java.util.Set<String> usedLayers = new java.util.HashSet<>();
 
     EntityHandler(String file, boolean binary, ImportOptions options, List<ImportNote> notes) {
         this.file = file;
@@ -52,6 +54,7 @@ final class EntityHandler {
             } else if (r.hasBadValue()) {
                 skip(p, badValue(r));
             } else {
+                usedLayers.add(layer);
                 try {
                     target.insertSpecs.add(InsertSpec.read(r, p));
                 } catch (EntitySkip e) {
@@ -67,6 +70,7 @@ final class EntityHandler {
             paperSpaceEntities++;
             return;
         }
+        usedLayers.add(layer);
         if (!Converters.isCurveType(type)) {
             target.countOther(type.isEmpty() ? "(unnamed)" : type);
             return;
@@ -110,6 +114,7 @@ final class EntityHandler {
             paperSpaceEntities++;
             return;
         }
+        usedLayers.add(p.layer());
         String counted = b.countedType();
         if (counted == null) {
             target.countOther(b.meshKind().equals("polyface mesh") ? "POLYFACE_MESH" : "POLYGON_MESH");

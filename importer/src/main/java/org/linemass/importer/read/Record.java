@@ -22,6 +22,7 @@ public final class Record {
     int badCode;
     String badText = "";
     boolean endOfInput;
+    boolean keepSubclassMarkers;
 
     void clear() {
         if (n > 0) {

@@ -44,6 +44,8 @@ public final class RecordReader {
         rec.clear();
         rec.type = src.pooledValue().trim();
         rec.position = src.position();
+        // subclass markers matter only where one record holds two subclasses with clashing codes
+        rec.keepSubclassMarkers = rec.type.equals("HELIX");
         if (rec.type.equals("EOF")) {
             // nothing after EOF is read: trailing bytes may be anything
             atEnd = true;
@@ -102,7 +104,7 @@ public final class RecordReader {
                 } else if (code == 5) {
                     s = src.stringValue().trim();
                     rec.handle = s;
-                } else if (code == 2 || code == 9 || code == 100) {
+                } else if (code == 2 || code == 9 || (code == 100 && rec.keepSubclassMarkers)) {
                     s = src.pooledValue().trim();
                 } else if (code >= 1 && code <= 7) {
                     s = src.stringValue();
