@@ -2,6 +2,9 @@ package org.linemass.importer.read;
 
 import ch.randelshofer.fastdoubleparser.JavaDoubleParser;
 import java.io.IOException;
+import java.lang.invoke.MethodHandles;
+import java.lang.invoke.VarHandle;
+import java.nio.ByteOrder;
 import java.nio.channels.ReadableByteChannel;
 import org.linemass.importer.DxfInputException;
 
@@ -14,6 +17,10 @@ import org.linemass.importer.DxfInputException;
 public final class AsciiGroupSource extends GroupSource {
 
     private static final int MAX_EXCERPT = 40;
+    private static final VarHandle LONGS = MethodHandles.byteArrayViewVarHandle(long[].class, ByteOrder.LITTLE_ENDIAN);
+    private static final long LF_BYTES = 0x0A0A0A0A0A0A0A0AL;
+    private static final long ONE_BYTES = 0x0101010101010101L;
+    private static final long HIGH_BITS = 0x8080808080808080L;
 
     private final ByteWindow w;
     private final int maxLineBytes;
@@ -46,9 +53,7 @@ public final class AsciiGroupSource extends GroupSource {
         while (true) {
             byte[] b = w.buf;
             int lim = w.limit;
-            while (i < lim && b[i] != '\n') {
-                i++;
-            }
+            i = findNewline(b, i, lim);
             if (i < lim || i - w.pos > maxLineBytes + 1) {
                 break;
             }
@@ -76,6 +81,27 @@ public final class AsciiGroupSource extends GroupSource {
         lineEnd = end;
         w.pos = i < w.limit ? i + 1 : i;
         return true;
+    }
+
+    /**
+     * Index of the first LF in b[from, limit), or limit. Eight bytes at a time: the classic
+     * zero-byte test ((x - 0x01..) & ~x & 0x80..) on the bytes XOR LF; its lowest set bit marks the
+     * first LF exactly (false positives can only appear above a true zero byte).
+     */
+    private static int findNewline(byte[] b, int from, int limit) {
+        int i = from;
+        while (i + Long.BYTES <= limit) {
+            long x = (long) LONGS.get(b, i) ^ LF_BYTES;
+            long t = (x - ONE_BYTES) & ~x & HIGH_BITS;
+            if (t != 0) {
+                return i + (Long.numberOfTrailingZeros(t) >>> 3);
+            }
+            i += Long.BYTES;
+        }
+        while (i < limit && b[i] != '\n') {
+            i++;
+        }
+        return i;
     }
 
     @Override
