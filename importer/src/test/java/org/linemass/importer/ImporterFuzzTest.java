@@ -13,7 +13,7 @@ class ImporterFuzzTest {
     /** Small limits keep each execution fast while exercising every limit path. */
     private static final ImportOptions SMALL = new ImportOptions(java.util.Optional.empty(), 16, 4096, 4096, 4096);
 
-    @FuzzTest(maxDuration = "30s")
+    @FuzzTest(maxDuration = "3m")
     void readAny(byte[] data) {
         try {
             DxfImporter.read("fuzz.dxf", data, SMALL);

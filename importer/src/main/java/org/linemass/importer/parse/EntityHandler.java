@@ -83,7 +83,7 @@ final class EntityHandler {
             Converters.convert(r, p, options.maxVertices(), options.maxControlPoints(), target.segments);
             target.countCurve(type);
         } catch (EntitySkip e) {
-            notes.add(new ImportNote("error", "skipped_entity", file, line, type, handle, layer, e.getMessage()));
+            notes.add(Notes.of("error", "skipped_entity", file, line, type, handle, layer, e.getMessage()));
         }
     }
 
@@ -118,7 +118,7 @@ final class EntityHandler {
         String counted = b.countedType();
         if (counted == null) {
             target.countOther(b.meshKind().equals("polyface mesh") ? "POLYFACE_MESH" : "POLYGON_MESH");
-            notes.add(new ImportNote("info", "ignored_entity", file, p.line(), type, handle, p.layer(),
+            notes.add(Notes.of("info", "ignored_entity", file, p.line(), type, handle, p.layer(),
                     b.meshKind() + " carries no wire geometry; ignored"));
             return;
         }
@@ -155,7 +155,7 @@ final class EntityHandler {
     }
 
     private void skip(Provenance p, String message) {
-        notes.add(new ImportNote("error", "skipped_entity", file, p.line(), p.entityType(), p.handle(), p.layer(),
+        notes.add(Notes.of("error", "skipped_entity", file, p.line(), p.entityType(), p.handle(), p.layer(),
                 message));
     }
 
