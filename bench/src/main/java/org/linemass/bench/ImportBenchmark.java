@@ -2,7 +2,6 @@ package org.linemass.bench;
 
 import java.io.BufferedWriter;
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -121,8 +120,6 @@ public class ImportBenchmark {
                 written += sb.length();
             }
             w.write("  0\nENDSEC\n  0\nEOF\n");
-        } catch (UncheckedIOException e) {
-            throw e.getCause();
         }
     }
 
