@@ -53,6 +53,36 @@ class RandomisedPropertyTest {
     }
 
     @Test
+    void decimalText_parsesExactlyAsJavaDoes() throws Exception {
+        Random rnd = new Random(99);
+        for (int c = 0; c < 200; c++) {
+            Dxf dxf = Dxf.create().entities();
+            String[] texts = new String[60];
+            for (int k = 0; k < texts.length; k++) {
+                double v = (rnd.nextDouble() - 0.5) * Math.pow(10, rnd.nextInt(12) - 3);
+                String t = switch (rnd.nextInt(5)) {
+                    case 0 -> String.format(Locale.ROOT, "%." + rnd.nextInt(10) + "f", v);
+                    case 1 -> Double.toString(v);
+                    case 2 -> String.format(Locale.ROOT, "%.12e", v);
+                    case 3 -> Long.toString(rnd.nextLong() % 1_000_000_000_000_000L);
+                    default -> String.format(Locale.ROOT, "%+.3f", v).replace("0.", ".");
+                };
+                texts[k] = t;
+            }
+            for (int k = 0; k < texts.length; k += 2) {
+                dxf.add(0, "LINE", 10, texts[k], 11, texts[k + 1]);
+            }
+            List<Segment> s = dxf.end().read().modelSpace().segments();
+            for (int k = 0; k < texts.length; k += 2) {
+                org.linemass.geometry.Straight st = (org.linemass.geometry.Straight) s.get(k / 2);
+                // reference: the JDK's correctly rounded decimal conversion
+                assertEquals(Double.parseDouble(texts[k]), st.a().x(), 0.0, texts[k]);
+                assertEquals(Double.parseDouble(texts[k + 1]), st.b().x(), 0.0, texts[k + 1]);
+            }
+        }
+    }
+
+    @Test
     void plainPaddedCrlfAndBinary_readTheSame() throws Exception {
         Random rnd = new Random(5);
         for (int c = 0; c < 50; c++) {

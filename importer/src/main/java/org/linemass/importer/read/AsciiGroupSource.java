@@ -181,35 +181,59 @@ public final class AsciiGroupSource extends GroupSource {
         while (e > s && (b[e - 1] == ' ' || b[e - 1] == '\t')) {
             e--;
         }
-        if (e - s > 0 && e - s <= 9 && isPlainInteger(b, s, e)) {
-            return parseSmallInt(b, s, e);
-        }
         if (e == s) {
             throw new NumberFormatException("empty");
         }
-        return JavaDoubleParser.parseDouble(b, s, e - s);
+        double fast = plainDecimal(b, s, e);
+        return fast == fast ? fast : JavaDoubleParser.parseDouble(b, s, e - s);
     }
 
-    private static boolean isPlainInteger(byte[] b, int s, int e) {
-        int i = b[s] == '-' || b[s] == '+' ? s + 1 : s;
-        if (i == e) {
-            return false;
+    /** Exact powers of ten up to 1e22 (all exactly representable as doubles). */
+    private static final double[] POW10 = new double[23];
+
+    static {
+        POW10[0] = 1;
+        for (int i = 1; i < POW10.length; i++) {
+            POW10[i] = POW10[i - 1] * 10;
         }
+    }
+
+    /** Most significant digits the fast path takes: 10^15 < 2^53, so the digits form an exact long-to-double. */
+    private static final int FAST_DIGITS = 15;
+
+    /**
+     * A plain decimal {@code [+-]digits[.digits]} with at most 15 digits, as the quotient of two
+     * exactly representable doubles, which IEEE division rounds correctly (the classic fast path
+     * of decimal conversion); NaN when the text is not of that simple form, for the full parser.
+     */
+    private static double plainDecimal(byte[] b, int s, int e) {
+        int i = s;
+        boolean neg = false;
+        if (b[i] == '-' || b[i] == '+') {
+            neg = b[i] == '-';
+            i++;
+        }
+        long m = 0;
+        int digits = 0;
+        int frac = -1;
         for (; i < e; i++) {
-            if (b[i] < '0' || b[i] > '9') {
-                return false;
+            int d = b[i] - '0';
+            if (d >= 0 && d <= 9) {
+                m = m * 10 + d;
+                digits++;
+                if (frac >= 0) {
+                    frac++;
+                }
+            } else if (b[i] == '.' && frac < 0) {
+                frac = 0;
+            } else {
+                return Double.NaN;
             }
         }
-        return true;
-    }
-
-    private static double parseSmallInt(byte[] b, int s, int e) {
-        boolean neg = b[s] == '-';
-        int i = b[s] == '-' || b[s] == '+' ? s + 1 : s;
-        int v = 0;
-        for (; i < e; i++) {
-            v = v * 10 + (b[i] - '0');
+        if (digits == 0 || digits > FAST_DIGITS) {
+            return Double.NaN;
         }
+        double v = frac > 0 ? m / POW10[frac] : m;
         return neg ? -v : v;
     }
 
