@@ -193,6 +193,15 @@ class HostileInputTest {
     }
 
     @Test
+    void knotsDecreasingWithinTheKnotTolerance_areTakenAsEqual() throws Exception {
+        // FACTS.md §7.2: knot tolerance 42 defaults to 1e-10; a rounding-size decrease is not an error
+        Drawing d = Dxf.create().entities().add(0, "SPLINE", 71, 1, 72, 4, 73, 2, 40, 0, 40, 0, 40, 1, 40, "0.9999999999999",
+                10, 0, 20, 0, 10, 1, 20, 0).end().read();
+        assertEquals(1, d.modelSpace().segments().size());
+        assertTrue(d.notes().stream().noneMatch(ImportNote::skippedGeometry));
+    }
+
+    @Test
     void zeroRadiusArcAndCircle() throws Exception {
         assertEquals("ARC radius must be positive, got 0.0",
                 skipped(oneEntity(0, "ARC", 10, 1, 20, 1, 40, 0, 50, 0, 51, 90)).message());
