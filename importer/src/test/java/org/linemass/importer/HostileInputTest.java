@@ -304,6 +304,20 @@ class HostileInputTest {
     }
 
     @Test
+    void lineWithAMillionRepeatedGroups_usesItsFirstValues() throws Exception {
+        StringBuilder sb = new StringBuilder("0\nSECTION\n2\nENTITIES\n0\nLINE\n10\n1\n11\n4\n21\n4\n");
+        for (int i = 0; i < 1_000_000; i++) {
+            sb.append("10\n9\n");
+        }
+        sb.append("0\nENDSEC\n0\nEOF\n");
+        Drawing d = assertTimeoutPreemptively(QUICK, () -> DxfImporter.read(Dxf.NAME, raw(sb.toString()),
+                ImportOptions.DEFAULTS));
+        org.linemass.geometry.Straight s = (org.linemass.geometry.Straight) d.modelSpace().segments().get(0);
+        // closed form: (1,0,0) to (4,4,0) has length 5
+        assertEquals(5, s.length(), 1e-12);
+    }
+
+    @Test
     void tenMegabyteLine() {
         char[] big = new char[10 << 20];
         Arrays.fill(big, 'w');

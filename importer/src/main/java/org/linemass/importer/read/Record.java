@@ -27,6 +27,7 @@ public final class Record {
     boolean keepSubclassMarkers;
     boolean keepAll = true;
     boolean lwpolyline;
+    boolean manyGroups;
 
     void clear() {
         if (ns > 0) {

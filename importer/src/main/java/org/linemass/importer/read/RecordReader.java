@@ -16,6 +16,13 @@ public final class RecordReader {
             "LEADER", "MLEADER", "MULTILEADER", "TOLERANCE", "IMAGE", "WIPEOUT", "OLE2FRAME", "TRACE", "MESH",
             "SURFACE", "PLANESURFACE", "ACAD_TABLE", "MLINE", "RAY", "XLINE", "SHAPE", "ARC_DIMENSION");
 
+    /**
+     * Groups kept for records whose values occur once (LINE, ARC, INSERT, VERTEX...): the converters
+     * read first occurrences only, so a hostile record with millions of repeated groups costs no
+     * memory. Only LWPOLYLINE, SPLINE, HELIX and section headers may hold up to the group limit.
+     */
+    private static final int SMALL_RECORD_GROUPS = 4096;
+
     private final GroupSource src;
     private final int maxGroups;
     private boolean started;
@@ -54,6 +61,8 @@ public final class RecordReader {
         rec.keepSubclassMarkers = rec.type.equals("HELIX");
         rec.keepAll = !IDENTITY_ONLY.contains(rec.type);
         rec.lwpolyline = rec.type.equals("LWPOLYLINE");
+        rec.manyGroups = rec.lwpolyline || rec.keepSubclassMarkers || rec.type.equals("SPLINE")
+                || rec.type.equals("SECTION");
         if (rec.type.equals("EOF")) {
             // nothing after EOF is read: trailing bytes may be anything
             atEnd = true;
@@ -71,10 +80,12 @@ public final class RecordReader {
                 if (code == 0) {
                     return true;
                 }
-                if (rec.n >= maxGroups) {
+                if (rec.n >= maxGroups && rec.manyGroups) {
                     throw src.error(src.position(), "", "", "record has more than " + maxGroups + " groups");
                 }
-                addGroup(rec, code);
+                if (rec.n < SMALL_RECORD_GROUPS || rec.manyGroups) {
+                    addGroup(rec, code);
+                }
             }
         } catch (DxfInputException e) {
             if (e.entityType().isEmpty() && !rec.type.isEmpty()) {
