@@ -41,17 +41,33 @@ public final class DxfInputException extends Exception {
     }
 
     static String format(String file, int line, String entityType, String handle, String problem) {
-        StringBuilder sb = new StringBuilder(file == null ? "<input>" : file);
+        StringBuilder sb = new StringBuilder(oneLine(file == null ? "<input>" : file, Integer.MAX_VALUE));
         if (line > 0) {
             sb.append(':').append(line);
         }
         if (entityType != null && !entityType.isEmpty()) {
-            sb.append(": ").append(entityType);
+            sb.append(": ").append(oneLine(entityType, MAX_NAME));
             if (handle != null && !handle.isEmpty()) {
-                sb.append(" (handle ").append(handle).append(')');
+                sb.append(" (handle ").append(oneLine(handle, MAX_NAME)).append(')');
             }
         }
-        sb.append(": ").append(problem.replace('\n', ' ').replace('\r', ' '));
+        sb.append(": ").append(oneLine(problem, Integer.MAX_VALUE));
+        return sb.toString();
+    }
+
+    /** Longest entity type or handle quoted in a message (longer ones come from broken files). */
+    private static final int MAX_NAME = 40;
+
+    /** {@code s} with control characters replaced by '?' and cut to {@code max} characters. */
+    public static String oneLine(String s, int max) {
+        StringBuilder sb = new StringBuilder(Math.min(s.length(), max) + 3);
+        for (int i = 0; i < s.length() && i < max; i++) {
+            char c = s.charAt(i);
+            sb.append(c == '\n' || c == '\r' ? ' ' : Character.isISOControl(c) ? '?' : c);
+        }
+        if (s.length() > max) {
+            sb.append("...");
+        }
         return sb.toString();
     }
 

@@ -324,6 +324,17 @@ class EntityGeometryTest {
     }
 
     @Test
+    void arcWithEqualAngles_isAZeroLengthPiece_andZeroTo360IsFull() throws Exception {
+        List<Segment> s = model(Dxf.create().entities().add(0, "ARC", 10, 1, 20, 0, 40, 2, 50, 90, 51, 90)
+                .add(0, "ARC", 10, 1, 20, 0, 40, 2, 50, 0, 51, 360).end().read());
+        Straight z = (Straight) s.get(0);
+        near(Vec3.of(1, 2, 0), z.a(), CLOSE);
+        assertEquals(z.a(), z.b());
+        // closed form: 2 pi r
+        assertEquals(4 * Math.PI, ((CircularArc) s.get(1)).length(), CLOSE);
+    }
+
+    @Test
     void zeroLengthLine_isKept() throws Exception {
         Straight s = (Straight) model(Dxf.create().entities().add(0, "LINE", 10, 4, 20, 4, 11, 4, 21, 4).end()
                 .read()).get(0);

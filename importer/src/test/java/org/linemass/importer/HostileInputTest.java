@@ -193,6 +193,15 @@ class HostileInputTest {
     }
 
     @Test
+    void knotsDecreasingWithinTheKnotTolerance_areTakenAsEqual() throws Exception {
+        // FACTS.md §7.2: knot tolerance 42 defaults to 1e-10; a rounding-size decrease is not an error
+        Drawing d = Dxf.create().entities().add(0, "SPLINE", 71, 1, 72, 4, 73, 2, 40, 0, 40, 0, 40, 1, 40, "0.9999999999999",
+                10, 0, 20, 0, 10, 1, 20, 0).end().read();
+        assertEquals(1, d.modelSpace().segments().size());
+        assertTrue(d.notes().stream().noneMatch(ImportNote::skippedGeometry));
+    }
+
+    @Test
     void zeroRadiusArcAndCircle() throws Exception {
         assertEquals("ARC radius must be positive, got 0.0",
                 skipped(oneEntity(0, "ARC", 10, 1, 20, 1, 40, 0, 50, 0, 51, 90)).message());
@@ -292,6 +301,20 @@ class HostileInputTest {
         assertEquals(1, errors.size(), () -> errors.subList(0, Math.min(3, errors.size())).toString());
         // model space is depth 0; B0 is placed at depth 1, so B63 at 64 and B64 would be at 65
         assertEquals("block 'B64' would be nested deeper than the limit of 64 levels", errors.get(0).message());
+    }
+
+    @Test
+    void lineWithAMillionRepeatedGroups_usesItsFirstValues() throws Exception {
+        StringBuilder sb = new StringBuilder("0\nSECTION\n2\nENTITIES\n0\nLINE\n10\n1\n11\n4\n21\n4\n");
+        for (int i = 0; i < 1_000_000; i++) {
+            sb.append("10\n9\n");
+        }
+        sb.append("0\nENDSEC\n0\nEOF\n");
+        Drawing d = assertTimeoutPreemptively(QUICK, () -> DxfImporter.read(Dxf.NAME, raw(sb.toString()),
+                ImportOptions.DEFAULTS));
+        org.linemass.geometry.Straight s = (org.linemass.geometry.Straight) d.modelSpace().segments().get(0);
+        // closed form: (1,0,0) to (4,4,0) has length 5
+        assertEquals(5, s.length(), 1e-12);
     }
 
     @Test

@@ -27,8 +27,12 @@ final class Bulge {
 
     static Segment piece(double x1, double y1, double x2, double y2, double z, double b, Affine ocs,
             Provenance p) {
-        Vec3 a = ocs.apply(new Vec3(x1, y1, z));
-        Vec3 e = ocs.apply(new Vec3(x2, y2, z));
+        return piece(x1, y1, x2, y2, z, b, ocs, p, ocs.apply(new Vec3(x1, y1, z)), ocs.apply(new Vec3(x2, y2, z)));
+    }
+
+    /** As above with the world end points already computed (shared between neighbouring pieces). */
+    static Segment piece(double x1, double y1, double x2, double y2, double z, double b, Affine ocs,
+            Provenance p, Vec3 a, Vec3 e) {
         double dx = x2 - x1;
         double dy = y2 - y1;
         double c = Math.hypot(dx, dy);

@@ -5,13 +5,15 @@ import org.linemass.geometry.Affine;
 import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
+import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
 import org.linemass.importer.read.Record;
 
 /**
  * CIRCLE and ARC: centre 10/20/30 in the OCS of 210/220/230, radius 40; an ARC runs
  * counter-clockwise about the extrusion direction from 50 to 51 (degrees), passing through 0
- * when 51 is below 50 (FACTS.md §7.2). The OCS x and y axes become the arc's u and v, so an
+ * when 51 is below 50 (FACTS.md §7.2); equal angles give a zero-length piece, not a full circle
+ * (a full turn is written as 0 and 360). The OCS x and y axes become the arc's u and v, so an
  * extrusion of (0, 0, -1) yields a clockwise arc seen from +Z.
  */
 final class CircleConverter {
@@ -36,6 +38,13 @@ final class CircleConverter {
             double s = start % FULL_TURN_DEGREES;
             if (s < 0) {
                 s += FULL_TURN_DEGREES;
+            }
+            if (start == end) {
+                // zero sweep: a degenerate arc of length 0, kept (like a zero-length LINE) for the checks
+                Vec3 p0 = ocs.apply(c.plus(new Vec3(radius * Math.cos(Math.toRadians(start)),
+                        radius * Math.sin(Math.toRadians(start)), 0)));
+                out.add(new Straight(p0, p0, p));
+                return;
             }
             double sweep = (end - start) % FULL_TURN_DEGREES;
             if (sweep <= 0) {

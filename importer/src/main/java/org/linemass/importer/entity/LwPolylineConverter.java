@@ -4,6 +4,7 @@ import java.util.List;
 import org.linemass.geometry.Affine;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
+import org.linemass.geometry.Vec3;
 import org.linemass.importer.read.Record;
 
 /**
@@ -55,12 +56,17 @@ final class LwPolylineConverter {
         if (count != declared) {
             throw new EntitySkip("declares " + declared + " vertices but has " + count);
         }
+        // neighbouring pieces share their joint point objects (less memory, exact same coordinates)
+        Vec3 first = count > 0 ? ocs.apply(new Vec3(xs[0], ys[0], elevation)) : null;
+        Vec3 a = first;
         for (int i = 0; i + 1 < count; i++) {
-            out.add(Bulge.piece(xs[i], ys[i], xs[i + 1], ys[i + 1], elevation, bs[i], ocs, p));
+            Vec3 e = ocs.apply(new Vec3(xs[i + 1], ys[i + 1], elevation));
+            out.add(Bulge.piece(xs[i], ys[i], xs[i + 1], ys[i + 1], elevation, bs[i], ocs, p, a, e));
+            a = e;
         }
         if ((flags & 1) != 0 && count > 1) {
             int l = count - 1;
-            out.add(Bulge.piece(xs[l], ys[l], xs[0], ys[0], elevation, bs[l], ocs, p));
+            out.add(Bulge.piece(xs[l], ys[l], xs[0], ys[0], elevation, bs[l], ocs, p, a, first));
         }
     }
 }

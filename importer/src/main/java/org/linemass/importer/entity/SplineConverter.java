@@ -21,6 +21,12 @@ final class SplineConverter {
     /** Highest degree accepted; the basis evaluation costs (degree + 1)^2 per point. */
     static final int MAX_DEGREE = 32;
 
+    /**
+     * Knot tolerance when the entity gives none (group code 42): the format's default of 1e-10,
+     * here relative to the knot size. Knots that decrease by no more than this are taken as equal.
+     */
+    static final double DEFAULT_KNOT_TOLERANCE = 1e-10;
+
     private SplineConverter() {
     }
 
@@ -141,7 +147,13 @@ final class SplineConverter {
             throw new EntitySkip("has " + nKnots + " knots; " + nCtrl + " control points of degree " + degree
                     + " need " + (nCtrl + degree + 1));
         }
+        double knotTolerance = Math.abs(r.num(42, DEFAULT_KNOT_TOLERANCE));
         for (int i = 1; i < nKnots; i++) {
+            if (knots[i] < knots[i - 1]
+                    && knots[i - 1] - knots[i] <= knotTolerance * Math.max(1, Math.abs(knots[i - 1]))) {
+                // decimal rounding in the file: equal within the spline's own knot tolerance
+                knots[i] = knots[i - 1];
+            }
             if (knots[i] < knots[i - 1]) {
                 throw new EntitySkip("knots decrease at index " + i + " (" + knots[i - 1] + " then " + knots[i] + ")");
             }

@@ -1,6 +1,7 @@
 package org.linemass.importer.parse;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
@@ -18,8 +19,8 @@ final class BlockBuilder {
     final List<Segment> segments = new ArrayList<>();
     final List<InsertSpec> insertSpecs = new ArrayList<>();
     final List<Insert> inserts = new ArrayList<>();
-    final Map<String, Integer> curveCounts = new TreeMap<>();
-    final Map<String, Integer> otherCounts = new TreeMap<>();
+    private final Map<String, int[]> curveCounts = new HashMap<>();
+    private final Map<String, int[]> otherCounts = new HashMap<>();
 
     BlockBuilder(String name, Vec3 basePoint) {
         this.name = name;
@@ -27,14 +28,20 @@ final class BlockBuilder {
     }
 
     void countCurve(String type) {
-        curveCounts.merge(type, 1, Integer::sum);
+        curveCounts.computeIfAbsent(type, k -> new int[1])[0]++;
     }
 
     void countOther(String type) {
-        otherCounts.merge(type, 1, Integer::sum);
+        otherCounts.computeIfAbsent(type, k -> new int[1])[0]++;
     }
 
     Block build() {
-        return new Block(name, basePoint, segments, inserts, curveCounts, otherCounts);
+        return new Block(name, basePoint, segments, inserts, frozen(curveCounts), frozen(otherCounts));
+    }
+
+    private static Map<String, Integer> frozen(Map<String, int[]> counts) {
+        Map<String, Integer> m = new TreeMap<>();
+        counts.forEach((k, v) -> m.put(k, v[0]));
+        return m;
     }
 }

@@ -195,7 +195,7 @@ public final class DrawingReader {
             }
             // stray records between blocks (ENDBLK without BLOCK, entities): ignored but counted
             if (!r.type().equals("ENDBLK")) {
-                notes.add(new ImportNote("warning", "stray_record", file, (int) Math.min(r.position(),
+                notes.add(Notes.of("warning", "stray_record", file, (int) Math.min(r.position(),
                         Integer.MAX_VALUE), r.type(), r.handle(), r.layer(), "record outside any BLOCK definition; ignored"));
             }
             pos = r.position();
@@ -221,7 +221,7 @@ public final class DrawingReader {
         } else if (upper.equals("*MODEL_SPACE") || upper.equals("$MODEL_SPACE")) {
             target = blocks.get(Drawing.MODEL_SPACE);
         } else if (blocks.containsKey(name)) {
-            notes.add(new ImportNote("warning", "duplicate_block", file, (int) Math.min(r.position(),
+            notes.add(Notes.of("warning", "duplicate_block", file, (int) Math.min(r.position(),
                     Integer.MAX_VALUE), "BLOCK", r.handle(), "", "block '" + name
                     + "' is defined again; the first definition is used"));
             target = new BlockBuilder(name, base);
@@ -272,13 +272,8 @@ public final class DrawingReader {
             built.put(b.name, b.build());
         }
         Map<String, Layer> allLayers = new HashMap<>(layers);
-        for (BlockBuilder b : list) {
-            for (var s : b.segments) {
-                allLayers.computeIfAbsent(s.source().layer(), Layer::undefined);
-            }
-            for (var i : b.inserts) {
-                allLayers.computeIfAbsent(i.source().layer(), Layer::undefined);
-            }
+        for (String name : handler.usedLayers) {
+            allLayers.computeIfAbsent(name, Layer::undefined);
         }
         UnitChoice u = UnitChoice.of(header, options, file);
         u.note().ifPresent(n -> notes.add(0, n));
@@ -305,7 +300,7 @@ public final class DrawingReader {
             String msg = "drawing units not given (" + why + "); assumed " + guess.symbol() + " from " + hint
                     + "; give the units explicitly to be sure";
             return new UnitChoice(guess, UnitSource.ASSUMED,
-                    java.util.Optional.of(new ImportNote("warning", "units_assumed", file, 0, "", "", "", msg)));
+                    java.util.Optional.of(Notes.of("warning", "units_assumed", file, 0, "", "", "", msg)));
         }
     }
 }

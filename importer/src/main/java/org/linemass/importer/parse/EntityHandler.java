@@ -25,6 +25,8 @@ final class EntityHandler {
     private final List<ImportNote> notes;
     private final boolean binary;
     long paperSpaceEntities;
+    /** Layer names used by entities read into blocks (pooled strings, so lookups are cheap). */
+    final java.util.Set<String> usedLayers = new java.util.HashSet<>();
 
     EntityHandler(String file, boolean binary, ImportOptions options, List<ImportNote> notes) {
         this.file = file;
@@ -52,6 +54,7 @@ final class EntityHandler {
             } else if (r.hasBadValue()) {
                 skip(p, badValue(r));
             } else {
+                usedLayers.add(layer);
                 try {
                     target.insertSpecs.add(InsertSpec.read(r, p));
                 } catch (EntitySkip e) {
@@ -67,6 +70,7 @@ final class EntityHandler {
             paperSpaceEntities++;
             return;
         }
+        usedLayers.add(layer);
         if (!Converters.isCurveType(type)) {
             target.countOther(type.isEmpty() ? "(unnamed)" : type);
             return;
@@ -79,7 +83,7 @@ final class EntityHandler {
             Converters.convert(r, p, options.maxVertices(), options.maxControlPoints(), target.segments);
             target.countCurve(type);
         } catch (EntitySkip e) {
-            notes.add(new ImportNote("error", "skipped_entity", file, line, type, handle, layer, e.getMessage()));
+            notes.add(Notes.of("error", "skipped_entity", file, line, type, handle, layer, e.getMessage()));
         }
     }
 
@@ -110,10 +114,11 @@ final class EntityHandler {
             paperSpaceEntities++;
             return;
         }
+        usedLayers.add(p.layer());
         String counted = b.countedType();
         if (counted == null) {
             target.countOther(b.meshKind().equals("polyface mesh") ? "POLYFACE_MESH" : "POLYGON_MESH");
-            notes.add(new ImportNote("info", "ignored_entity", file, p.line(), type, handle, p.layer(),
+            notes.add(Notes.of("info", "ignored_entity", file, p.line(), type, handle, p.layer(),
                     b.meshKind() + " carries no wire geometry; ignored"));
             return;
         }
@@ -150,7 +155,7 @@ final class EntityHandler {
     }
 
     private void skip(Provenance p, String message) {
-        notes.add(new ImportNote("error", "skipped_entity", file, p.line(), p.entityType(), p.handle(), p.layer(),
+        notes.add(Notes.of("error", "skipped_entity", file, p.line(), p.entityType(), p.handle(), p.layer(),
                 message));
     }
 

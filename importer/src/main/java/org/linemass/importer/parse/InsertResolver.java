@@ -120,7 +120,7 @@ final class InsertResolver {
     }
 
     private void skip(Provenance p, String message) {
-        notes.add(new ImportNote("error", "skipped_entity", file, p.line(), p.entityType(), p.handle(), p.layer(),
+        notes.add(Notes.of("error", "skipped_entity", file, p.line(), p.entityType(), p.handle(), p.layer(),
                 message));
     }
 

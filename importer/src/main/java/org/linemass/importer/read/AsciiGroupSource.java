@@ -2,6 +2,9 @@ package org.linemass.importer.read;
 
 import ch.randelshofer.fastdoubleparser.JavaDoubleParser;
 import java.io.IOException;
+import java.lang.invoke.MethodHandles;
+import java.lang.invoke.VarHandle;
+import java.nio.ByteOrder;
 import java.nio.channels.ReadableByteChannel;
 import org.linemass.importer.DxfInputException;
 
@@ -14,6 +17,10 @@ import org.linemass.importer.DxfInputException;
 public final class AsciiGroupSource extends GroupSource {
 
     private static final int MAX_EXCERPT = 40;
+    private static final VarHandle LONGS = MethodHandles.byteArrayViewVarHandle(long[].class, ByteOrder.LITTLE_ENDIAN);
+    private static final long LF_BYTES = 0x0A0A0A0A0A0A0A0AL;
+    private static final long ONE_BYTES = 0x0101010101010101L;
+    private static final long HIGH_BITS = 0x8080808080808080L;
 
     private final ByteWindow w;
     private final int maxLineBytes;
@@ -46,9 +53,7 @@ public final class AsciiGroupSource extends GroupSource {
         while (true) {
             byte[] b = w.buf;
             int lim = w.limit;
-            while (i < lim && b[i] != '\n') {
-                i++;
-            }
+            i = findNewline(b, i, lim);
             if (i < lim || i - w.pos > maxLineBytes + 1) {
                 break;
             }
@@ -76,6 +81,27 @@ public final class AsciiGroupSource extends GroupSource {
         lineEnd = end;
         w.pos = i < w.limit ? i + 1 : i;
         return true;
+    }
+
+    /**
+     * Index of the first LF in b[from, limit), or limit. Eight bytes at a time: the classic
+     * zero-byte test ((x - 0x01..) & ~x & 0x80..) on the bytes XOR LF; its lowest set bit marks the
+     * first LF exactly (false positives can only appear above a true zero byte).
+     */
+    private static int findNewline(byte[] b, int from, int limit) {
+        int i = from;
+        while (i + Long.BYTES <= limit) {
+            long x = (long) LONGS.get(b, i) ^ LF_BYTES;
+            long t = (x - ONE_BYTES) & ~x & HIGH_BITS;
+            if (t != 0) {
+                return i + (Long.numberOfTrailingZeros(t) >>> 3);
+            }
+            i += Long.BYTES;
+        }
+        while (i < limit && b[i] != '\n') {
+            i++;
+        }
+        return i;
     }
 
     @Override
@@ -155,35 +181,59 @@ public final class AsciiGroupSource extends GroupSource {
         while (e > s && (b[e - 1] == ' ' || b[e - 1] == '\t')) {
             e--;
         }
-        if (e - s > 0 && e - s <= 9 && isPlainInteger(b, s, e)) {
-            return parseSmallInt(b, s, e);
-        }
         if (e == s) {
             throw new NumberFormatException("empty");
         }
-        return JavaDoubleParser.parseDouble(b, s, e - s);
+        double fast = plainDecimal(b, s, e);
+        return fast == fast ? fast : JavaDoubleParser.parseDouble(b, s, e - s);
     }
 
-    private static boolean isPlainInteger(byte[] b, int s, int e) {
-        int i = b[s] == '-' || b[s] == '+' ? s + 1 : s;
-        if (i == e) {
-            return false;
+    /** Exact powers of ten up to 1e22 (all exactly representable as doubles). */
+    private static final double[] POW10 = new double[23];
+
+    static {
+        POW10[0] = 1;
+        for (int i = 1; i < POW10.length; i++) {
+            POW10[i] = POW10[i - 1] * 10;
         }
+    }
+
+    /** Most significant digits the fast path takes: 10^15 < 2^53, so the digits form an exact long-to-double. */
+    private static final int FAST_DIGITS = 15;
+
+    /**
+     * A plain decimal {@code [+-]digits[.digits]} with at most 15 digits, as the quotient of two
+     * exactly representable doubles, which IEEE division rounds correctly (the classic fast path
+     * of decimal conversion); NaN when the text is not of that simple form, for the full parser.
+     */
+    private static double plainDecimal(byte[] b, int s, int e) {
+        int i = s;
+        boolean neg = false;
+        if (b[i] == '-' || b[i] == '+') {
+            neg = b[i] == '-';
+            i++;
+        }
+        long m = 0;
+        int digits = 0;
+        int frac = -1;
         for (; i < e; i++) {
-            if (b[i] < '0' || b[i] > '9') {
-                return false;
+            int d = b[i] - '0';
+            if (d >= 0 && d <= 9) {
+                m = m * 10 + d;
+                digits++;
+                if (frac >= 0) {
+                    frac++;
+                }
+            } else if (b[i] == '.' && frac < 0) {
+                frac = 0;
+            } else {
+                return Double.NaN;
             }
         }
-        return true;
-    }
-
-    private static double parseSmallInt(byte[] b, int s, int e) {
-        boolean neg = b[s] == '-';
-        int i = b[s] == '-' || b[s] == '+' ? s + 1 : s;
-        int v = 0;
-        for (; i < e; i++) {
-            v = v * 10 + (b[i] - '0');
+        if (digits == 0 || digits > FAST_DIGITS) {
+            return Double.NaN;
         }
+        double v = frac > 0 ? m / POW10[frac] : m;
         return neg ? -v : v;
     }
 

@@ -16,35 +16,52 @@ public final class Record {
     String layer = "0";
     int n;
     int[] codes = new int[64];
+    /** Numeric value, or for a decoded string the index into {@link #strs}; NaN when absent. */
     double[] nums = new double[64];
-    String[] strs = new String[64];
+    String[] strs = new String[16];
+    int ns;
     long badPosition = -1;
     int badCode;
     String badText = "";
     boolean endOfInput;
+    boolean keepSubclassMarkers;
+    boolean keepAll = true;
+    boolean lwpolyline;
+    boolean manyGroups;
 
     void clear() {
-        if (n > 0) {
-            Arrays.fill(strs, 0, n, null);
+        if (ns > 0) {
+            Arrays.fill(strs, 0, ns, null);
         }
         n = 0;
+        ns = 0;
         handle = "";
         layer = "0";
         badPosition = -1;
         endOfInput = false;
     }
 
-    void add(int code, double num, String str) {
+    void add(int code, double num) {
         if (n == codes.length) {
             int cap = n * 2;
             codes = Arrays.copyOf(codes, cap);
             nums = Arrays.copyOf(nums, cap);
-            strs = Arrays.copyOf(strs, cap);
         }
         codes[n] = code;
         nums[n] = num;
-        strs[n] = str;
         n++;
+    }
+
+    void addString(int code, String str) {
+        if (str == null) {
+            add(code, Double.NaN);
+            return;
+        }
+        if (ns == strs.length) {
+            strs = Arrays.copyOf(strs, ns * 2);
+        }
+        strs[ns] = str;
+        add(code, ns++);
     }
 
     /** The record type: the value of its 0 group (SECTION, LINE, VERTEX...). */
@@ -82,8 +99,10 @@ public final class Record {
         return nums[i];
     }
 
+    /** The decoded text of group i, or null when it is not a kept string. */
     public String str(int i) {
-        return strs[i];
+        double v = nums[i];
+        return GroupSource.kind(codes[i]) == GroupSource.Kind.STRING && v >= 0 && v < ns ? strs[(int) v] : null;
     }
 
     /** Index of the first group with {@code code} at or after {@code from}, or -1. */
@@ -107,7 +126,8 @@ public final class Record {
 
     public String str(int code, String dflt) {
         int i = indexOf(code);
-        return i < 0 || strs[i] == null ? dflt : strs[i];
+        String s = i < 0 ? null : str(i);
+        return s == null ? dflt : s;
     }
 
     /** True when some numeric value of this record could not be read as a number. */

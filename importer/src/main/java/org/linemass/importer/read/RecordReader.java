@@ -10,6 +10,19 @@ import org.linemass.importer.DxfInputException;
  */
 public final class RecordReader {
 
+    /** Record types whose values the importer never reads beyond their identity (counted only). */
+    private static final java.util.Set<String> IDENTITY_ONLY = java.util.Set.of("TEXT", "MTEXT", "HATCH",
+            "DIMENSION", "SOLID", "3DFACE", "3DSOLID", "REGION", "BODY", "VIEWPORT", "POINT", "ATTRIB", "ATTDEF",
+            "LEADER", "MLEADER", "MULTILEADER", "TOLERANCE", "IMAGE", "WIPEOUT", "OLE2FRAME", "TRACE", "MESH",
+            "SURFACE", "PLANESURFACE", "ACAD_TABLE", "MLINE", "RAY", "XLINE", "SHAPE", "ARC_DIMENSION");
+
+    /**
+     * Groups kept for records whose values occur once (LINE, ARC, INSERT, VERTEX...): the converters
+     * read first occurrences only, so a hostile record with millions of repeated groups costs no
+     * memory. Only LWPOLYLINE, SPLINE, HELIX and section headers may hold up to the group limit.
+     */
+    private static final int SMALL_RECORD_GROUPS = 4096;
+
     private final GroupSource src;
     private final int maxGroups;
     private boolean started;
@@ -44,6 +57,12 @@ public final class RecordReader {
         rec.clear();
         rec.type = src.pooledValue().trim();
         rec.position = src.position();
+        // subclass markers matter only where one record holds two subclasses with clashing codes
+        rec.keepSubclassMarkers = rec.type.equals("HELIX");
+        rec.keepAll = !IDENTITY_ONLY.contains(rec.type);
+        rec.lwpolyline = rec.type.equals("LWPOLYLINE");
+        rec.manyGroups = rec.lwpolyline || rec.keepSubclassMarkers || rec.type.equals("SPLINE")
+                || rec.type.equals("SECTION");
         if (rec.type.equals("EOF")) {
             // nothing after EOF is read: trailing bytes may be anything
             atEnd = true;
@@ -61,10 +80,12 @@ public final class RecordReader {
                 if (code == 0) {
                     return true;
                 }
-                if (rec.n >= maxGroups) {
+                if (rec.n >= maxGroups && rec.manyGroups) {
                     throw src.error(src.position(), "", "", "record has more than " + maxGroups + " groups");
                 }
-                addGroup(rec, code);
+                if (rec.n < SMALL_RECORD_GROUPS || rec.manyGroups) {
+                    addGroup(rec, code);
+                }
             }
         } catch (DxfInputException e) {
             if (e.entityType().isEmpty() && !rec.type.isEmpty()) {
@@ -78,7 +99,29 @@ public final class RecordReader {
         return src.error(src.lastErrorPosition(), rec.type, rec.handle, e.problem());
     }
 
+    /**
+     * Whether a group is kept: application data, reactors, owner handles, binary chunks and
+     * extended data never are; entity types without wire geometry keep only their identity
+     * (2, 5, 8, 66, 67); LWPOLYLINE drops per-vertex widths and ids. This bounds memory on huge
+     * records and keeps the common path short.
+     */
+    private static boolean keep(Record rec, int code) {
+        if (code == 102 || code == 330 || code == 360 || code >= 1000 || (code >= 310 && code <= 319)) {
+            return false;
+        }
+        if (code == 100) {
+            return rec.keepSubclassMarkers;
+        }
+        if (!rec.keepAll) {
+            return code == 2 || code == 5 || code == 8 || code == 66 || code == 67;
+        }
+        return !(rec.lwpolyline && (code == 40 || code == 41 || code == 91));
+    }
+
     private void addGroup(Record rec, int code) {
+        if (!keep(rec, code)) {
+            return;
+        }
         switch (GroupSource.kind(code)) {
             case DOUBLE, INT, BOOL -> {
                 double v;
@@ -92,7 +135,7 @@ public final class RecordReader {
                     }
                     v = Double.NaN;
                 }
-                rec.add(code, v, null);
+                rec.add(code, v);
             }
             case STRING -> {
                 String s = null;
@@ -107,9 +150,9 @@ public final class RecordReader {
                 } else if (code >= 1 && code <= 7) {
                     s = src.stringValue();
                 }
-                rec.add(code, Double.NaN, s);
+                rec.addString(code, s);
             }
-            default -> rec.add(code, Double.NaN, null);
+            default -> rec.add(code, Double.NaN);
         }
     }
 }
