@@ -1,0 +1,175 @@
+package org.linemass.engine.assemble;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
+import org.linemass.engine.AnalysisException;
+import org.linemass.engine.field.FieldDensity;
+import org.linemass.engine.integrate.LinearDensity;
+import org.linemass.engine.integrate.MomentIntegrator;
+import org.linemass.engine.moments.Moments;
+import org.linemass.engine.moments.MomentsAccumulator;
+import org.linemass.engine.pieces.Piece;
+import org.linemass.engine.pieces.PieceAnalysis;
+import org.linemass.engine.result.MarkResult;
+import org.linemass.engine.result.PieceResult;
+import org.linemass.engine.result.SourceRef;
+import org.linemass.engine.section.Section;
+import org.linemass.geometry.Segment;
+import org.linemass.geometry.Vec3;
+
+/**
+ * Turns the piece stage's output into piece results and marks. Per piece: length moments (every
+ * segment integrated in world metres and combined with compensated summation), mass moments from
+ * the layer's density field ({@code s} measured from the piece's start along its segments) or from
+ * its section's constant kg/m, start, end, bends and sources. Pieces are numbered 1.. after sorting
+ * by layer, then length centroid (x, y, z), then length. Marks: the stage's groups (pieces it left
+ * out of every group become single marks), ordered by layer, then length each (longest first), then
+ * lowest piece id, and named {@code M01}, {@code M02}, ... in that order. Single use.
+ */
+public final class PieceAssembler {
+
+    /** Everything assembled from the pieces. */
+    public record Output(List<PieceResult> pieces, List<MarkResult> marks, Map<String, Integer> piecesPerLayer,
+            Map<String, Moments> fieldMassPerLayer, Map<Integer, Integer> idByStageIndex) {
+
+        /** Nothing: no pieces were formed. */
+        public static final Output EMPTY = new Output(List.of(), List.of(), Map.of(), Map.of(), Map.of());
+
+        public Output {
+            pieces = List.copyOf(pieces);
+            marks = List.copyOf(marks);
+            piecesPerLayer = Map.copyOf(piecesPerLayer);
+            fieldMassPerLayer = Map.copyOf(fieldMassPerLayer);
+            idByStageIndex = Map.copyOf(idByStageIndex);
+        }
+    }
+
+    private record Computed(int original, Piece piece, Moments length, Moments mass, Optional<Section> section) {
+    }
+
+    private PieceAssembler() {
+    }
+
+    public static Output assemble(PieceAnalysis analysis, MaterialPlan plan, double relative) throws AnalysisException {
+        List<Computed> computed = new ArrayList<>();
+        List<Piece> pieces = analysis.pieces();
+        for (int i = 0; i < pieces.size(); i++) {
+            Piece p = pieces.get(i);
+            LayerMaterial mat = plan.forLayer(p.layer());
+            MomentsAccumulator length = new MomentsAccumulator();
+            for (Segment s : p.segments()) {
+                length.add(MomentIntegrator.lengthMoments(s, relative));
+            }
+            Moments lm = length.result();
+            Moments mass = null;
+            if (mat.field().isPresent()) {
+                mass = fieldMass(p.segments(), new FieldDensity(mat.field().get()), relative);
+            } else if (mat.section().isPresent()) {
+                mass = lm.scaledDensity(mat.section().get().kgPerM());
+            }
+            computed.add(new Computed(i, p, lm, mass, mat.section()));
+        }
+        computed.sort(Comparator.comparing((Computed c) -> c.piece().layer())
+                .thenComparingDouble(c -> c.length().centroid().x())
+                .thenComparingDouble(c -> c.length().centroid().y())
+                .thenComparingDouble(c -> c.length().centroid().z())
+                .thenComparingDouble(c -> c.length().mass()));
+        Map<Integer, Integer> idOf = new HashMap<>();
+        for (int k = 0; k < computed.size(); k++) {
+            idOf.put(computed.get(k).original(), k + 1);
+        }
+        List<List<Integer>> groups = groupsById(analysis, idOf, computed.size());
+        groups.sort(Comparator.comparing((List<Integer> g) -> computed.get(g.get(0) - 1).piece().layer())
+                .thenComparingDouble(g -> -computed.get(g.get(0) - 1).length().mass())
+                .thenComparingInt(g -> g.get(0)));
+        String[] markOf = new String[computed.size() + 1];
+        List<MarkResult> marks = new ArrayList<>();
+        for (int gi = 0; gi < groups.size(); gi++) {
+            String mark = String.format(Locale.ROOT, "M%02d", gi + 1);
+            List<Integer> ids = groups.get(gi);
+            Computed first = computed.get(ids.get(0) - 1);
+            double lengthTotal = 0;
+            double massTotal = 0;
+            boolean massKnown = first.mass() != null;
+            for (int id : ids) {
+                markOf[id] = mark;
+                Computed c = computed.get(id - 1);
+                lengthTotal += c.length().mass();
+                massKnown &= c.mass() != null;
+                massTotal += c.mass() == null ? 0 : c.mass().mass();
+            }
+            marks.add(new MarkResult(mark, ids.size(), first.piece().layer(),
+                    first.section().map(Section::id).orElse(null),
+                    first.section().map(Section::material).orElse(""), first.length().mass(),
+                    massKnown ? first.mass().mass() : null, lengthTotal, massKnown ? massTotal : null,
+                    first.piece().bends().size(), ids));
+        }
+        List<PieceResult> results = new ArrayList<>();
+        Map<String, Integer> perLayer = new TreeMap<>();
+        Map<String, MomentsAccumulator> fieldMass = new TreeMap<>();
+        for (int k = 0; k < computed.size(); k++) {
+            Computed c = computed.get(k);
+            Piece p = c.piece();
+            perLayer.merge(p.layer(), 1, Integer::sum);
+            if (c.mass() != null && plan.forLayer(p.layer()).field().isPresent()) {
+                fieldMass.computeIfAbsent(p.layer(), x -> new MomentsAccumulator()).add(c.mass());
+            }
+            List<SourceRef> sources = p.segments().stream().map(s -> SourceRef.of(s.source())).toList();
+            Vec3 start = p.segments().isEmpty() ? c.length().centroid() : p.segments().get(0).start();
+            Vec3 end = p.segments().isEmpty() ? c.length().centroid() : p.segments().get(p.segments().size() - 1).end();
+            results.add(new PieceResult(k + 1, p.layer(), c.section().map(Section::id).orElse(null),
+                    c.length().mass(), c.mass() == null ? null : c.mass().mass(),
+                    c.mass() == null ? c.length().centroid() : c.mass().centroid(), c.length().inertia(),
+                    c.mass() == null ? null : c.mass().inertia(), start, end, p.closed(), p.segments().size(),
+                    markOf[k + 1], p.bends(), sources, c.length().errorBound()));
+        }
+        Map<String, Moments> fm = new TreeMap<>();
+        fieldMass.forEach((l, a) -> fm.put(l, a.result()));
+        return new Output(results, marks, perLayer, fm, idOf);
+    }
+
+    /** Mass moments of a piece under a density field, s running from the piece's start. */
+    static Moments fieldMass(List<Segment> segments, LinearDensity density, double relative) {
+        MomentsAccumulator acc = new MomentsAccumulator();
+        double s0 = 0;
+        for (Segment s : segments) {
+            acc.add(MomentIntegrator.integrate(s, density, s0, relative, MomentIntegrator.DEFAULT_MAX_EVALUATIONS)
+                    .moments());
+            if (density.usesArcLength()) {
+                s0 += MomentIntegrator.lengthMoments(s, relative).mass();
+            }
+        }
+        return acc.result();
+    }
+
+    private static List<List<Integer>> groupsById(PieceAnalysis analysis, Map<Integer, Integer> idOf, int n) {
+        List<List<Integer>> out = new ArrayList<>();
+        boolean[] seen = new boolean[n + 1];
+        for (List<Integer> g : analysis.groups()) {
+            List<Integer> ids = new ArrayList<>();
+            for (int original : g) {
+                Integer id = idOf.get(original);
+                if (id != null && !seen[id]) {
+                    seen[id] = true;
+                    ids.add(id);
+                }
+            }
+            if (!ids.isEmpty()) {
+                ids.sort(null);
+                out.add(ids);
+            }
+        }
+        for (int id = 1; id <= n; id++) {
+            if (!seen[id]) {
+                out.add(new ArrayList<>(List.of(id)));
+            }
+        }
+        return out;
+    }
+}
