@@ -52,7 +52,8 @@ public record LayerTotals(Map<String, Moments> moments, Map<String, Long> segmen
         moments.forEach((k, v) -> {
             Sym3 spread = Sym3.outer(columnStep).times(nr * sc).plus(Sym3.outer(rowStep).times(nc * sr));
             m.put(k, new Moments(n * v.mass(), v.centroid().plus(mean),
-                    v.covariance().times(n).plus(spread.times(v.mass())), n * v.errorBound()));
+                    v.covariance().times(n).plus(spread.times(v.mass())),
+                    n * v.errorBound() + Moments.TRANSFORM_ROUNDING * n * v.mass()));
         });
         Map<String, Long> c = new TreeMap<>();
         long copies = (long) columns * rows;

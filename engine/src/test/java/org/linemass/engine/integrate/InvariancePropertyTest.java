@@ -22,7 +22,7 @@ import org.linemass.geometry.Vec3;
  * re-parametrised by knot insertion or degree elevation) has the same moments; moments of a
  * transformed curve are the transformed moments; splitting and recombining is exact.
  */
-class InvarianceProperties {
+class InvariancePropertyTest {
 
     /** The bound for invariance: 1e-9 relative (the integrator aims at 1e-10 per integral). */
     private static final double REL = 1e-9;

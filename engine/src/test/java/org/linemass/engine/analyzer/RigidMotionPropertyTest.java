@@ -29,7 +29,7 @@ import org.linemass.geometry.Vec3;
  * Moving, rotating or mirroring a whole drawing changes length and mass by less than 1e-9 relative
  * and moves centroid and inertia with it: {@code g' = Q g + t}, {@code I' = Q I Q^T}.
  */
-class RigidMotionProperties {
+class RigidMotionPropertyTest {
 
     private static final double REL = 1e-9;
 
