@@ -138,7 +138,7 @@ public final class Analyzer {
             for (int i = 0; i < pa.pieces().size(); i++) {
                 var piece = pa.pieces().get(i);
                 LineIntegral.Value v = LineIntegral.along(piece.segments(), f, settings.integrationRelative());
-                int id = assembled.idByStageIndex().getOrDefault(i, 0);
+                int id = assembled.idByStageIndex().get(i);
                 values.add(new PieceValue(id, piece.layer(), v.lengthM(), v.value(), v.errorBound()));
                 double[] acc = perLayer.computeIfAbsent(piece.layer(), k -> new double[4]);
                 acc[0] += 1;

@@ -2,9 +2,7 @@ package org.linemass.engine.assemble;
 
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
@@ -34,19 +32,27 @@ import org.linemass.geometry.Vec3;
  */
 public final class PieceAssembler {
 
-    /** Everything assembled from the pieces. */
+    /**
+     * Everything assembled from the pieces.
+     *
+     * @param pieces piece results, numbered 1.. in output order
+     * @param marks the marks in output order
+     * @param piecesPerLayer number of pieces per layer
+     * @param fieldMassPerLayer mass moments of the layers with a density field, summed over their pieces
+     * @param idByStageIndex the piece id given to the stage's piece at each index
+     */
     public record Output(List<PieceResult> pieces, List<MarkResult> marks, Map<String, Integer> piecesPerLayer,
-            Map<String, Moments> fieldMassPerLayer, Map<Integer, Integer> idByStageIndex) {
+            Map<String, Moments> fieldMassPerLayer, List<Integer> idByStageIndex) {
 
         /** Nothing: no pieces were formed. */
-        public static final Output EMPTY = new Output(List.of(), List.of(), Map.of(), Map.of(), Map.of());
+        public static final Output EMPTY = new Output(List.of(), List.of(), Map.of(), Map.of(), List.of());
 
         public Output {
             pieces = List.copyOf(pieces);
             marks = List.copyOf(marks);
             piecesPerLayer = Map.copyOf(piecesPerLayer);
             fieldMassPerLayer = Map.copyOf(fieldMassPerLayer);
-            idByStageIndex = Map.copyOf(idByStageIndex);
+            idByStageIndex = List.copyOf(idByStageIndex);
         }
     }
 
@@ -62,11 +68,7 @@ public final class PieceAssembler {
         for (int i = 0; i < pieces.size(); i++) {
             Piece p = pieces.get(i);
             LayerMaterial mat = plan.forLayer(p.layer());
-            MomentsAccumulator length = new MomentsAccumulator();
-            for (Segment s : p.segments()) {
-                length.add(MomentIntegrator.lengthMoments(s, relative));
-            }
-            Moments lm = length.result();
+            Moments lm = lengthMoments(p.segments(), relative);
             Moments mass = null;
             if (mat.field().isPresent()) {
                 mass = fieldMass(p.segments(), new FieldDensity(mat.field().get()), relative);
@@ -80,9 +82,9 @@ public final class PieceAssembler {
                 .thenComparingDouble(c -> c.length().centroid().y())
                 .thenComparingDouble(c -> c.length().centroid().z())
                 .thenComparingDouble(c -> c.length().mass()));
-        Map<Integer, Integer> idOf = new HashMap<>();
+        int[] idOf = new int[computed.size()];
         for (int k = 0; k < computed.size(); k++) {
-            idOf.put(computed.get(k).original(), k + 1);
+            idOf[computed.get(k).original()] = k + 1;
         }
         List<List<Integer>> groups = groupsById(analysis, idOf, computed.size());
         groups.sort(Comparator.comparing((List<Integer> g) -> computed.get(g.get(0) - 1).piece().layer())
@@ -91,7 +93,7 @@ public final class PieceAssembler {
         String[] markOf = new String[computed.size() + 1];
         List<MarkResult> marks = new ArrayList<>();
         for (int gi = 0; gi < groups.size(); gi++) {
-            String mark = String.format(Locale.ROOT, "M%02d", gi + 1);
+            String mark = gi < 9 ? "M0" + (gi + 1) : "M" + (gi + 1);
             List<Integer> ids = groups.get(gi);
             Computed first = computed.get(ids.get(0) - 1);
             double lengthTotal = 0;
@@ -131,8 +133,34 @@ public final class PieceAssembler {
         }
         Map<String, Moments> fm = new TreeMap<>();
         fieldMass.forEach((l, a) -> fm.put(l, a.result()));
-        return new Output(results, marks, perLayer, fm, idOf);
+        List<Integer> ids = new ArrayList<>(idOf.length);
+        for (int id : idOf) {
+            ids.add(id);
+        }
+        return new Output(results, marks, perLayer, fm, ids);
     }
+
+    /**
+     * Length moments of a piece: short pieces by the parallel-axis rule directly (a handful of
+     * roundings), longer ones with compensated summation.
+     */
+    static Moments lengthMoments(List<Segment> segments, double relative) {
+        if (segments.size() <= SHORT_PIECE) {
+            Moments m = Moments.ZERO;
+            for (Segment s : segments) {
+                m = m.plus(MomentIntegrator.lengthMoments(s, relative));
+            }
+            return m;
+        }
+        MomentsAccumulator acc = new MomentsAccumulator();
+        for (Segment s : segments) {
+            acc.add(MomentIntegrator.lengthMoments(s, relative));
+        }
+        return acc.result();
+    }
+
+    /** Pieces with at most this many segments are summed without compensation. */
+    static final int SHORT_PIECE = 8;
 
     /** Mass moments of a piece under a density field, s running from the piece's start. */
     static Moments fieldMass(List<Segment> segments, LinearDensity density, double relative) {
@@ -148,14 +176,14 @@ public final class PieceAssembler {
         return acc.result();
     }
 
-    private static List<List<Integer>> groupsById(PieceAnalysis analysis, Map<Integer, Integer> idOf, int n) {
+    private static List<List<Integer>> groupsById(PieceAnalysis analysis, int[] idOf, int n) {
         List<List<Integer>> out = new ArrayList<>();
         boolean[] seen = new boolean[n + 1];
         for (List<Integer> g : analysis.groups()) {
             List<Integer> ids = new ArrayList<>();
             for (int original : g) {
-                Integer id = idOf.get(original);
-                if (id != null && !seen[id]) {
+                int id = original >= 0 && original < idOf.length ? idOf[original] : 0;
+                if (id > 0 && !seen[id]) {
                     seen[id] = true;
                     ids.add(id);
                 }
