@@ -57,7 +57,13 @@ public final class LayerAssembler {
         for (Map.Entry<String, Moments> e : new TreeMap<>(drawn).entrySet()) {
             String name = e.getKey();
             Moments raw = e.getValue();
-            Moments length = removed.containsKey(name) ? raw.minus(removed.get(name)) : raw;
+            Moments length;
+            try {
+                length = removed.containsKey(name) ? raw.minus(removed.get(name)) : raw;
+            } catch (IllegalArgumentException bug) {
+                throw new IllegalStateException("internal error, please report: the piece stage removed more length "
+                        + "from layer " + name + " than was drawn (" + bug.getMessage() + ")", bug);
+            }
             LayerMaterial mat = plan.forLayer(name);
             Moments mass = null;
             if (mat.field().isPresent()) {

@@ -100,6 +100,26 @@ class ReferenceLibraryTest {
     }
 
     @Test
+    void cusp_isSplitAtZeroSpeed() {
+        // cubic Bezier P0=(0,0), P1=(1,1), P2=(0,1), P3=(1,0): C'(1/2) = 3[(P1-P0)/4 + (P2-P1)/2 + (P3-P2)/4] = 0,
+        // a cusp; |C'| has a kink there, which the integrator must cut at
+        Nurbs cusp = Nurbs.of(3, new double[] {0, 0, 0, 0, 1, 1, 1, 1}, new Vec3[] {new Vec3(0, 0, 0),
+            new Vec3(1, 1, 0), new Vec3(0, 1, 0), new Vec3(1, 0, 0)}, null, TestCurves.SRC);
+        double[] cuts = MomentIntegrator.cuts(cusp);
+        assertTrue(java.util.Arrays.stream(cuts).anyMatch(c -> Math.abs(c - 0.5) < 1e-7), java.util.Arrays.toString(cuts));
+        MomentIntegrator.Result r = MomentIntegrator.integrate(cusp, LinearDensity.UNIT, 0, 1e-10,
+                MomentIntegrator.DEFAULT_MAX_EVALUATIONS);
+        IterativeLegendreGaussIntegrator lg = new IterativeLegendreGaussIntegrator(16, 1e-14, 1e-15, 2, 64);
+        UnivariateFunction speed = t -> cusp.derivative(t).norm();
+        double reference = lg.integrate(Integer.MAX_VALUE, speed, 0, 0.5) + lg.integrate(Integer.MAX_VALUE, speed, 0.5, 1);
+        assertTrue(r.converged());
+        assertEquals(reference, r.moments().mass(), 1e-10 * reference);
+        assertTrue(Math.abs(reference - r.moments().mass()) <= r.moments().errorBound() + 1e-14);
+        // a smooth integrand on each side: a few hundred evaluations, not the cap
+        assertTrue(r.evaluations() < 5_000, "evaluations " + r.evaluations());
+    }
+
+    @Test
     void errorBound_boundsTrueErrorOnEllipses() {
         // exact perimeters from the complete elliptic integral, FACTS.md §5.3 (mpmath 40 digits)
         double[][] cases = {{2, 1, 9.6884482205476761984}, {3, 1, 13.364893220555258230}};
