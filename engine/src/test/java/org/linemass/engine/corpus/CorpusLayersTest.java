@@ -16,6 +16,7 @@ import org.linemass.engine.moments.Sym3;
 import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.LayerResult;
 import org.linemass.engine.section.BuiltInSections;
+import org.linemass.engine.section.LayerAssignment;
 import org.linemass.engine.testing.MiniJson;
 import org.linemass.engine.testing.SharedDir;
 import org.linemass.engine.testing.SimpleStages;
@@ -61,10 +62,22 @@ class CorpusLayersTest {
             Assumptions.abort("importer not available in this build: " + e.getMessage());
             return;
         }
-        DrawingResult r = Analyzer.analyze(drawing, AnalysisSettings.defaults(BuiltInSections.table()),
-                SimpleStages.EACH_SEGMENT);
-        double unit = drawing.unit().metres();
         Map<String, Object> layers = (Map<String, Object>) expected.get("layers");
+        // each layer gets the manifest's illustrative section, typed as a parametric id
+        List<LayerAssignment> sections = new ArrayList<>();
+        for (Map.Entry<String, Object> e : layers.entrySet()) {
+            Map<String, Object> mat = (Map<String, Object>) ((Map<String, Object>) e.getValue()).get("example_material");
+            List<Object> sec = (List<Object>) mat.get("section");
+            StringBuilder id = new StringBuilder(sec.get(0) + ":");
+            for (int k = 1; k < sec.size(); k++) {
+                id.append(k > 1 ? "x" : "").append(sec.get(k));
+            }
+            id.append(':').append(mat.get("density_kg_m3"));
+            sections.add(new LayerAssignment(e.getKey(), id.toString(), "corpus manifest"));
+        }
+        DrawingResult r = Analyzer.analyze(drawing, AnalysisSettings.defaults(BuiltInSections.table())
+                .withAssignments(sections), SimpleStages.EACH_SEGMENT);
+        double unit = drawing.unit().metres();
         for (Map.Entry<String, Object> e : layers.entrySet()) {
             Map<String, Object> exp = (Map<String, Object>) e.getValue();
             LayerResult got = r.layers().stream().filter(l -> l.name().equals(e.getKey())).findFirst()
@@ -89,6 +102,11 @@ class CorpusLayersTest {
             }
             double diff = jExp.minus(got.lengthInertiaM3()).maxAbs();
             assertTrue(diff <= rel * jExp.maxAbs() + 1e-15, e.getKey() + " J differs by " + diff);
+            // mass: the manifest's linear density (computed independently from the same dimensions) times the
+            // raw length; the parametric section must reproduce that density to rounding
+            Map<String, Object> mat = (Map<String, Object>) exp.get("example_material");
+            double kgPerM = (Double) mat.get("linear_density_kg_per_m");
+            assertEquals(kgPerM * length, got.massKg(), rel * kgPerM * length, e.getKey() + " mass");
         }
         Map<String, Object> counts = (Map<String, Object>) expected.get("entity_counts_expanded");
         for (Map.Entry<String, Object> c : counts.entrySet()) {
