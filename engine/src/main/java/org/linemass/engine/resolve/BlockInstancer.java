@@ -34,6 +34,13 @@ final class BlockInstancer {
     /** Relative tolerance for recognising a similarity (rotation, mirror, uniform scale). */
     static final double SIMILARITY_TOLERANCE = 1e-12;
 
+    /**
+     * Relative error of lengths transformed by a map accepted as a similarity: its squared column norms
+     * and products are within {@link #SIMILARITY_TOLERANCE} of {@code s^2 I}, so every direction is
+     * stretched by {@code s} to within about 1.5 times that; 3 times is charged.
+     */
+    static final double SIMILARITY_SLACK = 3 * SIMILARITY_TOLERANCE;
+
     private final Drawing drawing;
     private final LayerRules rules;
     private final double relative;
@@ -84,7 +91,7 @@ final class BlockInstancer {
         if (model == null) {
             return LayerTotals.EMPTY;
         }
-        return inBlockFrame(model, null).transformed(world, scale);
+        return inBlockFrame(model, null).transformed(world, scale, 0);
     }
 
     private LayerTotals inBlockFrame(Block block, String inherited) {
@@ -166,7 +173,7 @@ final class BlockInstancer {
                     push(stack, new Frame(child, inherited, null, key, f));
                     return false;
                 }
-                sub = cached.transformed(composite, s.getAsDouble());
+                sub = cached.transformed(composite, s.getAsDouble(), SIMILARITY_SLACK);
             } else {
                 push(stack, new Frame(child, inherited, composite, null, f));
                 return false;

@@ -25,10 +25,18 @@ public record LayerTotals(Map<String, Moments> moments, Map<String, Long> segmen
         segments = Collections.unmodifiableMap(new TreeMap<>(segments));
     }
 
-    /** The same content placed by a similarity of scale {@code s}. */
-    LayerTotals transformed(Affine map, double s) {
+    /**
+     * The same content placed by a similarity of scale {@code s}, recognised to within
+     * {@code relativeSlack} (the error bounds grow by that much of the new mass, because a map that is
+     * a similarity only to within the slack scales lengths by {@code s} only to within it).
+     */
+    LayerTotals transformed(Affine map, double s, double relativeSlack) {
         Map<String, Moments> m = new TreeMap<>();
-        moments.forEach((k, v) -> m.put(k, v.transformedBySimilarity(map, s)));
+        moments.forEach((k, v) -> {
+            Moments t = v.transformedBySimilarity(map, s);
+            m.put(k, new Moments(t.mass(), t.centroid(), t.covariance(),
+                    t.errorBound() + relativeSlack * Math.abs(t.mass())));
+        });
         return new LayerTotals(m, segments);
     }
 
