@@ -215,8 +215,16 @@ final class BlockInstancer {
         });
     }
 
+    /** Moments of one segment; a segment whose integrals are not finite is left out and recorded. */
     private Moments integrate(Segment seg) {
-        return MomentIntegrator.integrate(seg, LinearDensity.UNIT, 0, relative,
+        Moments m = MomentIntegrator.integrate(seg, LinearDensity.UNIT, 0, relative,
                 MomentIntegrator.DEFAULT_MAX_EVALUATIONS).moments();
+        if (!Double.isFinite(m.mass()) || !m.centroid().isFinite() || !m.covariance().isFinite()
+                || !Double.isFinite(m.errorBound())) {
+            reasons.add(seg.source().describe() + " could not be integrated (its geometry gives non-finite values) "
+                    + "and was left out of the totals");
+            return new Moments(0, Vec3.ZERO, org.linemass.engine.moments.Sym3.ZERO, 0);
+        }
+        return m;
     }
 }
