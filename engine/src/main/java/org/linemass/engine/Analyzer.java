@@ -1,15 +1,205 @@
 package org.linemass.engine;
 
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
 import org.linemass.drawing.Drawing;
+import org.linemass.engine.assemble.ImportFindings;
+import org.linemass.engine.assemble.LayerAssembler;
+import org.linemass.engine.assemble.MaterialPlan;
+import org.linemass.engine.assemble.PieceAssembler;
+import org.linemass.engine.field.FieldException;
+import org.linemass.engine.field.FieldExpression;
+import org.linemass.engine.field.FieldIntegralResult;
+import org.linemass.engine.field.LayerValue;
+import org.linemass.engine.field.LineIntegral;
+import org.linemass.engine.field.PieceValue;
+import org.linemass.engine.integrate.MomentIntegrator;
+import org.linemass.engine.moments.Moments;
+import org.linemass.engine.moments.MomentsAccumulator;
+import org.linemass.engine.pieces.PieceAnalysis;
+import org.linemass.engine.pieces.PieceAnalyzer;
+import org.linemass.engine.pieces.SectionLookup;
+import org.linemass.engine.resolve.ResolvedDrawing;
+import org.linemass.engine.resolve.Resolver;
+import org.linemass.engine.result.DrawingInfo;
 import org.linemass.engine.result.DrawingResult;
+import org.linemass.engine.result.Finding;
+import org.linemass.engine.result.FindingKind;
+import org.linemass.engine.result.Severity;
+import org.linemass.engine.section.Section;
+import org.linemass.geometry.Segment;
 
-/** Runs the whole engine on one imported drawing. */
+/**
+ * Runs the whole engine on one imported drawing: resolve to world metres (per-layer moments by
+ * instancing, bounded expansion of world segments), the piece stage (joining, checks, grouping),
+ * then assembly of layers (duplicates removed), pieces, marks, findings and totals. Deterministic
+ * for a given drawing and settings. Stateless entry points; each call is independent.
+ */
 public final class Analyzer {
+
+    /** The piece stage: joining, checks and grouping of the expanded world segments. */
+    @FunctionalInterface
+    public interface PieceStage {
+        PieceAnalysis analyze(List<Segment> world, Tolerances tol, SectionLookup sections, boolean mirrorGrouping);
+    }
 
     private Analyzer() {
     }
 
     public static DrawingResult analyze(Drawing drawing, AnalysisSettings settings) throws AnalysisException {
-        throw new UnsupportedOperationException("engine not written yet");
+        return analyze(drawing, settings, PieceAnalyzer::analyze);
+    }
+
+    /**
+     * Analyses a drawing with the given piece stage.
+     *
+     * @throws AnalysisException for unknown sections, bad density expressions or tolerances, or a density
+     *     that cannot be evaluated along a wire
+     */
+    public static DrawingResult analyze(Drawing drawing, AnalysisSettings settings, PieceStage stage)
+            throws AnalysisException {
+        MaterialPlan plan = MaterialPlan.of(settings);
+        ResolvedDrawing resolved = Resolver.resolve(drawing, settings);
+        Tolerances tol = tolerances(settings, resolved.extentM());
+        List<Finding> findings = new ArrayList<>(ImportFindings.of(drawing));
+        List<String> reasons = new ArrayList<>();
+        long skipped = drawing.notes().stream().filter(n -> n.skippedGeometry()).count();
+        if (skipped > 0) {
+            reasons.add(skipped + " entit" + (skipped == 1 ? "y was" : "ies were")
+                    + " skipped by the importer because they were malformed (see the skipped_entity findings)");
+        }
+        reasons.addAll(resolved.incompleteReasons());
+        Map<String, Moments> removed = Map.of();
+        PieceAssembler.Output pieces = PieceAssembler.Output.EMPTY;
+        List<Finding> stageFindings = List.of();
+        try {
+            Optional<List<Segment>> world = resolved.worldSegments();
+            if (world.isPresent()) {
+                SectionLookup lookup = sectionLookup(plan, resolved);
+                PieceAnalysis pa = stage.analyze(world.get(), tol, lookup, settings.mirrorGrouping());
+                removed = removedMoments(pa.removed(), settings.integrationRelative());
+                pieces = PieceAssembler.assemble(pa, plan, settings.integrationRelative());
+                stageFindings = pa.findings();
+            } else {
+                findings.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
+                        String.format(Locale.ROOT, "the drawing expands to more than %d segments; lengths and masses "
+                                + "are complete but pieces, groups and drawing checks were skipped",
+                                settings.maxExpandedSegments())));
+            }
+            LayerAssembler.Output layers = LayerAssembler.assemble(drawing, resolved.layers().moments(), removed,
+                    pieces.piecesPerLayer(), pieces.fieldMassPerLayer(), world.isPresent(), plan);
+            findings.addAll(layers.findings());
+            findings.addAll(stageFindings);
+            reasons.addAll(layers.incompleteReasons());
+            return new DrawingResult(new DrawingInfo(drawing.file(), drawing.dxfVersion(), drawing.binary(),
+                    drawing.unit(), drawing.unitSource()), resolved.entities(), layers.layers(), pieces.pieces(),
+                    pieces.marks(), findings, layers.totals(), layers.sections(), reasons);
+        } catch (FieldException e) {
+            throw new AnalysisException(drawing.file() + ": " + e.getMessage());
+        }
+    }
+
+    /**
+     * The line integral of {@code expression} (in x, y, z, s; metres) over every piece and layer of the
+     * counted layers, with error bounds, using the standard piece stage.
+     */
+    public static FieldIntegralResult integrateField(Drawing drawing, AnalysisSettings settings, String expression)
+            throws AnalysisException {
+        return integrateField(drawing, settings, expression, PieceAnalyzer::analyze);
+    }
+
+    /** As {@link #integrateField(Drawing, AnalysisSettings, String)} with the given piece stage. */
+    public static FieldIntegralResult integrateField(Drawing drawing, AnalysisSettings settings, String expression,
+            PieceStage stage) throws AnalysisException {
+        FieldExpression f = FieldExpression.parse(expression, "(all)", false);
+        MaterialPlan plan = MaterialPlan.of(settings);
+        ResolvedDrawing resolved = Resolver.resolve(drawing, settings);
+        List<String> reasons = new ArrayList<>(resolved.incompleteReasons());
+        if (resolved.worldSegments().isEmpty()) {
+            return new FieldIntegralResult(drawing.file(), expression, List.of(), List.of(), 0, 0, reasons);
+        }
+        Tolerances tol = tolerances(settings, resolved.extentM());
+        PieceAnalysis pa = stage.analyze(resolved.worldSegments().get(), tol, sectionLookup(plan, resolved),
+                settings.mirrorGrouping());
+        PieceAssembler.Output assembled;
+        try {
+            assembled = PieceAssembler.assemble(pa, plan, settings.integrationRelative());
+        } catch (FieldException e) {
+            throw new AnalysisException(drawing.file() + ": " + e.getMessage());
+        }
+        List<PieceValue> values = new ArrayList<>();
+        Map<String, double[]> perLayer = new TreeMap<>();
+        try {
+            for (int i = 0; i < pa.pieces().size(); i++) {
+                var piece = pa.pieces().get(i);
+                LineIntegral.Value v = LineIntegral.along(piece.segments(), f, settings.integrationRelative());
+                int id = assembled.idByStageIndex().get(i);
+                values.add(new PieceValue(id, piece.layer(), v.lengthM(), v.value(), v.errorBound()));
+                double[] acc = perLayer.computeIfAbsent(piece.layer(), k -> new double[4]);
+                acc[0] += 1;
+                acc[1] += v.lengthM();
+                acc[2] += v.value();
+                acc[3] += v.errorBound();
+            }
+        } catch (FieldException e) {
+            throw new AnalysisException(drawing.file() + ": " + e.getMessage());
+        }
+        values.sort((a, b) -> Integer.compare(a.pieceId(), b.pieceId()));
+        List<LayerValue> layers = new ArrayList<>();
+        double total = 0;
+        double error = 0;
+        for (Map.Entry<String, double[]> e : perLayer.entrySet()) {
+            double[] a = e.getValue();
+            layers.add(new LayerValue(e.getKey(), (int) a[0], a[1], a[2], a[3]));
+            total += a[2];
+            error += a[3];
+        }
+        return new FieldIntegralResult(drawing.file(), expression, values, layers, total, error, reasons);
+    }
+
+    /**
+     * The tolerances for a drawing of the given extent: the defaults ({@link Tolerances#defaultsFor})
+     * overridden by the user's join, gap and group tolerances and integration target.
+     */
+    public static Tolerances tolerances(AnalysisSettings settings, double extentM) throws AnalysisException {
+        try {
+            Tolerances t = Tolerances.defaultsFor(extentM).withIntegrationRelative(settings.integrationRelative());
+            if (settings.joinM().isPresent()) {
+                t = t.withJoin(settings.joinM().get());
+            }
+            if (settings.gapLimitM().isPresent()) {
+                t = t.withGapLimit(settings.gapLimitM().get());
+            }
+            if (settings.groupM().isPresent()) {
+                t = t.withGroup(settings.groupM().get());
+            }
+            return t;
+        } catch (IllegalArgumentException e) {
+            throw new AnalysisException("bad tolerance: " + e.getMessage());
+        }
+    }
+
+    private static SectionLookup sectionLookup(MaterialPlan plan, ResolvedDrawing resolved) throws AnalysisException {
+        Map<String, Optional<Section>> byLayer = new HashMap<>();
+        for (String layer : resolved.layers().moments().keySet()) {
+            byLayer.put(layer, plan.forLayer(layer).section());
+        }
+        return layer -> byLayer.getOrDefault(layer, Optional.empty());
+    }
+
+    private static Map<String, Moments> removedMoments(List<Segment> removed, double relative) {
+        Map<String, MomentsAccumulator> acc = new TreeMap<>();
+        for (Segment s : removed) {
+            acc.computeIfAbsent(s.source().layer(), k -> new MomentsAccumulator())
+                    .add(MomentIntegrator.lengthMoments(s, relative));
+        }
+        Map<String, Moments> out = new TreeMap<>();
+        acc.forEach((k, v) -> out.put(k, v.result()));
+        return out;
     }
 }

@@ -33,6 +33,14 @@ public final class MomentIntegrator {
     private MomentIntegrator() {
     }
 
+    /**
+     * Where the integrators cut a segment before adapting: its ends, its breakpoints (knots), quarter
+     * turns of conics and points where its speed nearly vanishes. Ascending.
+     */
+    public static double[] cuts(Segment seg) {
+        return SpeedZeros.cuts(seg, MAX_SPAN_RAD);
+    }
+
     /** A result with the work it took. */
     public record Result(Moments moments, long evaluations, boolean converged) {
     }

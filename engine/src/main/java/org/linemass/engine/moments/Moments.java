@@ -36,7 +36,8 @@ public record Moments(double mass, Vec3 centroid, Sym3 covariance, double errorB
 
     /**
      * The moments of the image of the curve under a similarity {@code x' = s Q x + t} for a density
-     * fixed per unit length: {@code m' = s m}, {@code g' = s Q g + t}, {@code C' = s^3 Q C Q^T}.
+     * fixed per unit length: {@code m' = s m}, {@code g' = s Q g + t}, {@code C' = s^3 Q C Q^T};
+     * the error bound scales with s and gains {@link #TRANSFORM_ROUNDING} of the new mass for the rounding of the map.
      *
      * @param map a similarity (the caller checks with {@link Affine#similarityScale})
      * @param scale its scale s
@@ -47,8 +48,9 @@ public record Moments(double mass, Vec3 centroid, Sym3 covariance, double errorB
         for (int i = 0; i < 9; i++) {
             q[i] = m[i] / scale;
         }
-        return new Moments(mass * scale, map.apply(centroid), covariance.rotated(q).times(scale * scale * scale),
-                errorBound * scale);
+        double newMass = mass * scale;
+        return new Moments(newMass, map.apply(centroid), covariance.rotated(q).times(scale * scale * scale),
+                errorBound * scale + TRANSFORM_ROUNDING * Math.abs(newMass));
     }
 
     /**
@@ -77,6 +79,9 @@ public record Moments(double mass, Vec3 centroid, Sym3 covariance, double errorB
         Sym3 c = covariance.minus(o.covariance).minus(Sym3.outer(d).times(mass * o.mass / m));
         return new Moments(m, g, c, errorBound + o.errorBound);
     }
+
+    /** Rounding added to the error bound by {@link #transformedBySimilarity}, relative to the new mass. */
+    public static final double TRANSFORM_ROUNDING = 4 * Math.ulp(1.0);
 
     /** Relative rounding slack of {@link #minus} (64 units of double rounding). */
     public static final double REMOVAL_SLACK = 64 * Math.ulp(1.0);

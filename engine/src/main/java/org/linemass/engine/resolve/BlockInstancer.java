@@ -34,6 +34,13 @@ final class BlockInstancer {
     /** Relative tolerance for recognising a similarity (rotation, mirror, uniform scale). */
     static final double SIMILARITY_TOLERANCE = 1e-12;
 
+    /**
+     * Relative error of lengths transformed by a map accepted as a similarity: its squared column norms
+     * and products are within {@link #SIMILARITY_TOLERANCE} of {@code s^2 I}, so every direction is
+     * stretched by {@code s} to within about 1.5 times that; 3 times is charged.
+     */
+    static final double SIMILARITY_SLACK = 3 * SIMILARITY_TOLERANCE;
+
     private final Drawing drawing;
     private final LayerRules rules;
     private final double relative;
@@ -84,7 +91,7 @@ final class BlockInstancer {
         if (model == null) {
             return LayerTotals.EMPTY;
         }
-        return inBlockFrame(model, null).transformed(world, scale);
+        return inBlockFrame(model, null).transformed(world, scale, 0);
     }
 
     private LayerTotals inBlockFrame(Block block, String inherited) {
@@ -166,7 +173,7 @@ final class BlockInstancer {
                     push(stack, new Frame(child, inherited, null, key, f));
                     return false;
                 }
-                sub = cached.transformed(composite, s.getAsDouble());
+                sub = cached.transformed(composite, s.getAsDouble(), SIMILARITY_SLACK);
             } else {
                 push(stack, new Frame(child, inherited, composite, null, f));
                 return false;
@@ -208,8 +215,16 @@ final class BlockInstancer {
         });
     }
 
+    /** Moments of one segment; a segment whose integrals are not finite is left out and recorded. */
     private Moments integrate(Segment seg) {
-        return MomentIntegrator.integrate(seg, LinearDensity.UNIT, 0, relative,
+        Moments m = MomentIntegrator.integrate(seg, LinearDensity.UNIT, 0, relative,
                 MomentIntegrator.DEFAULT_MAX_EVALUATIONS).moments();
+        if (!Double.isFinite(m.mass()) || !m.centroid().isFinite() || !m.covariance().isFinite()
+                || !Double.isFinite(m.errorBound())) {
+            reasons.add(seg.source().describe() + " could not be integrated (its geometry gives non-finite values) "
+                    + "and was left out of the totals");
+            return new Moments(0, Vec3.ZERO, org.linemass.engine.moments.Sym3.ZERO, 0);
+        }
+        return m;
     }
 }

@@ -25,10 +25,18 @@ public record LayerTotals(Map<String, Moments> moments, Map<String, Long> segmen
         segments = Collections.unmodifiableMap(new TreeMap<>(segments));
     }
 
-    /** The same content placed by a similarity of scale {@code s}. */
-    LayerTotals transformed(Affine map, double s) {
+    /**
+     * The same content placed by a similarity of scale {@code s}, recognised to within
+     * {@code relativeSlack} (the error bounds grow by that much of the new mass, because a map that is
+     * a similarity only to within the slack scales lengths by {@code s} only to within it).
+     */
+    LayerTotals transformed(Affine map, double s, double relativeSlack) {
         Map<String, Moments> m = new TreeMap<>();
-        moments.forEach((k, v) -> m.put(k, v.transformedBySimilarity(map, s)));
+        moments.forEach((k, v) -> {
+            Moments t = v.transformedBySimilarity(map, s);
+            m.put(k, new Moments(t.mass(), t.centroid(), t.covariance(),
+                    t.errorBound() + relativeSlack * Math.abs(t.mass())));
+        });
         return new LayerTotals(m, segments);
     }
 
@@ -52,7 +60,8 @@ public record LayerTotals(Map<String, Moments> moments, Map<String, Long> segmen
         moments.forEach((k, v) -> {
             Sym3 spread = Sym3.outer(columnStep).times(nr * sc).plus(Sym3.outer(rowStep).times(nc * sr));
             m.put(k, new Moments(n * v.mass(), v.centroid().plus(mean),
-                    v.covariance().times(n).plus(spread.times(v.mass())), n * v.errorBound()));
+                    v.covariance().times(n).plus(spread.times(v.mass())),
+                    n * v.errorBound() + Moments.TRANSFORM_ROUNDING * n * v.mass()));
         });
         Map<String, Long> c = new TreeMap<>();
         long copies = (long) columns * rows;

@@ -105,6 +105,19 @@ class ResolverTest {
     }
 
     @Test
+    void nonUniformInsert_turnsCircleIntoEllipse() {
+        // a unit circle inserted with scale (2, 1, 1) is the ellipse a = 2, b = 1: perimeter 9.68844822055
+        // (FACTS.md §5.3, complete elliptic integral); drawn in metres, the adaptive rule gives 1e-10 relative
+        Drawings d = Drawings.create().unit(LengthUnit.METRE, UnitSource.HEADER);
+        d.block("RING").arc("0", Vec3.ZERO, 1, 0, 2 * Math.PI);
+        d.model().insert("RING", "OVAL", Affine.scale(2, 1, 1)).insert("RING", "ROUND", Affine.uniformScale(2));
+        ResolvedDrawing r = Resolver.resolve(d.build(), settings());
+        assertEquals(9.6884482205476761984, r.layers().moments().get("OVAL").mass(), 1e-10 * 9.69);
+        assertEquals(4 * Math.PI, r.layers().moments().get("ROUND").mass(), 1e-14 * 4 * Math.PI);
+        assertTrue(r.worldSegments().orElseThrow().stream().anyMatch(s -> s.kind().equals("ellipse_arc")));
+    }
+
+    @Test
     void blockBomb_costsDistinctBlocks() {
         // 12 levels of 10 copies each: 10^12 copies of one line, never expanded
         Drawings d = Drawings.create();

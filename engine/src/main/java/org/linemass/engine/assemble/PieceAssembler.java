@@ -1,0 +1,203 @@
+package org.linemass.engine.assemble;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
+import org.linemass.engine.AnalysisException;
+import org.linemass.engine.field.FieldDensity;
+import org.linemass.engine.integrate.LinearDensity;
+import org.linemass.engine.integrate.MomentIntegrator;
+import org.linemass.engine.moments.Moments;
+import org.linemass.engine.moments.MomentsAccumulator;
+import org.linemass.engine.pieces.Piece;
+import org.linemass.engine.pieces.PieceAnalysis;
+import org.linemass.engine.result.MarkResult;
+import org.linemass.engine.result.PieceResult;
+import org.linemass.engine.result.SourceRef;
+import org.linemass.engine.section.Section;
+import org.linemass.geometry.Segment;
+import org.linemass.geometry.Vec3;
+
+/**
+ * Turns the piece stage's output into piece results and marks. Per piece: length moments (every
+ * segment integrated in world metres and combined with compensated summation), mass moments from
+ * the layer's density field ({@code s} measured from the piece's start along its segments) or from
+ * its section's constant kg/m, start, end, bends and sources. Pieces are numbered 1.. after sorting
+ * by layer, then length centroid (x, y, z), then length. Marks: the stage's groups (pieces it left
+ * out of every group become single marks), ordered by layer, then length each (longest first), then
+ * lowest piece id, and named {@code M01}, {@code M02}, ... in that order. Single use.
+ */
+public final class PieceAssembler {
+
+    /**
+     * Everything assembled from the pieces.
+     *
+     * @param pieces piece results, numbered 1.. in output order
+     * @param marks the marks in output order
+     * @param piecesPerLayer number of pieces per layer
+     * @param fieldMassPerLayer mass moments of the layers with a density field, summed over their pieces
+     * @param idByStageIndex the piece id given to the stage's piece at each index
+     */
+    public record Output(List<PieceResult> pieces, List<MarkResult> marks, Map<String, Integer> piecesPerLayer,
+            Map<String, Moments> fieldMassPerLayer, List<Integer> idByStageIndex) {
+
+        /** Nothing: no pieces were formed. */
+        public static final Output EMPTY = new Output(List.of(), List.of(), Map.of(), Map.of(), List.of());
+
+        public Output {
+            pieces = List.copyOf(pieces);
+            marks = List.copyOf(marks);
+            piecesPerLayer = Map.copyOf(piecesPerLayer);
+            fieldMassPerLayer = Map.copyOf(fieldMassPerLayer);
+            idByStageIndex = List.copyOf(idByStageIndex);
+        }
+    }
+
+    private record Computed(int original, Piece piece, Moments length, Moments mass, Optional<Section> section) {
+    }
+
+    private PieceAssembler() {
+    }
+
+    public static Output assemble(PieceAnalysis analysis, MaterialPlan plan, double relative) throws AnalysisException {
+        List<Computed> computed = new ArrayList<>();
+        List<Piece> pieces = analysis.pieces();
+        for (int i = 0; i < pieces.size(); i++) {
+            Piece p = pieces.get(i);
+            LayerMaterial mat = plan.forLayer(p.layer());
+            Moments lm = lengthMoments(p.segments(), relative);
+            Moments mass = null;
+            if (mat.field().isPresent()) {
+                mass = fieldMass(p.segments(), new FieldDensity(mat.field().get()), relative);
+            } else if (mat.section().isPresent()) {
+                mass = lm.scaledDensity(mat.section().get().kgPerM());
+            }
+            computed.add(new Computed(i, p, lm, mass, mat.section()));
+        }
+        computed.sort(Comparator.comparing((Computed c) -> c.piece().layer())
+                .thenComparingDouble(c -> c.length().centroid().x())
+                .thenComparingDouble(c -> c.length().centroid().y())
+                .thenComparingDouble(c -> c.length().centroid().z())
+                .thenComparingDouble(c -> c.length().mass()));
+        int[] idOf = new int[computed.size()];
+        for (int k = 0; k < computed.size(); k++) {
+            idOf[computed.get(k).original()] = k + 1;
+        }
+        List<List<Integer>> groups = groupsById(analysis, idOf, computed.size());
+        groups.sort(Comparator.comparing((List<Integer> g) -> computed.get(g.get(0) - 1).piece().layer())
+                .thenComparingDouble(g -> -computed.get(g.get(0) - 1).length().mass())
+                .thenComparingInt(g -> g.get(0)));
+        String[] markOf = new String[computed.size() + 1];
+        List<MarkResult> marks = new ArrayList<>();
+        for (int gi = 0; gi < groups.size(); gi++) {
+            String mark = gi < 9 ? "M0" + (gi + 1) : "M" + (gi + 1);
+            List<Integer> ids = groups.get(gi);
+            Computed first = computed.get(ids.get(0) - 1);
+            double lengthTotal = 0;
+            double massTotal = 0;
+            boolean massKnown = first.mass() != null;
+            for (int id : ids) {
+                markOf[id] = mark;
+                Computed c = computed.get(id - 1);
+                lengthTotal += c.length().mass();
+                massKnown &= c.mass() != null;
+                massTotal += c.mass() == null ? 0 : c.mass().mass();
+            }
+            marks.add(new MarkResult(mark, ids.size(), first.piece().layer(),
+                    first.section().map(Section::id).orElse(null),
+                    first.section().map(Section::material).orElse(""), first.length().mass(),
+                    massKnown ? first.mass().mass() : null, lengthTotal, massKnown ? massTotal : null,
+                    first.piece().bends().size(), ids));
+        }
+        List<PieceResult> results = new ArrayList<>();
+        Map<String, Integer> perLayer = new TreeMap<>();
+        Map<String, MomentsAccumulator> fieldMass = new TreeMap<>();
+        for (int k = 0; k < computed.size(); k++) {
+            Computed c = computed.get(k);
+            Piece p = c.piece();
+            perLayer.merge(p.layer(), 1, Integer::sum);
+            if (c.mass() != null && plan.forLayer(p.layer()).field().isPresent()) {
+                fieldMass.computeIfAbsent(p.layer(), x -> new MomentsAccumulator()).add(c.mass());
+            }
+            List<SourceRef> sources = p.segments().stream().map(s -> SourceRef.of(s.source())).toList();
+            Vec3 start = p.segments().isEmpty() ? c.length().centroid() : p.segments().get(0).start();
+            Vec3 end = p.segments().isEmpty() ? c.length().centroid() : p.segments().get(p.segments().size() - 1).end();
+            results.add(new PieceResult(k + 1, p.layer(), c.section().map(Section::id).orElse(null),
+                    c.length().mass(), c.mass() == null ? null : c.mass().mass(),
+                    c.mass() == null ? c.length().centroid() : c.mass().centroid(), c.length().inertia(),
+                    c.mass() == null ? null : c.mass().inertia(), start, end, p.closed(), p.segments().size(),
+                    markOf[k + 1], p.bends(), sources, c.length().errorBound()));
+        }
+        Map<String, Moments> fm = new TreeMap<>();
+        fieldMass.forEach((l, a) -> fm.put(l, a.result()));
+        List<Integer> ids = new ArrayList<>(idOf.length);
+        for (int id : idOf) {
+            ids.add(id);
+        }
+        return new Output(results, marks, perLayer, fm, ids);
+    }
+
+    /**
+     * Length moments of a piece: short pieces by the parallel-axis rule directly (a handful of
+     * roundings), longer ones with compensated summation.
+     */
+    static Moments lengthMoments(List<Segment> segments, double relative) {
+        if (segments.size() <= SHORT_PIECE) {
+            Moments m = Moments.ZERO;
+            for (Segment s : segments) {
+                m = m.plus(MomentIntegrator.lengthMoments(s, relative));
+            }
+            return m;
+        }
+        MomentsAccumulator acc = new MomentsAccumulator();
+        for (Segment s : segments) {
+            acc.add(MomentIntegrator.lengthMoments(s, relative));
+        }
+        return acc.result();
+    }
+
+    /** Pieces with at most this many segments are summed without compensation. */
+    static final int SHORT_PIECE = 8;
+
+    /** Mass moments of a piece under a density field, s running from the piece's start. */
+    static Moments fieldMass(List<Segment> segments, LinearDensity density, double relative) {
+        MomentsAccumulator acc = new MomentsAccumulator();
+        double s0 = 0;
+        for (Segment s : segments) {
+            acc.add(MomentIntegrator.integrate(s, density, s0, relative, MomentIntegrator.DEFAULT_MAX_EVALUATIONS)
+                    .moments());
+            if (density.usesArcLength()) {
+                s0 += MomentIntegrator.lengthMoments(s, relative).mass();
+            }
+        }
+        return acc.result();
+    }
+
+    private static List<List<Integer>> groupsById(PieceAnalysis analysis, int[] idOf, int n) {
+        List<List<Integer>> out = new ArrayList<>();
+        boolean[] seen = new boolean[n + 1];
+        for (List<Integer> g : analysis.groups()) {
+            List<Integer> ids = new ArrayList<>();
+            for (int original : g) {
+                int id = original >= 0 && original < idOf.length ? idOf[original] : 0;
+                if (id > 0 && !seen[id]) {
+                    seen[id] = true;
+                    ids.add(id);
+                }
+            }
+            if (!ids.isEmpty()) {
+                ids.sort(null);
+                out.add(ids);
+            }
+        }
+        for (int id = 1; id <= n; id++) {
+            if (!seen[id]) {
+                out.add(new ArrayList<>(List.of(id)));
+            }
+        }
+        return out;
+    }
+}
