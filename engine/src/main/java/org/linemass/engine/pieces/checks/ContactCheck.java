@@ -9,7 +9,9 @@ import org.linemass.engine.Tolerances;
 import org.linemass.engine.pieces.geom.ClosestPoints;
 import org.linemass.engine.pieces.geom.Contact;
 import org.linemass.engine.pieces.geom.PlanarCrossing;
-import org.linemass.engine.pieces.geom.SegmentIndex;
+import org.linemass.engine.pieces.geom.BoxIndex;
+import org.linemass.engine.pieces.geom.CandidatePairs;
+import org.linemass.engine.pieces.geom.DerivedIndex;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.FindingKind;
 import org.linemass.engine.result.Severity;
@@ -41,10 +43,13 @@ public final class ContactCheck {
     private record Hit(String kind, Vec3 at, int a, int b) {
     }
 
-    public static List<Finding> check(List<Segment> segments, int[] layerOf, boolean[] free, int[] chainOf,
-            Tolerances tol) {
+    /**
+     * @param index candidate search over {@code segments} through the input segments they came from
+     * @param pairs candidate pairs of input segments (boxes grown by at least the join tolerance)
+     */
+    public static List<Finding> check(List<Segment> segments, DerivedIndex index, CandidatePairs pairs,
+            int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol) {
         double j = tol.joinM();
-        SegmentIndex index = new SegmentIndex(segments, j);
         List<Hit> hits = new ArrayList<>();
         for (int e = 0; e < free.length; e++) {
             if (free[e]) {
@@ -55,29 +60,26 @@ public final class ContactCheck {
             }
         }
         Map<Long, List<Vec3>> seen = new HashMap<>();
-        for (int i = 0; i < segments.size(); i++) {
-            final int ii = i;
-            Segment a = segments.get(i);
-            index.query(index.box(i), k -> {
-                if (k <= ii || layerOf[k] != layerOf[ii]) {
+        pairs.forEach((oi, oj) -> index.derivedOf(oi, ii -> index.derivedOf(oj, k -> {
+            if (ii == k || layerOf[k] != layerOf[ii] || !index.box(ii).intersects(index.box(k))) {
+                return;
+            }
+            Vec3 at = crossing(segments.get(ii), segments.get(k), 2 * ii, 2 * k, free, j);
+            if (at == null) {
+                return;
+            }
+            int ca = Math.min(chainOf[ii], chainOf[k]);
+            int cb = Math.max(chainOf[ii], chainOf[k]);
+            List<Vec3> places = seen.computeIfAbsent(pairKey(ca, cb), x -> new ArrayList<>());
+            for (Vec3 p : places) {
+                if (p.distance(at) <= j) {
                     return;
                 }
-                Vec3 at = crossing(a, segments.get(k), 2 * ii, 2 * k, free, j);
-                if (at == null) {
-                    return;
-                }
-                int ca = Math.min(chainOf[ii], chainOf[k]);
-                int cb = Math.max(chainOf[ii], chainOf[k]);
-                List<Vec3> places = seen.computeIfAbsent(((long) ca << 32) | cb, x -> new ArrayList<>());
-                for (Vec3 p : places) {
-                    if (p.distance(at) <= j) {
-                        return;
-                    }
-                }
-                places.add(at);
-                hits.add(new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, at, ii, k));
-            });
-        }
+            }
+            places.add(at);
+            hits.add(new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, at, Math.min(ii, k),
+                    Math.max(ii, k)));
+        })));
         long tees = hits.stream().filter(h -> h.kind().equals(FindingKind.T_JUNCTION)).count();
         long crossings = hits.stream().filter(h -> h.kind().equals(FindingKind.CROSSING)).count();
         String totals = String.format(Locale.ROOT, " Drawing total: %d T-junction%s and %d crossing%s.", tees,
@@ -103,7 +105,7 @@ public final class ContactCheck {
         return out;
     }
 
-    private static Hit tJunction(List<Segment> segments, int[] layerOf, SegmentIndex index, int end, double tol) {
+    private static Hit tJunction(List<Segment> segments, int[] layerOf, BoxIndex index, int end, double tol) {
         int own = end >> 1;
         Segment s = segments.get(own);
         Vec3 p = (end & 1) == 0 ? s.start() : s.end();
@@ -157,6 +159,12 @@ public final class ContactCheck {
             return null;
         }
         return c.middle();
+    }
+
+    /** A well-mixed key of a pair of chain numbers (plain packing hashes badly in a HashMap). */
+    private static long pairKey(int a, int b) {
+        long h = (((long) a << 32) | (b & 0xFFFFFFFFL)) * 0x9E3779B97F4A7C15L;
+        return h ^ (h >>> 29);
     }
 
     /** 0 when p is within tol of the start, 1 of the end, -1 otherwise. */

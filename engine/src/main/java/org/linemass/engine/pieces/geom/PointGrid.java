@@ -3,11 +3,12 @@ package org.linemass.engine.pieces.geom;
 import java.util.function.IntConsumer;
 
 /**
- * A spatial hash of points on a cubic grid of a given cell size, each point tagged with a group
- * number (the layer) so that only points of the same group are reported together. Built once in
- * O(n) (open addressing from cell key to a chain of points); {@link #near} visits every point of
- * the same group whose cell touches the query cube (3 x 3 x 3 cells), so a radius no larger than
- * the cell size finds every point within it, plus some farther ones the caller filters by distance.
+ * A spatial hash of points on a cubic grid, each point tagged with a group number (the layer) so
+ * that only points of the same group are reported together. Built once in O(n) (open addressing
+ * from cell key to a chain of points). The cells are twice the search radius, so the points
+ * within the radius of a query point lie in the 2 x 2 x 2 cells nearest to it (per axis: its own
+ * cell and the neighbour on the side of the cell half it lies in); {@link #near} visits every
+ * point of the group in those cells, and the caller filters by distance.
  * Not thread-safe while building; immutable afterwards.
  */
 public final class PointGrid {
@@ -23,17 +24,17 @@ public final class PointGrid {
     /**
      * @param xyz coordinates, three per point
      * @param group group number per point
-     * @param cellSize edge of a grid cell, positive
+     * @param radius the largest search radius {@link #near} must honour, positive
      */
-    public PointGrid(double[] xyz, int[] group, double cellSize) {
-        if (!(cellSize > 0) || !Double.isFinite(cellSize)) {
-            throw new IllegalArgumentException("grid cell size must be positive and finite, got " + cellSize);
+    public PointGrid(double[] xyz, int[] group, double radius) {
+        if (!(radius > 0) || !Double.isFinite(radius)) {
+            throw new IllegalArgumentException("grid search radius must be positive and finite, got " + radius);
         }
         if (xyz.length != 3 * group.length) {
             throw new IllegalArgumentException("need 3 coordinates per point: " + xyz.length + " for "
                     + group.length + " points");
         }
-        this.cell = cellSize;
+        this.cell = 2 * radius;
         this.xyz = xyz;
         this.group = group;
         int n = group.length;
@@ -77,15 +78,18 @@ public final class PointGrid {
         return h;
     }
 
-    /** Visits every point of group {@code g} in the 27 cells around (x, y, z). */
+    /** Visits (at least) every point of group {@code g} within the radius of (x, y, z). */
     public void near(double x, double y, double z, int g, IntConsumer visitor) {
         long cx = cellOf(x);
         long cy = cellOf(y);
         long cz = cellOf(z);
-        for (long dx = -1; dx <= 1; dx++) {
-            for (long dy = -1; dy <= 1; dy++) {
-                for (long dz = -1; dz <= 1; dz++) {
-                    long k = key(cx + dx, cy + dy, cz + dz, g);
+        long sx = side(x, cx);
+        long sy = side(y, cy);
+        long sz = side(z, cz);
+        for (long dx = 0; dx <= 1; dx++) {
+            for (long dy = 0; dy <= 1; dy++) {
+                for (long dz = 0; dz <= 1; dz++) {
+                    long k = key(cx + dx * sx, cy + dy * sy, cz + dz * sz, g);
                     int s = slot(k);
                     for (int i = heads[s]; i >= 0; i = next[i]) {
                         // a hash collision can chain another cell or group here: filter by group
@@ -96,6 +100,11 @@ public final class PointGrid {
                 }
             }
         }
+    }
+
+    /** +1 when v lies in the upper half of cell c, else -1: the neighbour that can hold near points. */
+    private long side(double v, long c) {
+        return v - c * cell >= 0.5 * cell ? 1 : -1;
     }
 
     /** Squared distance between point {@code i} and (x, y, z). */
