@@ -133,6 +133,11 @@ public final class ContactCheck {
 
     /** Where a and b cross without a shared vertex, or null. */
     private static Vec3 crossing(Segment a, Segment b, int endsA, int endsB, boolean[] free, double tol) {
+        if (a instanceof Straight sa && b instanceof Straight sb && shareAnEnd(sa, sb, tol)) {
+            // two straights meet at most once unless collinear (collinear overlaps are removed
+            // before), and here that meeting is the shared end: no crossing
+            return null;
+        }
         if (a instanceof Straight sa && b instanceof Straight sb && PlanarCrossing.applies(sa, sb)) {
             Vec3 x = PlanarCrossing.properCrossing(sa, sb);
             if (x != null) {
@@ -165,6 +170,11 @@ public final class ContactCheck {
     private static long pairKey(int a, int b) {
         long h = (((long) a << 32) | (b & 0xFFFFFFFFL)) * 0x9E3779B97F4A7C15L;
         return h ^ (h >>> 29);
+    }
+
+    private static boolean shareAnEnd(Straight a, Straight b, double tol) {
+        return a.a().distance(b.a()) <= tol || a.a().distance(b.b()) <= tol || a.b().distance(b.a()) <= tol
+                || a.b().distance(b.b()) <= tol;
     }
 
     /** 0 when p is within tol of the start, 1 of the end, -1 otherwise. */

@@ -5,15 +5,20 @@ import java.util.function.IntConsumer;
 /**
  * A spatial hash of points on a cubic grid, each point tagged with a group number (the layer) so
  * that only points of the same group are reported together. Built once in O(n) (open addressing
- * from cell key to a chain of points). The cells are twice the search radius, so the points
- * within the radius of a query point lie in the 2 x 2 x 2 cells nearest to it (per axis: its own
- * cell and the neighbour on the side of the cell half it lies in); {@link #near} visits every
- * point of the group in those cells, and the caller filters by distance.
+ * from cell key to a chain of points). Cells are {@link #CELL_FACTOR} times the search radius and
+ * the grid is shifted by half a cell (so a drawing lying in the plane z = 0 sits mid-cell); per
+ * axis {@link #near} looks into the neighbouring cell only when the query point is within the
+ * radius of that side, so a typical query reads one or two cells. It visits every point of the
+ * group within the radius (and some farther ones the caller filters by distance).
  * Not thread-safe while building; immutable afterwards.
  */
 public final class PointGrid {
 
+    /** Cell edge in search radii: larger cells mean fewer neighbour lookups, more points per cell. */
+    public static final double CELL_FACTOR = 8;
+
     private final double cell;
+    private final double radius;
     private final double[] xyz;
     private final int[] group;
     private final long[] keys;
@@ -34,7 +39,8 @@ public final class PointGrid {
             throw new IllegalArgumentException("need 3 coordinates per point: " + xyz.length + " for "
                     + group.length + " points");
         }
-        this.cell = 2 * radius;
+        this.cell = CELL_FACTOR * radius;
+        this.radius = radius;
         this.xyz = xyz;
         this.group = group;
         int n = group.length;
@@ -56,7 +62,12 @@ public final class PointGrid {
     }
 
     private long cellOf(double v) {
-        return (long) Math.floor(v / cell);
+        return (long) Math.floor(v / cell + 0.5);
+    }
+
+    /** Distance from v to the lower face of its cell. */
+    private double below(double v, long c) {
+        return v - (c - 0.5) * cell;
     }
 
     private int slot(long k) {
@@ -83,13 +94,13 @@ public final class PointGrid {
         long cx = cellOf(x);
         long cy = cellOf(y);
         long cz = cellOf(z);
-        long sx = side(x, cx);
-        long sy = side(y, cy);
-        long sz = side(z, cz);
-        for (long dx = 0; dx <= 1; dx++) {
-            for (long dy = 0; dy <= 1; dy++) {
-                for (long dz = 0; dz <= 1; dz++) {
-                    long k = key(cx + dx * sx, cy + dy * sy, cz + dz * sz, g);
+        double bx = below(x, cx);
+        double by = below(y, cy);
+        double bz = below(z, cz);
+        for (long dx = bx <= radius ? -1 : 0; dx <= (cell - bx <= radius ? 1 : 0); dx++) {
+            for (long dy = by <= radius ? -1 : 0; dy <= (cell - by <= radius ? 1 : 0); dy++) {
+                for (long dz = bz <= radius ? -1 : 0; dz <= (cell - bz <= radius ? 1 : 0); dz++) {
+                    long k = key(cx + dx, cy + dy, cz + dz, g);
                     int s = slot(k);
                     for (int i = heads[s]; i >= 0; i = next[i]) {
                         // a hash collision can chain another cell or group here: filter by group
@@ -100,11 +111,6 @@ public final class PointGrid {
                 }
             }
         }
-    }
-
-    /** +1 when v lies in the upper half of cell c, else -1: the neighbour that can hold near points. */
-    private long side(double v, long c) {
-        return v - c * cell >= 0.5 * cell ? 1 : -1;
     }
 
     /** Squared distance between point {@code i} and (x, y, z). */
