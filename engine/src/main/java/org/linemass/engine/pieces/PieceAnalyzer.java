@@ -28,7 +28,6 @@ import org.linemass.engine.pieces.marks.Grouper;
 import org.linemass.engine.result.Bend;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.section.Section;
-import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
 
 /**
@@ -121,13 +120,13 @@ public final class PieceAnalyzer {
             List<Finding> findings) {
         String layer = segments.get(0).source().layer();
         Optional<Section> section = cache.forLayer(layer);
-        List<Bend> bends = BendFinder.bends(segments, closed, section, tol.angleRad(), tol.joinM());
-        if (!bends.isEmpty() && section.isPresent()) {
-            List<Provenance> sources = new ArrayList<>();
-            for (Segment s : segments) {
-                sources.add(s.source());
-            }
-            findings.addAll(BendCheck.check(layer, bends, section.get(), sources));
+        List<BendFinder.Located> located = BendFinder.located(segments, closed, section, tol.angleRad(), tol.joinM());
+        if (!located.isEmpty() && section.isPresent()) {
+            findings.addAll(BendCheck.check(layer, located, section.get()));
+        }
+        List<Bend> bends = new ArrayList<>(located.size());
+        for (BendFinder.Located b : located) {
+            bends.add(b.bend());
         }
         return new Piece(layer, segments, closed, bends);
     }
