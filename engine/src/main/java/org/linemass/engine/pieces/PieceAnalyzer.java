@@ -69,6 +69,7 @@ public final class PieceAnalyzer {
 
         List<Segment> joinable = new ArrayList<>(dedup.kept().size());
         int[] origin = new int[dedup.kept().size()];
+        int[] keptOrigin = dedup.origin();
         List<Piece> pieces = new ArrayList<>();
         for (int k = 0; k < dedup.kept().size(); k++) {
             Segment s = dedup.kept().get(k);
@@ -80,7 +81,7 @@ public final class PieceAnalyzer {
                     pieces.add(piece(List.of(s), false, cache, tol, findings));
                 }
             } else {
-                origin[joinable.size()] = dedup.origin()[k];
+                origin[joinable.size()] = keptOrigin[k];
                 joinable.add(s);
             }
         }
