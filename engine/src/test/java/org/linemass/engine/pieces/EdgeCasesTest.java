@@ -106,6 +106,21 @@ class EdgeCasesTest {
     }
 
     @Test
+    void closedFrame_hasTheSameFormWhateverTheInputOrderAndDirection() {
+        List<Segment> a = CleanLayoutAndBendTest.frame();
+        List<Segment> b = new ArrayList<>();
+        for (Segment s : a) {
+            b.add(0, s.reversed());
+        }
+        Piece pa = run(a).pieces().get(0);
+        Piece pb = run(b).pieces().get(0);
+        assertEquals(pa.segments(), pb.segments(), "same start, same direction, same segments");
+        // starts at the smallest corner (0, 0) heading to the smaller neighbour (0, 250)
+        assertEquals(Vec3.ZERO, pa.segments().get(0).start());
+        assertEquals(Fixtures.mm(0, 250), pa.segments().get(0).end());
+    }
+
+    @Test
     void longChainOfShortLines_isOnePieceOrientedEndToEnd() {
         List<Segment> segs = new ArrayList<>();
         for (int i = 0; i < 1000; i++) {
