@@ -44,7 +44,7 @@ class SplinePiecesTest {
         }
         assertEquals(List.of(), r.findings());
         assertEquals(1, r.groups().size());
-        OrderInvarianceProperties.assertWellFormed(r, Fixtures.tol().joinM());
+        OrderInvariancePropertyTest.assertWellFormed(r, Fixtures.tol().joinM());
     }
 
     @Test

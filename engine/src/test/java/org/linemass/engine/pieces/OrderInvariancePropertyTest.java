@@ -21,7 +21,7 @@ import org.linemass.geometry.Vec3;
  * T-junction in their interior are not split, because a split point there would change the
  * defect itself (a vertex where there was none).
  */
-class OrderInvarianceProperties {
+class OrderInvariancePropertyTest {
 
     private static final Set<String> KEEP_WHOLE = Set.of("36", "37", "38", "39", "3B", "3D", "3E");
 

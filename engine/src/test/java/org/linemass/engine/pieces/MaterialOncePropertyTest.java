@@ -21,7 +21,7 @@ import org.linemass.geometry.Vec3;
  * The reference union is computed independently on the integer millimetre grid the intervals are
  * drawn on (sort and merge), so it is exact.
  */
-class MaterialOnceProperties {
+class MaterialOncePropertyTest {
 
     /** Lengths are sums of up to 12 lines of at most 1 m: 1e-12 m covers their rounding. */
     private static final double LEN_TOL_M = 1e-12;
