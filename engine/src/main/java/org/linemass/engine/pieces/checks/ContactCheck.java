@@ -32,8 +32,8 @@ import org.linemass.geometry.Vec3;
  * <li>{@code self_crossing} (warning): the same for two parts of one piece.</li>
  * </ul>
  * In welded wire products each T-junction and crossing is a weld; every message carries the
- * drawing's totals. Only the closest approach of each pair of segments is examined, so a curve
- * meeting another twice is reported once.
+ * drawing's totals. A curve meeting another at several places gives one crossing per place
+ * ({@link ClosestPoints#within}).
  */
 public final class ContactCheck {
 
@@ -64,21 +64,23 @@ public final class ContactCheck {
             if (ii == k || layerOf[k] != layerOf[ii] || !index.box(ii).intersects(index.box(k))) {
                 return;
             }
-            Vec3 at = crossing(segments.get(ii), segments.get(k), 2 * ii, 2 * k, free, j);
-            if (at == null) {
-                return;
-            }
-            int ca = Math.min(chainOf[ii], chainOf[k]);
-            int cb = Math.max(chainOf[ii], chainOf[k]);
-            List<Vec3> places = seen.computeIfAbsent(pairKey(ca, cb), x -> new ArrayList<>());
-            for (Vec3 p : places) {
-                if (p.distance(at) <= j) {
-                    return;
+            for (Vec3 at : crossings(segments.get(ii), segments.get(k), 2 * ii, 2 * k, free, j)) {
+                int ca = Math.min(chainOf[ii], chainOf[k]);
+                int cb = Math.max(chainOf[ii], chainOf[k]);
+                List<Vec3> places = seen.computeIfAbsent(pairKey(ca, cb), x -> new ArrayList<>());
+                boolean known = false;
+                for (Vec3 p : places) {
+                    if (p.distance(at) <= j) {
+                        known = true;
+                        break;
+                    }
+                }
+                if (!known) {
+                    places.add(at);
+                    hits.add(new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, at,
+                            Math.min(ii, k), Math.max(ii, k)));
                 }
             }
-            places.add(at);
-            hits.add(new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, at, Math.min(ii, k),
-                    Math.max(ii, k)));
         })));
         long tees = hits.stream().filter(h -> h.kind().equals(FindingKind.T_JUNCTION)).count();
         long crossings = hits.stream().filter(h -> h.kind().equals(FindingKind.CROSSING)).count();
@@ -131,39 +133,33 @@ public final class ContactCheck {
         return who[0] < 0 ? null : new Hit(FindingKind.T_JUNCTION, p, own, who[0]);
     }
 
-    /** Where a and b cross without a shared vertex, or null. */
-    private static Vec3 crossing(Segment a, Segment b, int endsA, int endsB, boolean[] free, double tol) {
-        if (a instanceof Straight sa && b instanceof Straight sb && shareAnEnd(sa, sb, tol)) {
-            // two straights meet at most once unless collinear (collinear overlaps are removed
-            // before), and here that meeting is the shared end: no crossing
-            return null;
-        }
-        if (a instanceof Straight sa && b instanceof Straight sb && PlanarCrossing.applies(sa, sb)) {
-            Vec3 x = PlanarCrossing.properCrossing(sa, sb);
-            if (x != null) {
-                boolean nearA = x.distance(sa.a()) <= tol || x.distance(sa.b()) <= tol;
-                boolean nearB = x.distance(sb.a()) <= tol || x.distance(sb.b()) <= tol;
-                if (!nearA && !nearB) {
-                    return x;
+    /** Where a and b cross without a shared vertex (possibly several places for curves). */
+    private static List<Vec3> crossings(Segment a, Segment b, int endsA, int endsB, boolean[] free, double tol) {
+        if (a instanceof Straight sa && b instanceof Straight sb) {
+            if (shareAnEnd(sa, sb, tol)) {
+                // two straights meet at most once unless collinear (collinear overlaps are removed
+                // before), and here that meeting is the shared end: no crossing
+                return List.of();
+            }
+            if (PlanarCrossing.applies(sa, sb)) {
+                Vec3 x = PlanarCrossing.properCrossing(sa, sb);
+                if (x != null && nearEnd(sa, x, tol) < 0 && nearEnd(sb, x, tol) < 0) {
+                    return List.of(x);
                 }
             }
         }
-        Contact c = ClosestPoints.between(a, b);
-        if (c.distance() > tol) {
-            return null;
+        List<Vec3> out = new ArrayList<>(1);
+        for (Contact c : ClosestPoints.within(a, b, tol)) {
+            int nearA = nearEnd(a, c.pa(), tol);
+            int nearB = nearEnd(b, c.pb(), tol);
+            boolean shared = nearA >= 0 && nearB >= 0;
+            boolean freeEndA = nearA >= 0 && free[endsA + nearA];
+            boolean freeEndB = nearB >= 0 && free[endsB + nearB];
+            if (!shared && !freeEndA && !freeEndB) {
+                out.add(c.middle());
+            }
         }
-        int nearA = nearEnd(a, c.pa(), tol);
-        int nearB = nearEnd(b, c.pb(), tol);
-        if (nearA >= 0 && nearB >= 0) {
-            return null;
-        }
-        if (nearA >= 0 && free[endsA + nearA]) {
-            return null;
-        }
-        if (nearB >= 0 && free[endsB + nearB]) {
-            return null;
-        }
-        return c.middle();
+        return out;
     }
 
     /** A well-mixed key of a pair of chain numbers (plain packing hashes badly in a HashMap). */
