@@ -17,7 +17,10 @@ import org.linemass.engine.pieces.checks.SectionCache;
 import org.linemass.engine.pieces.checks.SizeCheck;
 import org.linemass.engine.pieces.dedup.DedupResult;
 import org.linemass.engine.pieces.dedup.Deduplicator;
+import org.linemass.engine.pieces.geom.CandidatePairs;
 import org.linemass.engine.pieces.geom.Curves;
+import org.linemass.engine.pieces.geom.DerivedIndex;
+import org.linemass.engine.pieces.geom.SegmentIndex;
 import org.linemass.engine.pieces.join.Chain;
 import org.linemass.engine.pieces.join.JoinResult;
 import org.linemass.engine.pieces.join.Joiner;
@@ -25,7 +28,6 @@ import org.linemass.engine.pieces.marks.Grouper;
 import org.linemass.engine.result.Bend;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.section.Section;
-import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
 
 /**
@@ -59,12 +61,18 @@ public final class PieceAnalyzer {
         Objects.requireNonNull(tol, "tolerances");
         Objects.requireNonNull(sections, "section lookup");
         SectionCache cache = new SectionCache(sections);
-        DedupResult dedup = Deduplicator.run(world, tol.joinM(), cache);
+        SegmentIndex index = new SegmentIndex(world, tol.joinM());
+        CandidatePairs pairs = CandidatePairs.of(index, world.size(),
+                (i, j) -> world.get(i).source().layer().equals(world.get(j).source().layer()));
+        DedupResult dedup = Deduplicator.run(world, pairs, tol.joinM(), cache);
         List<Finding> findings = new ArrayList<>(dedup.findings());
 
         List<Segment> joinable = new ArrayList<>(dedup.kept().size());
+        int[] origin = new int[dedup.kept().size()];
+        int[] keptOrigin = dedup.origin();
         List<Piece> pieces = new ArrayList<>();
-        for (Segment s : dedup.kept()) {
+        for (int k = 0; k < dedup.kept().size(); k++) {
+            Segment s = dedup.kept().get(k);
             double len = Curves.length(s);
             Finding f = SizeCheck.check(s, len, tol);
             if (f != null) {
@@ -73,6 +81,7 @@ public final class PieceAnalyzer {
                     pieces.add(piece(List.of(s), false, cache, tol, findings));
                 }
             } else {
+                origin[joinable.size()] = keptOrigin[k];
                 joinable.add(s);
             }
         }
@@ -93,7 +102,10 @@ public final class PieceAnalyzer {
         }
         findings.addAll(GapCheck.check(joinable, layerOf, joined.freeEnd(), joined.endPoint(),
                 joined.chainOfSegment(), chainLength, tol));
-        findings.addAll(ContactCheck.check(joinable, layerOf, joined.freeEnd(), joined.chainOfSegment(), tol));
+        DerivedIndex joinIndex = new DerivedIndex(index, world.size(), joinable,
+                java.util.Arrays.copyOf(origin, joinable.size()), tol.joinM());
+        findings.addAll(ContactCheck.check(joinable, joinIndex, pairs, layerOf, joined.freeEnd(), joined.chainOfSegment(),
+                tol));
 
         pieces.sort(PIECE_ORDER);
         List<String> keys = new ArrayList<>(pieces.size());
@@ -109,13 +121,13 @@ public final class PieceAnalyzer {
             List<Finding> findings) {
         String layer = segments.get(0).source().layer();
         Optional<Section> section = cache.forLayer(layer);
-        List<Bend> bends = BendFinder.bends(segments, closed, section, tol.angleRad(), tol.joinM());
-        if (!bends.isEmpty() && section.isPresent()) {
-            List<Provenance> sources = new ArrayList<>();
-            for (Segment s : segments) {
-                sources.add(s.source());
-            }
-            findings.addAll(BendCheck.check(layer, bends, section.get(), sources));
+        List<BendFinder.Located> located = BendFinder.located(segments, closed, section, tol.angleRad(), tol.joinM());
+        if (!located.isEmpty() && section.isPresent()) {
+            findings.addAll(BendCheck.check(layer, located, section.get()));
+        }
+        List<Bend> bends = new ArrayList<>(located.size());
+        for (BendFinder.Located b : located) {
+            bends.add(b.bend());
         }
         return new Piece(layer, segments, closed, bends);
     }

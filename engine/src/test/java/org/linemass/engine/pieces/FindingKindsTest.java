@@ -175,6 +175,19 @@ class FindingKindsTest {
     }
 
     @Test
+    void lineThroughARing_crossesItTwice() {
+        // ring r = 50 mm about the origin, a line y = 20 mm through it: crossings at x = +-sqrt(50^2 - 20^2)
+        PieceAnalysis r = run(List.of(Fixtures.arc(W, "10", 0, 0, 50, 0, 360), Fixtures.line(W, "11", -80, 20, 80, 20)));
+        List<Finding> c = of(r, FindingKind.CROSSING);
+        assertEquals(2, c.size(), r.findings().toString());
+        double x = Math.sqrt(0.05 * 0.05 - 0.02 * 0.02);
+        // Newton converges quadratically: 1 nm is generous
+        assertTrue(c.stream().anyMatch(f -> f.atM().distance(new Vec3(x, 0.02, 0)) < 1e-9), c.toString());
+        assertTrue(c.stream().anyMatch(f -> f.atM().distance(new Vec3(-x, 0.02, 0)) < 1e-9), c.toString());
+        assertTrue(c.get(0).message().contains("0 T-junctions and 2 crossings"), c.get(0).message());
+    }
+
+    @Test
     void lineThroughAnArc_isACrossing() {
         List<Segment> segs = new ArrayList<>();
         segs.add(Fixtures.arc(W, "10", 0, 0, 50, 0, 180));

@@ -19,13 +19,15 @@ public final class BendCheck {
     private BendCheck() {
     }
 
-    public static List<Finding> check(String layer, List<Bend> bends, Section section, List<Provenance> sources) {
+    public static List<Finding> check(String layer, List<BendFinder.Located> bends, Section section) {
         List<Finding> out = new ArrayList<>();
         if (section == null || section.minBendRadiusM() == null) {
             return out;
         }
         double min = section.minBendRadiusM();
-        for (Bend b : bends) {
+        for (BendFinder.Located located : bends) {
+            Bend b = located.bend();
+            List<Provenance> sources = located.sources();
             if (b.insideRadiusM() == null) {
                 out.add(Findings.of(FindingKind.SHARP_CORNER, Severity.WARNING, b.atM(), null, layer, sources, null,
                         "Sharp corner of " + Findings.deg(b.angleDeg()) + " with no radius on section "

@@ -7,6 +7,7 @@ import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.engine.result.Bend;
 import org.linemass.engine.section.Section;
 import org.linemass.geometry.CircularArc;
+import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Vec3;
 
@@ -24,9 +25,23 @@ public final class BendFinder {
     private BendFinder() {
     }
 
+    /** A bend and the entities that form it (the arc or arcs, or the two segments at a corner). */
+    public record Located(Bend bend, List<Provenance> sources) {
+
+        public Located {
+            sources = List.copyOf(sources);
+        }
+    }
+
     public static List<Bend> bends(List<Segment> run, boolean closed, Optional<Section> section, double angleRad,
             double joinM) {
-        List<Bend> out = new ArrayList<>();
+        return located(run, closed, section, angleRad, joinM).stream().map(Located::bend).toList();
+    }
+
+    /** The bends with their entities, in order along the run. */
+    public static List<Located> located(List<Segment> run, boolean closed, Optional<Section> section,
+            double angleRad, double joinM) {
+        List<Located> out = new ArrayList<>();
         int n = run.size();
         Double halfDiameter = section.map(Section::diameterM).map(d -> d / 2).orElse(null);
         int i = 0;
@@ -43,14 +58,19 @@ public final class BendFinder {
                 Vec3 at = middle(run, i, last);
                 double r = arc.radius();
                 double inside = halfDiameter == null ? r : r - halfDiameter;
-                out.add(new Bend(at, Math.toDegrees(sweep), inside, r));
+                List<Provenance> who = new ArrayList<>();
+                for (int k = i; k <= last; k++) {
+                    who.add(run.get(k).source());
+                }
+                out.add(new Located(new Bend(at, Math.toDegrees(sweep), inside, r), who));
             }
             boolean hasNext = last + 1 < n || (closed && n > 1);
             if (hasNext) {
                 Segment next = run.get((last + 1) % n);
                 double a = corner(run.get(last), next);
                 if (a > angleRad) {
-                    out.add(new Bend(run.get(last).end(), Math.toDegrees(a), null, null));
+                    out.add(new Located(new Bend(run.get(last).end(), Math.toDegrees(a), null, null),
+                            List.of(run.get(last).source(), next.source())));
                 }
             }
             i = last + 1;

@@ -9,7 +9,9 @@ import org.linemass.engine.Tolerances;
 import org.linemass.engine.pieces.geom.ClosestPoints;
 import org.linemass.engine.pieces.geom.Contact;
 import org.linemass.engine.pieces.geom.PlanarCrossing;
-import org.linemass.engine.pieces.geom.SegmentIndex;
+import org.linemass.engine.pieces.geom.BoxIndex;
+import org.linemass.engine.pieces.geom.CandidatePairs;
+import org.linemass.engine.pieces.geom.DerivedIndex;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.FindingKind;
 import org.linemass.engine.result.Severity;
@@ -30,8 +32,8 @@ import org.linemass.geometry.Vec3;
  * <li>{@code self_crossing} (warning): the same for two parts of one piece.</li>
  * </ul>
  * In welded wire products each T-junction and crossing is a weld; every message carries the
- * drawing's totals. Only the closest approach of each pair of segments is examined, so a curve
- * meeting another twice is reported once.
+ * drawing's totals. A curve meeting another at several places gives one crossing per place
+ * ({@link ClosestPoints#within}).
  */
 public final class ContactCheck {
 
@@ -41,10 +43,13 @@ public final class ContactCheck {
     private record Hit(String kind, Vec3 at, int a, int b) {
     }
 
-    public static List<Finding> check(List<Segment> segments, int[] layerOf, boolean[] free, int[] chainOf,
-            Tolerances tol) {
+    /**
+     * @param index candidate search over {@code segments} through the input segments they came from
+     * @param pairs candidate pairs of input segments (boxes grown by at least the join tolerance)
+     */
+    public static List<Finding> check(List<Segment> segments, DerivedIndex index, CandidatePairs pairs,
+            int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol) {
         double j = tol.joinM();
-        SegmentIndex index = new SegmentIndex(segments, j);
         List<Hit> hits = new ArrayList<>();
         for (int e = 0; e < free.length; e++) {
             if (free[e]) {
@@ -55,29 +60,28 @@ public final class ContactCheck {
             }
         }
         Map<Long, List<Vec3>> seen = new HashMap<>();
-        for (int i = 0; i < segments.size(); i++) {
-            final int ii = i;
-            Segment a = segments.get(i);
-            index.query(index.box(i), k -> {
-                if (k <= ii || layerOf[k] != layerOf[ii]) {
-                    return;
-                }
-                Vec3 at = crossing(a, segments.get(k), 2 * ii, 2 * k, free, j);
-                if (at == null) {
-                    return;
-                }
+        pairs.forEach((oi, oj) -> index.derivedOf(oi, ii -> index.derivedOf(oj, k -> {
+            if (ii == k || layerOf[k] != layerOf[ii] || !index.box(ii).intersects(index.box(k))) {
+                return;
+            }
+            for (Vec3 at : crossings(segments.get(ii), segments.get(k), 2 * ii, 2 * k, free, j)) {
                 int ca = Math.min(chainOf[ii], chainOf[k]);
                 int cb = Math.max(chainOf[ii], chainOf[k]);
-                List<Vec3> places = seen.computeIfAbsent(((long) ca << 32) | cb, x -> new ArrayList<>());
+                List<Vec3> places = seen.computeIfAbsent(pairKey(ca, cb), x -> new ArrayList<>());
+                boolean known = false;
                 for (Vec3 p : places) {
                     if (p.distance(at) <= j) {
-                        return;
+                        known = true;
+                        break;
                     }
                 }
-                places.add(at);
-                hits.add(new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, at, ii, k));
-            });
-        }
+                if (!known) {
+                    places.add(at);
+                    hits.add(new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, at,
+                            Math.min(ii, k), Math.max(ii, k)));
+                }
+            }
+        })));
         long tees = hits.stream().filter(h -> h.kind().equals(FindingKind.T_JUNCTION)).count();
         long crossings = hits.stream().filter(h -> h.kind().equals(FindingKind.CROSSING)).count();
         String totals = String.format(Locale.ROOT, " Drawing total: %d T-junction%s and %d crossing%s.", tees,
@@ -103,7 +107,7 @@ public final class ContactCheck {
         return out;
     }
 
-    private static Hit tJunction(List<Segment> segments, int[] layerOf, SegmentIndex index, int end, double tol) {
+    private static Hit tJunction(List<Segment> segments, int[] layerOf, BoxIndex index, int end, double tol) {
         int own = end >> 1;
         Segment s = segments.get(own);
         Vec3 p = (end & 1) == 0 ? s.start() : s.end();
@@ -129,34 +133,44 @@ public final class ContactCheck {
         return who[0] < 0 ? null : new Hit(FindingKind.T_JUNCTION, p, own, who[0]);
     }
 
-    /** Where a and b cross without a shared vertex, or null. */
-    private static Vec3 crossing(Segment a, Segment b, int endsA, int endsB, boolean[] free, double tol) {
-        if (a instanceof Straight sa && b instanceof Straight sb && PlanarCrossing.applies(sa, sb)) {
-            Vec3 x = PlanarCrossing.properCrossing(sa, sb);
-            if (x != null) {
-                boolean nearA = x.distance(sa.a()) <= tol || x.distance(sa.b()) <= tol;
-                boolean nearB = x.distance(sb.a()) <= tol || x.distance(sb.b()) <= tol;
-                if (!nearA && !nearB) {
-                    return x;
+    /** Where a and b cross without a shared vertex (possibly several places for curves). */
+    private static List<Vec3> crossings(Segment a, Segment b, int endsA, int endsB, boolean[] free, double tol) {
+        if (a instanceof Straight sa && b instanceof Straight sb) {
+            if (shareAnEnd(sa, sb, tol)) {
+                // two straights meet at most once unless collinear (collinear overlaps are removed
+                // before), and here that meeting is the shared end: no crossing
+                return List.of();
+            }
+            if (PlanarCrossing.applies(sa, sb)) {
+                Vec3 x = PlanarCrossing.properCrossing(sa, sb);
+                if (x != null && nearEnd(sa, x, tol) < 0 && nearEnd(sb, x, tol) < 0) {
+                    return List.of(x);
                 }
             }
         }
-        Contact c = ClosestPoints.between(a, b);
-        if (c.distance() > tol) {
-            return null;
+        List<Vec3> out = new ArrayList<>(1);
+        for (Contact c : ClosestPoints.within(a, b, tol)) {
+            int nearA = nearEnd(a, c.pa(), tol);
+            int nearB = nearEnd(b, c.pb(), tol);
+            boolean shared = nearA >= 0 && nearB >= 0;
+            boolean freeEndA = nearA >= 0 && free[endsA + nearA];
+            boolean freeEndB = nearB >= 0 && free[endsB + nearB];
+            if (!shared && !freeEndA && !freeEndB) {
+                out.add(c.middle());
+            }
         }
-        int nearA = nearEnd(a, c.pa(), tol);
-        int nearB = nearEnd(b, c.pb(), tol);
-        if (nearA >= 0 && nearB >= 0) {
-            return null;
-        }
-        if (nearA >= 0 && free[endsA + nearA]) {
-            return null;
-        }
-        if (nearB >= 0 && free[endsB + nearB]) {
-            return null;
-        }
-        return c.middle();
+        return out;
+    }
+
+    /** A well-mixed key of a pair of chain numbers (plain packing hashes badly in a HashMap). */
+    private static long pairKey(int a, int b) {
+        long h = (((long) a << 32) | (b & 0xFFFFFFFFL)) * 0x9E3779B97F4A7C15L;
+        return h ^ (h >>> 29);
+    }
+
+    private static boolean shareAnEnd(Straight a, Straight b, double tol) {
+        return a.a().distance(b.a()) <= tol || a.a().distance(b.b()) <= tol || a.b().distance(b.a()) <= tol
+                || a.b().distance(b.b()) <= tol;
     }
 
     /** 0 when p is within tol of the start, 1 of the end, -1 otherwise. */

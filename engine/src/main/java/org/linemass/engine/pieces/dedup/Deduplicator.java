@@ -9,7 +9,7 @@ import org.linemass.engine.pieces.checks.Findings;
 import org.linemass.engine.pieces.checks.SectionCache;
 import org.linemass.engine.pieces.geom.ClosestPoints;
 import org.linemass.engine.pieces.geom.Curves;
-import org.linemass.engine.pieces.geom.SegmentIndex;
+import org.linemass.engine.pieces.geom.CandidatePairs;
 import org.linemass.engine.pieces.geom.UnionFind;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.FindingKind;
@@ -39,38 +39,30 @@ public final class Deduplicator {
 
     /**
      * @param segments world segments in metres
+     * @param pairs candidate pairs of {@code segments} on the same layer, boxes grown by at least {@code tolM}
      * @param tolM join tolerance (metres): closer than this counts as the same place
      */
-    public static DedupResult run(List<Segment> segments, double tolM, SectionCache sections) {
+    public static DedupResult run(List<Segment> segments, CandidatePairs pairs, double tolM,
+            SectionCache sections) {
         int n = segments.size();
         double[] length = new double[n];
         for (int i = 0; i < n; i++) {
             length[i] = Curves.length(segments.get(i));
         }
-        SegmentIndex index = new SegmentIndex(segments, tolM);
         UnionFind uf = new UnionFind(n);
         boolean[] any = new boolean[n];
-        for (int i = 0; i < n; i++) {
-            if (!(length[i] > tolM)) {
-                continue;
+        pairs.forEach((i, j) -> {
+            if (!(length[i] > tolM) || !(length[j] > tolM)) {
+                return;
             }
             Segment a = segments.get(i);
-            final int ii = i;
-            index.query(index.box(i), j -> {
-                if (j <= ii || !(length[j] > tolM)) {
-                    return;
-                }
-                Segment b = segments.get(j);
-                if (!a.source().layer().equals(b.source().layer()) || a.getClass() != b.getClass()) {
-                    return;
-                }
-                if (sameCarrier(a, b, tolM)) {
-                    uf.union(ii, j);
-                    any[ii] = true;
-                    any[j] = true;
-                }
-            });
-        }
+            Segment b = segments.get(j);
+            if (a.getClass() == b.getClass() && sameCarrier(a, b, tolM)) {
+                uf.union(i, j);
+                any[i] = true;
+                any[j] = true;
+            }
+        });
         Map<Integer, List<Integer>> clusters = new LinkedHashMap<>();
         for (int i = 0; i < n; i++) {
             if (any[i]) {
@@ -98,15 +90,19 @@ public final class Deduplicator {
             }
         }
         List<Segment> out = new ArrayList<>(n);
+        int[] origin = new int[n + removed.size() + 2 * clusters.size() + 16];
         for (int i = 0; i < n; i++) {
             List<Segment> r = replacement.get(i);
-            if (r == null) {
-                out.add(segments.get(i));
-            } else {
-                out.addAll(r);
+            List<Segment> parts = r == null ? List.of(segments.get(i)) : r;
+            for (Segment s : parts) {
+                if (out.size() == origin.length) {
+                    origin = java.util.Arrays.copyOf(origin, 2 * origin.length);
+                }
+                origin[out.size()] = i;
+                out.add(s);
             }
         }
-        return new DedupResult(out, removed, findings);
+        return new DedupResult(out, java.util.Arrays.copyOf(origin, out.size()), removed, findings);
     }
 
     static boolean sameCarrier(Segment a, Segment b, double tol) {

@@ -142,6 +142,71 @@ public final class ClosestPoints {
         return new Contact(st[0], qa, st[1], qb, qa.distance(qb));
     }
 
+    /**
+     * Every place where two curves come within {@code tol} of each other (a line through a ring
+     * meets it twice): each pair of polyline chords closer than {@code tol} plus the chords' sag
+     * starts a Newton refinement; results within {@code tol} are kept, one per place (places closer
+     * than {@code tol} on the first curve are merged). Two straights give at most one contact.
+     */
+    public static java.util.List<Contact> within(Segment a, Segment b, double tol) {
+        java.util.List<Contact> out = new java.util.ArrayList<>();
+        if (a instanceof Straight && b instanceof Straight) {
+            Contact c = between(a, b);
+            if (c.distance() <= tol) {
+                out.add(c);
+            }
+            return out;
+        }
+        double[] ta = Curves.polylineParams(a);
+        double[] tb = Curves.polylineParams(b);
+        Vec3[] pa = points(a, ta);
+        Vec3[] pb = points(b, tb);
+        double[] sagA = sags(a, ta, pa);
+        double[] sagB = sags(b, tb, pb);
+        for (int i = 1; i < pa.length; i++) {
+            for (int j = 1; j < pb.length; j++) {
+                double[] st = segmentSegment(pa[i - 1], pa[i], pb[j - 1], pb[j]);
+                Vec3 qa = pa[i - 1].plusScaled(pa[i].minus(pa[i - 1]), st[0]);
+                Vec3 qb = pb[j - 1].plusScaled(pb[j].minus(pb[j - 1]), st[1]);
+                if (qa.distance(qb) > tol + sagA[i] + sagB[j]) {
+                    continue;
+                }
+                double[] r = refinePair(a, b, ta[i - 1] + st[0] * (ta[i] - ta[i - 1]),
+                        tb[j - 1] + st[1] * (tb[j] - tb[j - 1]));
+                Vec3 ra = a.point(r[0]);
+                Vec3 rb = b.point(r[1]);
+                double d = ra.distance(rb);
+                if (d > tol) {
+                    continue;
+                }
+                boolean known = false;
+                for (Contact c : out) {
+                    if (c.pa().distance(ra) <= tol) {
+                        known = true;
+                        break;
+                    }
+                }
+                if (!known) {
+                    out.add(new Contact(r[0], ra, r[1], rb, d));
+                }
+            }
+        }
+        return out;
+    }
+
+    /** For each chord i (ending at point i), twice the distance from its midpoint to the curve's. */
+    private static double[] sags(Segment s, double[] ts, Vec3[] ps) {
+        double[] out = new double[ts.length];
+        if (s instanceof Straight) {
+            return out;
+        }
+        for (int i = 1; i < ts.length; i++) {
+            Vec3 mid = ps[i - 1].plus(ps[i]).times(0.5);
+            out[i] = 2 * mid.distance(s.point(0.5 * (ts[i - 1] + ts[i])));
+        }
+        return out;
+    }
+
     private static Vec3[] points(Segment s, double[] ts) {
         Vec3[] out = new Vec3[ts.length];
         for (int i = 0; i < ts.length; i++) {

@@ -3,16 +3,22 @@ package org.linemass.engine.pieces.geom;
 import java.util.function.IntConsumer;
 
 /**
- * A spatial hash of points on a cubic grid of a given cell size, each point tagged with a group
- * number (the layer) so that only points of the same group are reported together. Built once in
- * O(n) (open addressing from cell key to a chain of points); {@link #near} visits every point of
- * the same group whose cell touches the query cube (3 x 3 x 3 cells), so a radius no larger than
- * the cell size finds every point within it, plus some farther ones the caller filters by distance.
+ * A spatial hash of points on a cubic grid, each point tagged with a group number (the layer) so
+ * that only points of the same group are reported together. Built once in O(n) (open addressing
+ * from cell key to a chain of points). Cells are {@link #CELL_FACTOR} times the search radius and
+ * the grid is shifted by half a cell (so a drawing lying in the plane z = 0 sits mid-cell); per
+ * axis {@link #near} looks into the neighbouring cell only when the query point is within the
+ * radius of that side, so a typical query reads one or two cells. It visits every point of the
+ * group within the radius (and some farther ones the caller filters by distance).
  * Not thread-safe while building; immutable afterwards.
  */
 public final class PointGrid {
 
+    /** Cell edge in search radii: larger cells mean fewer neighbour lookups, more points per cell. */
+    public static final double CELL_FACTOR = 8;
+
     private final double cell;
+    private final double radius;
     private final double[] xyz;
     private final int[] group;
     private final long[] keys;
@@ -23,17 +29,18 @@ public final class PointGrid {
     /**
      * @param xyz coordinates, three per point
      * @param group group number per point
-     * @param cellSize edge of a grid cell, positive
+     * @param radius the largest search radius {@link #near} must honour, positive
      */
-    public PointGrid(double[] xyz, int[] group, double cellSize) {
-        if (!(cellSize > 0) || !Double.isFinite(cellSize)) {
-            throw new IllegalArgumentException("grid cell size must be positive and finite, got " + cellSize);
+    public PointGrid(double[] xyz, int[] group, double radius) {
+        if (!(radius > 0) || !Double.isFinite(radius)) {
+            throw new IllegalArgumentException("grid search radius must be positive and finite, got " + radius);
         }
         if (xyz.length != 3 * group.length) {
             throw new IllegalArgumentException("need 3 coordinates per point: " + xyz.length + " for "
                     + group.length + " points");
         }
-        this.cell = cellSize;
+        this.cell = CELL_FACTOR * radius;
+        this.radius = radius;
         this.xyz = xyz;
         this.group = group;
         int n = group.length;
@@ -55,7 +62,12 @@ public final class PointGrid {
     }
 
     private long cellOf(double v) {
-        return (long) Math.floor(v / cell);
+        return (long) Math.floor(v / cell + 0.5);
+    }
+
+    /** Distance from v to the lower face of its cell. */
+    private double below(double v, long c) {
+        return v - (c - 0.5) * cell;
     }
 
     private int slot(long k) {
@@ -77,14 +89,17 @@ public final class PointGrid {
         return h;
     }
 
-    /** Visits every point of group {@code g} in the 27 cells around (x, y, z). */
+    /** Visits (at least) every point of group {@code g} within the radius of (x, y, z). */
     public void near(double x, double y, double z, int g, IntConsumer visitor) {
         long cx = cellOf(x);
         long cy = cellOf(y);
         long cz = cellOf(z);
-        for (long dx = -1; dx <= 1; dx++) {
-            for (long dy = -1; dy <= 1; dy++) {
-                for (long dz = -1; dz <= 1; dz++) {
+        double bx = below(x, cx);
+        double by = below(y, cy);
+        double bz = below(z, cz);
+        for (long dx = bx <= radius ? -1 : 0; dx <= (cell - bx <= radius ? 1 : 0); dx++) {
+            for (long dy = by <= radius ? -1 : 0; dy <= (cell - by <= radius ? 1 : 0); dy++) {
+                for (long dz = bz <= radius ? -1 : 0; dz <= (cell - bz <= radius ? 1 : 0); dz++) {
                     long k = key(cx + dx, cy + dy, cz + dz, g);
                     int s = slot(k);
                     for (int i = heads[s]; i >= 0; i = next[i]) {

@@ -12,7 +12,7 @@ import org.locationtech.jts.index.strtree.STRtree;
  * margin) answering "which segments may come within the margin of this box". The z extent is
  * checked by the caller's exact test. Query cost is O(log n + k). JTS types stay inside.
  */
-public final class SegmentIndex {
+public final class SegmentIndex implements BoxIndex {
 
     private final STRtree tree;
     private final Box3[] boxes;
@@ -32,12 +32,13 @@ public final class SegmentIndex {
         tree.build();
     }
 
-    /** The grown box of segment {@code i}. */
+    @Override
     public Box3 box(int i) {
         return boxes[i];
     }
 
     /** Visits every indexed segment whose grown box meets {@code box} (z included). */
+    @Override
     public void query(Box3 box, IntConsumer visitor) {
         if (boxes.length == 0) {
             return;

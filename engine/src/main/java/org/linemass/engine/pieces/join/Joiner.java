@@ -19,8 +19,8 @@ import org.linemass.geometry.Vec3;
  * {@link EndPairing}, then walked: first from every end that has no partner (open runs), then
  * what is left forms closed loops. Segments are reversed where needed so a run is consistently
  * oriented; an open run is turned round so its start is lexicographically before its end, and a
- * closed loop starts at its lexicographically smallest vertex, so the result does not depend on
- * input order or segment direction. Findings: {@code branch} (info) at every node where three or
+ * closed loop starts at its lexicographically smallest vertex heading to the smaller neighbour,
+ * so the result does not depend on input order or segment direction. Findings: {@code branch} (info) at every node where three or
  * more ends meet, and {@code joined_across_gap} (info) for every joined pair of ends farther apart
  * than {@link Tolerances#noiseM()}. Cost O(n) expected besides the per-node pairing.
  */
@@ -136,7 +136,26 @@ public final class Joiner {
         return new Chain(segs, idx, false, startEnd, lastExit);
     }
 
+    /**
+     * A loop starting at its lexicographically smallest vertex and running towards the smaller of
+     * that vertex's two neighbours, so its form does not depend on input order or direction.
+     */
     private static Chain canonicalLoop(List<Segment> segs, List<Integer> idx) {
+        Chain forward = rotated(segs, idx);
+        int n = forward.segments().size();
+        if (n < 2 || Curves.compare(forward.segments().get(0).end(), forward.segments().get(n - 1).start()) <= 0) {
+            return forward;
+        }
+        List<Segment> rev = new ArrayList<>(n);
+        List<Integer> ridx = new ArrayList<>(n);
+        for (int k = n - 1; k >= 0; k--) {
+            rev.add(forward.segments().get(k).reversed());
+            ridx.add(forward.indices().get(k));
+        }
+        return rotated(rev, ridx);
+    }
+
+    private static Chain rotated(List<Segment> segs, List<Integer> idx) {
         int best = 0;
         for (int k = 1; k < segs.size(); k++) {
             if (Curves.compare(segs.get(k).start(), segs.get(best).start()) < 0) {

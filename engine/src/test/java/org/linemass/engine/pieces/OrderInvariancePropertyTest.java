@@ -21,7 +21,7 @@ import org.linemass.geometry.Vec3;
  * T-junction in their interior are not split, because a split point there would change the
  * defect itself (a vertex where there was none).
  */
-class OrderInvarianceProperties {
+class OrderInvariancePropertyTest {
 
     private static final Set<String> KEEP_WHOLE = Set.of("36", "37", "38", "39", "3B", "3D", "3E");
 
@@ -70,5 +70,33 @@ class OrderInvarianceProperties {
         PieceAnalysis other = PieceAnalyzer.analyze(scrambled(scene(), seed), Fixtures.tol(),
                 Fixtures.sections("MESH_WIRE_D4", Fixtures.WIRE_D4), false);
         assertEquals(CanonicalSummary.of(reference), CanonicalSummary.of(other));
+        assertWellFormed(other, Fixtures.tol().joinM());
+    }
+
+    /**
+     * Piece contract (Piece javadoc): consecutive segments meet within the join tolerance, a closed
+     * piece's last end meets its first start; PieceAnalysis contract: the groups partition the
+     * pieces.
+     */
+    static void assertWellFormed(PieceAnalysis r, double joinM) {
+        for (Piece p : r.pieces()) {
+            List<Segment> s = p.segments();
+            for (int i = 1; i < s.size(); i++) {
+                org.junit.jupiter.api.Assertions.assertTrue(s.get(i - 1).end().distance(s.get(i).start()) <= joinM,
+                        "segments of a piece meet: " + p);
+            }
+            if (p.closed()) {
+                org.junit.jupiter.api.Assertions.assertTrue(
+                        s.get(s.size() - 1).end().distance(s.get(0).start()) <= joinM, "loop closes: " + p);
+            }
+        }
+        List<Integer> all = new ArrayList<>();
+        r.groups().forEach(all::addAll);
+        all.sort(null);
+        List<Integer> expected = new ArrayList<>();
+        for (int i = 0; i < r.pieces().size(); i++) {
+            expected.add(i);
+        }
+        assertEquals(expected, all, "every piece in exactly one group");
     }
 }
