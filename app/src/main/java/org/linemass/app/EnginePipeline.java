@@ -12,9 +12,10 @@ import org.linemass.importer.ImportOptions;
 import org.linemass.reports.Report;
 
 /**
- * The real pipeline: {@link DxfImporter#read} then {@link Analyzer#analyze}. Piece shapes for the
- * HTML picture are not yet supplied by the engine, so pieces are drawn start to end until the
- * engine offers sampled centre-lines (integration seam: fill {@link Report#pieceShapes} here).
+ * The real pipeline: {@link DxfImporter#read} then {@link Analyzer#analyze}. Integration seam:
+ * the engine does not yet hand out the segments of each piece, so the HTML picture draws each
+ * piece from its start to its end; once it does, fill {@link Report#pieceShapes} here with
+ * {@code org.linemass.reports.ShapeSampler.sample(piece.segments(), chordM)} per piece id.
  */
 public final class EnginePipeline implements DrawingPipeline {
 

@@ -21,7 +21,7 @@ import org.linemass.reports.dxf.DxfPairScanner.Pair;
  * ENTITIES section, and a raised $HANDSEED (when the header has one) so that the new handles stay
  * unique. Each finding with a place gets a CIRCLE and a TEXT "n kind" (n is the finding's number in
  * every report); the centre of gravity (or the length centroid without mass) gets a CIRCLE, two
- * LINEs and the TEXT "CG". Sizes are 1 % of the drawing's extent. Coordinates are converted back
+ * LINEs and the TEXT "CG"; a drawing read incompletely gets one more TEXT saying so. Sizes are 1 % of the drawing's extent. Coordinates are converted back
  * from metres to drawing units. Files from R13 on get handles and subclass markers; R12 files get
  * the plain R12 form. Binary DXF is refused (IOException).
  */
@@ -82,6 +82,11 @@ public final class DxfMarkupWriter {
             ents.append(e.line(layer, c.minus(new Vec3(1.5 * size, 0, 0)), c.plus(new Vec3(1.5 * size, 0, 0)), COG_COLOUR));
             ents.append(e.line(layer, c.minus(new Vec3(0, 1.5 * size, 0)), c.plus(new Vec3(0, 1.5 * size, 0)), COG_COLOUR));
             ents.append(e.text(layer, c.plus(new Vec3(size, -2 * size, 0)), size, "CG", COG_COLOUR));
+        }
+        if (!result.complete()) {
+            Vec3 at = cog != null && cog.isFinite() ? cog.times(perMetre).plus(new Vec3(size, -4 * size, 0))
+                    : Vec3.ZERO;
+            ents.append(e.text(layer, at, size, "TOTALS INCOMPLETE: PART OF THE DRAWING WAS NOT COUNTED", 0));
         }
         splices.add(new Splice(layout.entitiesEnd, 0, ents.toString()));
         if (layout.handseedValueOffset >= 0 && modern) {
