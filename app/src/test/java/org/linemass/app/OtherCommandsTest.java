@@ -124,8 +124,9 @@ class OtherCommandsTest {
         FieldIntegrator fake = (file, io, settings, expr) -> {
             expressions.add(expr);
             // integral of x over the bar from (0,0,0) to (1,0,0): closed form 1/2
-            return new FieldIntegrator.Result(expr, List.of(new FieldIntegrator.Row(1, "BAR", 0.5, 1e-16)),
-                    List.of(new FieldIntegrator.Row(null, "BAR", 0.5, 1e-16)), 0.5, 1e-16);
+            return new FieldIntegrator.Result(expr, List.of(new FieldIntegrator.Row(1, "BAR", 1.0, 0.5, 1e-16)),
+                    List.of(new FieldIntegrator.Row(null, "BAR", 1.0, 0.5, 1e-16)), 0.5, 1e-16,
+                    List.of("1 entity skipped"));
         };
         StringWriter out = new StringWriter();
         AppContext ctx = new AppContext(new PrintWriter(out), new PrintWriter(new StringWriter()), new FakePipeline(),
@@ -134,9 +135,12 @@ class OtherCommandsTest {
         assertEquals(0, code);
         assertEquals(List.of("x"), expressions);
         List<String> lines = out.toString().lines().toList();
-        assertEquals("integral of x ds (SI units)", lines.get(0));
+        assertTrue(lines.get(0).startsWith("integral of x ds"), out.toString());
+        assertTrue(lines.get(1).contains("error bound"));
         assertTrue(lines.get(2).startsWith("1 ") && lines.get(2).contains("0.500000000000"), out.toString());
-        assertTrue(lines.get(lines.size() - 1).startsWith("total"), out.toString());
+        assertTrue(lines.get(3).startsWith("layer"), out.toString());
+        assertTrue(lines.get(4).startsWith("total"), out.toString());
+        assertEquals("incomplete: 1 entity skipped", lines.get(5));
     }
 
     @Test
