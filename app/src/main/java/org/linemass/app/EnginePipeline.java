@@ -12,10 +12,19 @@ import org.linemass.importer.ImportOptions;
 import org.linemass.reports.Report;
 
 /**
- * The real pipeline: {@link DxfImporter#read} then {@link Analyzer#analyze}. Integration seam:
- * the engine does not yet hand out the segments of each piece, so the HTML picture draws each
- * piece from its start to its end; once it does, fill {@link Report#pieceShapes} here with
- * {@code org.linemass.reports.ShapeSampler.sample(piece.segments(), chordM)} per piece id.
+ * The real pipeline: {@link DxfImporter#read} then {@link Analyzer#analyze}. Integration seam: the
+ * engine's piece stage knows each piece's segments; once {@code Analyzer.analyze(drawing, settings,
+ * stage)} is merged, wrap the standard stage to keep its pieces and fill the picture shapes:
+ * <pre>
+ * List&lt;Piece&gt; kept = new ArrayList&lt;&gt;();
+ * DrawingResult result = Analyzer.analyze(drawing, settings, (world, tol, lookup, mirror) -&gt; {
+ *     PieceAnalysis pa = PieceAnalyzer.analyze(world, tol, lookup, mirror);
+ *     kept.addAll(pa.pieces());
+ *     return pa;
+ * });
+ * return new Report(result, PieceShapes.of(result, kept));
+ * </pre>
+ * Until then each piece is drawn from its start to its end point.
  */
 public final class EnginePipeline implements DrawingPipeline {
 
