@@ -196,7 +196,7 @@ public final class ConsoleReport {
     }
 
     private static void field(PrintWriter out, String name, String value) {
-        out.print("  " + String.format(java.util.Locale.ROOT, "%-18s", name) + value + "\n");
+        out.print("  " + String.format(java.util.Locale.ROOT, "%-20s", name) + value + "\n");
     }
 
     private static String orDash(String s) {
