@@ -102,9 +102,17 @@ final class CheckRun {
     private void markup(ReportFiles sink, List<Report> reports, List<Path> analysed) throws IOException {
         Path target = Path.of(outputs.markupDxf);
         boolean folder = reports.size() > 1 || Files.isDirectory(target);
+        java.util.Set<String> used = new java.util.HashSet<>();
         for (int i = 0; i < reports.size(); i++) {
             Path in = analysed.get(i);
-            Path out = folder ? target.resolve(markedName(in)) : target;
+            Path out = target;
+            if (folder) {
+                String name = markedName(in);
+                for (int k = 2; !used.add(name.toLowerCase(Locale.ROOT)); k++) {
+                    name = markedName(in).replace("-findings.dxf", "-findings-" + k + ".dxf");
+                }
+                out = target.resolve(name);
+            }
             byte[] original = Files.readAllBytes(in);
             Report r = reports.get(i);
             sink.bytes(out, os -> DxfMarkupWriter.write(original, r.result(), os));
@@ -115,7 +123,7 @@ final class CheckRun {
         ctx.out().flush();
     }
 
-    /** {@code name.dxf} becomes {@code name-findings.dxf}. */
+    /** {@code name.dxf} becomes {@code name-findings.dxf} (a second drawing of the same name gets {@code -2}, ...). */
     static String markedName(Path in) {
         String n = in.getFileName().toString();
         int dot = n.toLowerCase(Locale.ROOT).lastIndexOf(".dxf");

@@ -198,6 +198,20 @@ class CheckCommandTest {
     }
 
     @Test
+    void check_markupForSeveralDrawings_goesToFolderWithoutNameClashes() throws IOException {
+        String dxf = String.join("\n", "0", "SECTION", "2", "ENTITIES", "0", "ENDSEC", "0", "EOF", "");
+        Files.createDirectories(dir.resolve("a"));
+        Files.createDirectories(dir.resolve("b"));
+        Files.writeString(dir.resolve("a/gap.dxf"), dxf);
+        Files.writeString(dir.resolve("b/gap.dxf"), dxf);
+        Path out = dir.resolve("marked");
+        Run r = check("--markup-dxf", out.toString(), dir.resolve("a").toString(), dir.resolve("b").toString());
+        assertEquals(1, r.code(), r.err());
+        assertTrue(Files.readString(out.resolve("gap-findings.dxf")).contains("LINEMASS_FINDINGS"));
+        assertTrue(Files.exists(out.resolve("gap-findings-2.dxf")));
+    }
+
+    @Test
     void check_optionsReachTheSettings() throws IOException {
         Run r = check("--join", "0.02mm", "--gap-limit", "0.1in", "-a", "FR*=B8", "--assign", "A=B=C", "--only-layer",
                 "F*", "--skip-layer", "TEXT*", "--count-hidden-layers", "--mirror-alike", "--units", "in",
