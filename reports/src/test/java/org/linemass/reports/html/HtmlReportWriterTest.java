@@ -94,6 +94,24 @@ class HtmlReportWriterTest {
     }
 
     @Test
+    void write_markerSitsWhereTheFindingIs() throws IOException {
+        String s = html(List.of(Report.of(Fixtures.flatFrame("a.dxf"))));
+        // bar 1 runs from (0,0) to (1,0) m; the gap finding is at (1.0005, 0): 0.5 mm beyond its end
+        Matcher bar = Pattern.compile("points=\"([0-9.]+),([0-9.]+) ([0-9.]+),([0-9.]+)\"[^>]*><title>piece 1,")
+                .matcher(s);
+        assertTrue(bar.find());
+        double x0 = Double.parseDouble(bar.group(1));
+        double x1 = Double.parseDouble(bar.group(3));
+        double y1 = Double.parseDouble(bar.group(4));
+        Matcher marker = Pattern.compile("id=\"marker-1\".*?<circle cx=\"([0-9.]+)\" cy=\"([0-9.]+)\"").matcher(s);
+        assertTrue(marker.find());
+        double pxPerM = (x1 - x0) / 1.0;
+        // positions are printed with 2 decimals: 0.01 px
+        assertEquals(x1 + 0.0005 * pxPerM, Double.parseDouble(marker.group(1)), 0.011);
+        assertEquals(y1, Double.parseDouble(marker.group(2)), 0.011);
+    }
+
+    @Test
     void niceBelow_picksOneTwoFive() {
         assertEquals(0.2, SvgView.niceBelow(0.25), 0.0);
         assertEquals(5.0, SvgView.niceBelow(9.9), 0.0);
