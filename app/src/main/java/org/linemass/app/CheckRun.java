@@ -51,8 +51,12 @@ final class CheckRun {
             throw new InputProblem("--markup-dxf needs a file name, not '-'");
         }
         ReportFiles sink = new ReportFiles(ctx.out(), files);
+        java.util.Set<Path> seen = new java.util.HashSet<>();
         for (String t : outputs.targets()) {
             sink.guard(t);
+            if (!t.equals(OutputOptions.STDOUT) && !seen.add(Path.of(t).toAbsolutePath().normalize())) {
+                throw new InputProblem("two reports would be written to the same file " + t);
+            }
         }
         ImportOptions io = drawing.importOptions();
         AnalysisSettings settings = drawing.settings(ctx.sections());

@@ -51,6 +51,9 @@ final class ReportFiles {
         }
         Path p = Path.of(target);
         OutputGuard.check(p, inputs);
+        if (Files.isDirectory(p)) {
+            throw new IOException(target + " is a folder; give a file name");
+        }
         AtomicWrite.write(p, os -> {
             Writer w = new OutputStreamWriter(nonClosing(os), StandardCharsets.UTF_8);
             writer.write(reports, w);

@@ -161,6 +161,26 @@ class CheckCommandTest {
     }
 
     @Test
+    void check_outputProblems_exit2WithReadableLine() throws IOException {
+        Path ok = file("ok.dxf");
+        Run same = check("--json", dir.resolve("r.out").toString(), "--html", dir.resolve("r.out").toString(),
+                ok.toString());
+        assertEquals(2, same.code());
+        assertTrue(same.err().contains("same file"), same.err());
+        Files.createDirectories(dir.resolve("folder.json"));
+        Run folder = check("--json", dir.resolve("folder.json").toString(), ok.toString());
+        assertEquals(2, folder.code());
+        assertTrue(folder.err().contains("is a folder"), folder.err());
+    }
+
+    @Test
+    void describe_fileSystemErrors_sayWhatHappened() {
+        assertEquals("/x/y: permission denied", Cli.describe(new java.nio.file.AccessDeniedException("/x/y")));
+        assertEquals("/x/y: no such file or folder", Cli.describe(new java.nio.file.NoSuchFileException("/x/y")));
+        assertEquals("/x/y: directory not empty", Cli.describe(new java.nio.file.DirectoryNotEmptyException("/x/y")));
+    }
+
+    @Test
     void check_jsonToStdout_isOnlyValidJson() throws Exception {
         Run r = check("--json", "-", file("ok.dxf").toString(), file("gap.dxf").toString());
         assertEquals(1, r.code());
