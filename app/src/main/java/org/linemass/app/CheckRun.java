@@ -88,9 +88,9 @@ final class CheckRun {
             new ConsoleReport(units, ctx.terminal(), common.quiet).print(reports, ctx.out());
         }
         sink.text(outputs.json, reports, JsonReportWriter::write);
-        sink.text(outputs.bomCsv, reports, (r, w) -> BomCsvWriter.write(r, units, w));
-        sink.text(outputs.piecesCsv, reports, (r, w) -> PiecesCsvWriter.write(r, units, w));
-        sink.text(outputs.findingsCsv, reports, (r, w) -> FindingsCsvWriter.write(r, units, w));
+        sink.text(outputs.bomCsv, reports, (r, w) -> BomCsvWriter.write(r, units, w), true);
+        sink.text(outputs.piecesCsv, reports, (r, w) -> PiecesCsvWriter.write(r, units, w), true);
+        sink.text(outputs.findingsCsv, reports, (r, w) -> FindingsCsvWriter.write(r, units, w), true);
         sink.text(outputs.html, reports, (r, w) -> new HtmlReportWriter(units).write(r, w));
         if (outputs.markupDxf != null) {
             markup(sink, reports, analysed);

@@ -206,9 +206,11 @@ class CheckCommandTest {
                 out.resolve("findings.csv").toString(), "--html", out.resolve("r.html").toString(), "--markup-dxf",
                 out.resolve("marked.dxf").toString(), "--imperial", in.toString());
         assertEquals(0, r.code(), r.err());
-        assertTrue(Files.readString(out.resolve("bom.csv")).startsWith("mark,quantity,section,material,cut length each [in]"));
-        assertTrue(Files.readString(out.resolve("pieces.csv")).startsWith("piece,"));
-        assertTrue(Files.readString(out.resolve("findings.csv")).startsWith("number,"));
+        // CSV files start with the UTF-8 byte order mark so spreadsheets read non-ASCII names
+        assertTrue(Files.readString(out.resolve("bom.csv")).startsWith("\uFEFFmark,quantity,section,material,cut length each [in]"));
+        assertTrue(Files.readString(out.resolve("pieces.csv")).startsWith("\uFEFFpiece,"));
+        assertTrue(Files.readString(out.resolve("findings.csv")).startsWith("\uFEFFnumber,"));
+        assertTrue(Files.readString(out.resolve("r.json")).startsWith("{"), "no mark before JSON");
         assertTrue(Files.readString(out.resolve("r.html")).contains("<svg class=\"view\""));
         assertTrue(Files.readString(out.resolve("r.json")).contains("\"length_m\""));
         String marked = Files.readString(out.resolve("marked.dxf"));
