@@ -103,7 +103,7 @@ public final class HtmlReportWriter {
                     .append(SvgView.render(report, v, units, ids, markIndex, primary)).append("</figure>\n");
             primary = false;
         }
-        legend(s, markIndex);
+        legend(s, markIndex, r);
         tables.bom(s, r);
         tables.layers(s, r);
         tables.findings(s, r, ids);
@@ -148,7 +148,9 @@ public final class HtmlReportWriter {
 
 
 
-    private static void legend(StringBuilder s, Map<String, Integer> markIndex) {
+    private static void legend(StringBuilder s, Map<String, Integer> markIndex, DrawingResult r) {
+        Map<String, MarkResult> groups = new java.util.HashMap<>();
+        r.groups().forEach(g -> groups.putIfAbsent(g.mark(), g));
         if (markIndex.isEmpty()) {
             return;
         }
@@ -160,7 +162,14 @@ public final class HtmlReportWriter {
             if (!Palette.dash(i).isEmpty()) {
                 s.append(" stroke-dasharray=\"").append(Palette.dash(i)).append('"');
             }
-            s.append("/></svg> ").append(e.getKey().isEmpty() ? "(no mark)" : Html.escape(e.getKey())).append("</li>\n");
+            s.append("/></svg> ").append(e.getKey().isEmpty() ? "(no mark)" : Html.escape(e.getKey()));
+            MarkResult g = groups.get(e.getKey());
+            if (g != null) {
+                s.append(" <span class=\"note\">").append(g.quantity()).append(" &times; ")
+                        .append(Html.escape(g.section() == null ? "no section" : g.section())).append(", ")
+                        .append(Html.escape(g.layer())).append("</span>");
+            }
+            s.append("</li>\n");
         }
         s.append("<li><svg width=\"18\" height=\"18\" aria-hidden=\"true\"><g class=\"cog\"><circle cx=\"9\" cy=\"9\" "
                 + "r=\"7\"/></g></svg> centre of gravity</li>\n</ul>\n");

@@ -72,6 +72,7 @@ class HtmlReportWriterTest {
     void write_hasLegendCogScaleBarAndSections() throws IOException {
         String s = html(List.of(Report.of(Fixtures.flatFrame("a.dxf"))));
         assertTrue(s.contains("class=\"legend\""));
+        assertTrue(s.contains("A <span class=\"note\">2 &times; B10, BARS</span>"), "legend names quantity, section, layer");
         assertTrue(s.contains("<g class=\"cog\" id=\"cog-plan\""));
         assertTrue(s.contains("<g class=\"scale\">"));
         assertTrue(s.contains("BS 4449 nominal mass &lt;table 1&gt;"), "section source shown, escaped");
