@@ -51,8 +51,12 @@ final class CheckRun {
             throw new InputProblem("--markup-dxf needs a file name, not '-'");
         }
         ReportFiles sink = new ReportFiles(ctx.out(), files);
+        java.util.Set<Path> seen = new java.util.HashSet<>();
         for (String t : outputs.targets()) {
             sink.guard(t);
+            if (!t.equals(OutputOptions.STDOUT) && !seen.add(Path.of(t).toAbsolutePath().normalize())) {
+                throw new InputProblem("two reports would be written to the same file " + t);
+            }
         }
         ImportOptions io = drawing.importOptions();
         AnalysisSettings settings = drawing.settings(ctx.sections());
@@ -84,9 +88,9 @@ final class CheckRun {
             new ConsoleReport(units, ctx.terminal(), common.quiet).print(reports, ctx.out());
         }
         sink.text(outputs.json, reports, JsonReportWriter::write);
-        sink.text(outputs.bomCsv, reports, (r, w) -> BomCsvWriter.write(r, units, w));
-        sink.text(outputs.piecesCsv, reports, (r, w) -> PiecesCsvWriter.write(r, units, w));
-        sink.text(outputs.findingsCsv, reports, (r, w) -> FindingsCsvWriter.write(r, units, w));
+        sink.text(outputs.bomCsv, reports, (r, w) -> BomCsvWriter.write(r, units, w), true);
+        sink.text(outputs.piecesCsv, reports, (r, w) -> PiecesCsvWriter.write(r, units, w), true);
+        sink.text(outputs.findingsCsv, reports, (r, w) -> FindingsCsvWriter.write(r, units, w), true);
         sink.text(outputs.html, reports, (r, w) -> new HtmlReportWriter(units).write(r, w));
         if (outputs.markupDxf != null) {
             markup(sink, reports, analysed);
@@ -102,9 +106,17 @@ final class CheckRun {
     private void markup(ReportFiles sink, List<Report> reports, List<Path> analysed) throws IOException {
         Path target = Path.of(outputs.markupDxf);
         boolean folder = reports.size() > 1 || Files.isDirectory(target);
+        java.util.Set<String> used = new java.util.HashSet<>();
         for (int i = 0; i < reports.size(); i++) {
             Path in = analysed.get(i);
-            Path out = folder ? target.resolve(markedName(in)) : target;
+            Path out = target;
+            if (folder) {
+                String name = markedName(in);
+                for (int k = 2; !used.add(name.toLowerCase(Locale.ROOT)); k++) {
+                    name = markedName(in).replace("-findings.dxf", "-findings-" + k + ".dxf");
+                }
+                out = target.resolve(name);
+            }
             byte[] original = Files.readAllBytes(in);
             Report r = reports.get(i);
             sink.bytes(out, os -> DxfMarkupWriter.write(original, r.result(), os));
@@ -115,7 +127,7 @@ final class CheckRun {
         ctx.out().flush();
     }
 
-    /** {@code name.dxf} becomes {@code name-findings.dxf}. */
+    /** {@code name.dxf} becomes {@code name-findings.dxf} (a second drawing of the same name gets {@code -2}, ...). */
     static String markedName(Path in) {
         String n = in.getFileName().toString();
         int dot = n.toLowerCase(Locale.ROOT).lastIndexOf(".dxf");

@@ -53,7 +53,7 @@ public final class Cli {
             boolean bad = e instanceof DxfInputException || e instanceof AnalysisException
                     || e instanceof InputProblem || e instanceof IOException || e instanceof IllegalArgumentException;
             if (bad) {
-                ctx.err().println("linemass: " + oneLine(e.getMessage()));
+                ctx.err().println("linemass: " + oneLine(describe(e)));
             } else {
                 ctx.err().println("linemass: internal error (" + e.getClass().getSimpleName() + ": "
                         + oneLine(e.getMessage()) + "); please report it with the drawing and the command line");
@@ -73,6 +73,22 @@ public final class Cli {
             }
         }
         return false;
+    }
+
+    /** The message, made readable for file-system errors whose message is only a path. */
+    static String describe(Exception e) {
+        if (e instanceof java.nio.file.NoSuchFileException f) {
+            return f.getFile() + ": no such file or folder";
+        }
+        if (e instanceof java.nio.file.AccessDeniedException f) {
+            return f.getFile() + ": permission denied";
+        }
+        if (e instanceof java.nio.file.FileSystemException f && f.getReason() == null) {
+            String kind = e.getClass().getSimpleName().replace("Exception", "").replaceAll("([a-z])([A-Z])", "$1 $2")
+                    .toLowerCase(java.util.Locale.ROOT);
+            return f.getFile() + ": " + kind;
+        }
+        return e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
     }
 
     static String oneLine(String s) {

@@ -12,9 +12,19 @@ import org.linemass.importer.ImportOptions;
 import org.linemass.reports.Report;
 
 /**
- * The real pipeline: {@link DxfImporter#read} then {@link Analyzer#analyze}. Piece shapes for the
- * HTML picture are not yet supplied by the engine, so pieces are drawn start to end until the
- * engine offers sampled centre-lines (integration seam: fill {@link Report#pieceShapes} here).
+ * The real pipeline: {@link DxfImporter#read} then {@link Analyzer#analyze}. Integration seam: the
+ * engine's piece stage knows each piece's segments; once {@code Analyzer.analyze(drawing, settings,
+ * stage)} is merged, wrap the standard stage to keep its pieces and fill the picture shapes:
+ * <pre>
+ * List&lt;Piece&gt; kept = new ArrayList&lt;&gt;();
+ * DrawingResult result = Analyzer.analyze(drawing, settings, (world, tol, lookup, mirror) -&gt; {
+ *     PieceAnalysis pa = PieceAnalyzer.analyze(world, tol, lookup, mirror);
+ *     kept.addAll(pa.pieces());
+ *     return pa;
+ * });
+ * return new Report(result, PieceShapes.of(result, kept));
+ * </pre>
+ * Until then each piece is drawn from its start to its end point.
  */
 public final class EnginePipeline implements DrawingPipeline {
 

@@ -9,7 +9,9 @@ import org.linemass.engine.section.SectionTable;
 /**
  * The engine's section data. Integration seam: the built-in table loader and the CSV readers are
  * written in the engine's section package; until they are connected here this catalogue has an
- * empty built-in table and refuses section files with a clear message.
+ * empty built-in table and refuses section files with a clear message. At merge the three bodies
+ * become {@code BuiltInSections.table()}, {@code SectionCsvReader.read(csv)} and
+ * {@code AssignmentReader.read(csv)} (package {@code org.linemass.engine.section}).
  */
 public final class EngineSectionCatalog implements SectionCatalog {
 

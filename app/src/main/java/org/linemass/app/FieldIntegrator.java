@@ -11,15 +11,20 @@ import org.linemass.importer.ImportOptions;
 @FunctionalInterface
 public interface FieldIntegrator {
 
-    /** One value: a piece (id set) or a whole layer (id null), with its absolute error bound. */
-    record Row(Integer pieceId, String layer, double value, double errorBound) {
+    /** One value: a piece (id set) or a whole layer (id null), its length, and the value's absolute error bound. */
+    record Row(Integer pieceId, String layer, double lengthM, double value, double errorBound) {
     }
 
-    /** The integral per piece and per layer and in total, in SI units (coordinates and s in metres). */
-    record Result(String expression, List<Row> pieces, List<Row> layers, double total, double totalErrorBound) {
+    /**
+     * The integral per piece and per layer and in total, in SI units (coordinates and s in metres);
+     * {@code incompleteReasons} says what was left out, empty when nothing was.
+     */
+    record Result(String expression, List<Row> pieces, List<Row> layers, double total, double totalErrorBound,
+            List<String> incompleteReasons) {
         public Result {
             pieces = List.copyOf(pieces);
             layers = List.copyOf(layers);
+            incompleteReasons = List.copyOf(incompleteReasons);
         }
     }
 

@@ -43,21 +43,31 @@ final class IntegrateCommand implements Callable<Integer> {
         FieldIntegrator.Result r = ctx.integrator().integrate(files.get(0), drawing.importOptions(),
                 drawing.settings(ctx.sections()), field);
         StringBuilder b = new StringBuilder();
-        b.append("integral of ").append(r.expression()).append(" ds (SI units)\n");
+        b.append("integral of ").append(r.expression()).append(" ds along the wires (x, y, z, s in metres)\n");
+        String head = "%-8s %-24s %14s %22s %12s\n";
+        String row = "%-8s %-24s %14.6f %22.12g %12.3g\n";
         if (!common.quiet) {
-            b.append(String.format(Locale.ROOT, "%-8s %-24s %22s %12s\n", "piece", "layer", "value", "error bound"));
-            for (FieldIntegrator.Row row : r.pieces()) {
-                b.append(String.format(Locale.ROOT, "%-8s %-24s %22.12g %12.3g\n", row.pieceId(), row.layer(),
-                        row.value(), row.errorBound()));
+            b.append(String.format(Locale.ROOT, head, "piece", "layer", "length [m]", "value", "error bound"));
+            for (FieldIntegrator.Row p : r.pieces()) {
+                b.append(String.format(Locale.ROOT, row, p.pieceId(), clean(p.layer()), p.lengthM(), p.value(),
+                        p.errorBound()));
             }
-            for (FieldIntegrator.Row row : r.layers()) {
-                b.append(String.format(Locale.ROOT, "%-8s %-24s %22.12g %12.3g\n", "layer", row.layer(),
-                        row.value(), row.errorBound()));
+            for (FieldIntegrator.Row l : r.layers()) {
+                b.append(String.format(Locale.ROOT, row, "layer", clean(l.layer()), l.lengthM(), l.value(),
+                        l.errorBound()));
             }
         }
-        b.append(String.format(Locale.ROOT, "%-8s %-24s %22.12g %12.3g\n", "total", "", r.total(), r.totalErrorBound()));
+        b.append(String.format(Locale.ROOT, "%-8s %-24s %14s %22.12g %12.3g\n", "total", "", "", r.total(),
+                r.totalErrorBound()));
+        for (String reason : r.incompleteReasons()) {
+            b.append("incomplete: ").append(clean(reason)).append('\n');
+        }
         ctx.out().print(b);
         ctx.out().flush();
         return ExitCodes.OK;
+    }
+
+    private static String clean(String s) {
+        return s == null ? "" : s.replaceAll("\\p{Cntrl}", "?");
     }
 }

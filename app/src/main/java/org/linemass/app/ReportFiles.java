@@ -41,6 +41,15 @@ final class ReportFiles {
     }
 
     void text(String target, List<Report> reports, TextReport writer) throws IOException {
+        text(target, reports, writer, false);
+    }
+
+    /**
+     * Like {@link #text(String, List, TextReport)}; with {@code byteOrderMark} a file (not standard
+     * output) starts with the UTF-8 byte order mark, which spreadsheet programs need to read
+     * non-ASCII layer names in a CSV file correctly.
+     */
+    void text(String target, List<Report> reports, TextReport writer, boolean byteOrderMark) throws IOException {
         if (target == null) {
             return;
         }
@@ -51,8 +60,14 @@ final class ReportFiles {
         }
         Path p = Path.of(target);
         OutputGuard.check(p, inputs);
+        if (Files.isDirectory(p)) {
+            throw new IOException(target + " is a folder; give a file name");
+        }
         AtomicWrite.write(p, os -> {
             Writer w = new OutputStreamWriter(nonClosing(os), StandardCharsets.UTF_8);
+            if (byteOrderMark) {
+                w.write('\uFEFF');
+            }
             writer.write(reports, w);
             w.flush();
         });

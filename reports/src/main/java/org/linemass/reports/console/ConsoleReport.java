@@ -26,6 +26,9 @@ import org.linemass.reports.UnitSystem;
  */
 public final class ConsoleReport {
 
+    /** Finding messages wrap at this many characters so the table fits a wide terminal. */
+    static final int MESSAGE_WIDTH = 60;
+
     private final UnitSystem units;
     private final boolean colour;
     private final boolean quiet;
@@ -185,7 +188,7 @@ public final class ConsoleReport {
                     a == null ? "-" : units.longLength(a.z()), orDash(units.shortLength(f.sizeM())),
                     orDash(f.layer()), f.message()));
         }
-        out.print(bold("Findings") + "\n" + t.render("  ") + "\n");
+        out.print(bold("Findings") + "\n" + t.render("  ", MESSAGE_WIDTH) + "\n");
     }
 
     private static String count(int n, String what) {
@@ -193,7 +196,7 @@ public final class ConsoleReport {
     }
 
     private static void field(PrintWriter out, String name, String value) {
-        out.print("  " + String.format(java.util.Locale.ROOT, "%-18s", name) + value + "\n");
+        out.print("  " + String.format(java.util.Locale.ROOT, "%-20s", name) + value + "\n");
     }
 
     private static String orDash(String s) {

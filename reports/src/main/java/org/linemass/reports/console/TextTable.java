@@ -39,13 +39,23 @@ final class TextTable {
 
     /** The table as lines ending in "\n", each line prefixed with {@code indent}. */
     String render(String indent) {
+        return render(indent, Integer.MAX_VALUE);
+    }
+
+    /**
+     * As {@link #render(String)}, but a last (text) column wider than {@code lastWidth} characters
+     * is wrapped at spaces onto continuation lines aligned under that column.
+     */
+    String render(String indent, int lastWidth) {
         int[] width = new int[header.size()];
+        int last = width.length - 1;
         for (int i = 0; i < width.length; i++) {
             width[i] = header.get(i).length();
             for (List<String> r : rows) {
                 width[i] = Math.max(width[i], r.get(i).length());
             }
         }
+        width[last] = Math.max(header.get(last).length(), Math.min(width[last], Math.max(lastWidth, 10)));
         StringBuilder sb = new StringBuilder();
         line(sb, indent, header, width);
         StringBuilder rule = new StringBuilder();
@@ -53,10 +63,36 @@ final class TextTable {
             rule.append(i == 0 ? "" : "  ").append("-".repeat(width[i]));
         }
         sb.append(indent).append(rule).append('\n');
+        int lastStart = 0;
+        for (int i = 0; i < last; i++) {
+            lastStart += width[i] + 2;
+        }
         for (List<String> r : rows) {
-            line(sb, indent, r, width);
+            List<String> parts = wrap(r.get(last), width[last]);
+            List<String> first = new ArrayList<>(r);
+            first.set(last, parts.get(0));
+            line(sb, indent, first, width);
+            for (String more : parts.subList(1, parts.size())) {
+                sb.append(indent).append(" ".repeat(lastStart)).append(more).append('\n');
+            }
         }
         return sb.toString();
+    }
+
+    /** Splits text into lines of at most {@code width} characters at spaces (longer words are cut). */
+    static List<String> wrap(String text, int width) {
+        List<String> out = new ArrayList<>();
+        String rest = text;
+        while (rest.length() > width) {
+            int cut = rest.lastIndexOf(' ', width);
+            if (cut <= 0) {
+                cut = width;
+            }
+            out.add(rest.substring(0, cut).stripTrailing());
+            rest = rest.substring(cut).stripLeading();
+        }
+        out.add(rest);
+        return out;
     }
 
     private void line(StringBuilder sb, String indent, List<String> cells, int[] width) {

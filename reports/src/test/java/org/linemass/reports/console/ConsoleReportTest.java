@@ -92,6 +92,23 @@ class ConsoleReportTest {
     }
 
     @Test
+    void wrap_longMessage_splitsAtSpacesWithinWidth() {
+        List<String> parts = TextTable.wrap("LINE at line 877, handle 47 is drawn again over LINE at line 853", 20);
+        assertEquals(List.of("LINE at line 877,", "handle 47 is drawn", "again over LINE at", "line 853"), parts);
+        assertEquals(List.of("abcdefghij", "klm"), TextTable.wrap("abcdefghijklm", 10));
+    }
+
+    @Test
+    void render_wrappedRowsContinueUnderTheLastColumn() {
+        TextTable t = new TextTable(List.of("#", "message"), true, false);
+        t.add(List.of("1", "one two three four five six"));
+        String[] lines = t.render("", 12).split("\n");
+        assertEquals("1  one two", lines[2]);
+        assertEquals("   three four", lines[3]);
+        assertEquals("   five six", lines[4]);
+    }
+
+    @Test
     void print_controlCharactersInNamesAreNeutralised() {
         assertEquals("a?[31mb", TextTable.clean("a\u001b[31mb"));
     }

@@ -110,6 +110,14 @@ class DxfMarkupWriterTest {
     }
 
     @Test
+    void write_incompleteDrawing_saysSoOnTheMarkupLayer() throws IOException {
+        String complete = markup(R12.getBytes(StandardCharsets.ISO_8859_1), Fixtures.frame("x.dxf", 0, false));
+        String partial = markup(R12.getBytes(StandardCharsets.ISO_8859_1), Fixtures.frame("x.dxf", 0, true));
+        assertFalse(complete.contains("TOTALS INCOMPLETE"));
+        assertTrue(partial.contains("TOTALS INCOMPLETE"));
+    }
+
+    @Test
     void write_existingLayerName_getsSuffix() throws IOException {
         String withLayer = R12.replace("BARS\r\n70", DxfMarkupWriter.LAYER + "\r\n70");
         String out = markup(withLayer.getBytes(StandardCharsets.ISO_8859_1), Fixtures.flatFrame("x.dxf"));

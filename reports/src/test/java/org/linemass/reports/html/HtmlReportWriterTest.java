@@ -72,6 +72,7 @@ class HtmlReportWriterTest {
     void write_hasLegendCogScaleBarAndSections() throws IOException {
         String s = html(List.of(Report.of(Fixtures.flatFrame("a.dxf"))));
         assertTrue(s.contains("class=\"legend\""));
+        assertTrue(s.contains("A <span class=\"note\">2 &times; B10, BARS</span>"), "legend names quantity, section, layer");
         assertTrue(s.contains("<g class=\"cog\" id=\"cog-plan\""));
         assertTrue(s.contains("<g class=\"scale\">"));
         assertTrue(s.contains("BS 4449 nominal mass &lt;table 1&gt;"), "section source shown, escaped");
@@ -91,6 +92,24 @@ class HtmlReportWriterTest {
         while (m.find()) {
             assertTrue(seen.add(m.group(1)), "duplicate id " + m.group(1));
         }
+    }
+
+    @Test
+    void write_markerSitsWhereTheFindingIs() throws IOException {
+        String s = html(List.of(Report.of(Fixtures.flatFrame("a.dxf"))));
+        // bar 1 runs from (0,0) to (1,0) m; the gap finding is at (1.0005, 0): 0.5 mm beyond its end
+        Matcher bar = Pattern.compile("points=\"([0-9.]+),([0-9.]+) ([0-9.]+),([0-9.]+)\"[^>]*><title>piece 1,")
+                .matcher(s);
+        assertTrue(bar.find());
+        double x0 = Double.parseDouble(bar.group(1));
+        double x1 = Double.parseDouble(bar.group(3));
+        double y1 = Double.parseDouble(bar.group(4));
+        Matcher marker = Pattern.compile("id=\"marker-1\".*?<circle cx=\"([0-9.]+)\" cy=\"([0-9.]+)\"").matcher(s);
+        assertTrue(marker.find());
+        double pxPerM = (x1 - x0) / 1.0;
+        // positions are printed with 2 decimals: 0.01 px
+        assertEquals(x1 + 0.0005 * pxPerM, Double.parseDouble(marker.group(1)), 0.011);
+        assertEquals(y1, Double.parseDouble(marker.group(2)), 0.011);
     }
 
     @Test
