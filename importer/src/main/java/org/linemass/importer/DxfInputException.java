@@ -41,18 +41,32 @@ public final class DxfInputException extends Exception {
     }
 
     static String format(String file, int line, String entityType, String handle, String problem) {
-        StringBuilder sb = new StringBuilder(file == null ? "<input>" : file);
+        StringBuilder sb = new StringBuilder(file == null ? "<input>" : oneLine(file));
         if (line > 0) {
             sb.append(':').append(line);
         }
         if (entityType != null && !entityType.isEmpty()) {
-            sb.append(": ").append(entityType);
+            sb.append(": ").append(oneLine(entityType));
             if (handle != null && !handle.isEmpty()) {
-                sb.append(" (handle ").append(handle).append(')');
+                sb.append(" (handle ").append(oneLine(handle)).append(')');
             }
         }
-        sb.append(": ").append(problem.replace('\n', ' ').replace('\r', ' '));
+        sb.append(": ").append(oneLine(problem));
         return sb.toString();
+    }
+
+    /** Control characters (a CR inside an entity type read from the file, say) become spaces. */
+    private static String oneLine(String s) {
+        StringBuilder sb = null;
+        for (int i = 0; i < s.length(); i++) {
+            if (Character.isISOControl(s.charAt(i))) {
+                if (sb == null) {
+                    sb = new StringBuilder(s);
+                }
+                sb.setCharAt(i, ' ');
+            }
+        }
+        return sb == null ? s : sb.toString();
     }
 
     public String file() {
