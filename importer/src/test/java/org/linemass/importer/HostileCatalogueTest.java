@@ -409,4 +409,73 @@ class HostileCatalogueTest {
         long placed = d.blocks().values().stream().mapToLong(b -> b.inserts().size()).sum();
         assertEquals(100_000, placed, "every link of the chain is kept");
     }
+
+    // ---- each ImportOptions limit, at a non-default value ------------------------------------------
+
+    private static ImportOptions limits(int depth, int lineBytes, int controlPoints, int vertices) {
+        return new ImportOptions(Optional.empty(), depth, lineBytes, controlPoints, vertices);
+    }
+
+    private static List<String> errorNotes(Dxf dxf, ImportOptions o) throws DxfInputException {
+        return errorNotes(DxfImporter.read(Dxf.NAME, dxf.ascii(), o));
+    }
+
+    @Test
+    void maxBlockDepth_isEnforcedAtItsConfiguredValue() throws Exception {
+        Dxf dxf = Dxf.create().add(0, "SECTION", 2, "BLOCKS",
+                0, "BLOCK", 2, "A", 0, "INSERT", 5, "1A", 2, "B", 0, "ENDBLK",
+                0, "BLOCK", 2, "B", 0, "INSERT", 5, "1B", 2, "C", 0, "ENDBLK",
+                0, "BLOCK", 2, "C", 0, "LINE", 11, 1, 0, "ENDBLK", 0, "ENDSEC")
+                .entities().add(0, "INSERT", 5, "10", 2, "A").end();
+        // model space (0) -> A (1) -> B (2) -> C (3): a limit of 2 stops the insert of C in B, whose
+        // 0 INSERT is line 21 (4 section lines, 12 lines of block A, BLOCK and name of B)
+        assertEquals(List.of("line 21, INSERT (handle 1B): block 'C' would be nested deeper than the limit of 2 "
+                + "levels"), errorNotes(dxf, limits(2, 1 << 20, 1_000_000, 10_000_000)));
+        assertEquals(List.of(), errorNotes(dxf, limits(3, 1 << 20, 1_000_000, 10_000_000)));
+    }
+
+    @Test
+    void maxControlPoints_isEnforcedAtItsConfiguredValue() throws Exception {
+        Dxf dxf = Dxf.create().entities().add(0, "SPLINE", 5, "2A", 71, 1, 72, 5, 73, 3,
+                40, 0, 40, 0, 40, 1, 40, 2, 40, 2, 10, 0, 20, 0, 10, 1, 20, 0, 10, 2, 20, 0).end();
+        // the 5 knots count against the limit as well as the 3 control points
+        assertEquals(List.of("line 5, SPLINE (handle 2A): declares 5 knots, more than the limit 4"),
+                errorNotes(dxf, limits(64, 1 << 20, 4, 10_000_000)));
+        assertEquals(List.of(), errorNotes(dxf, limits(64, 1 << 20, 5, 10_000_000)));
+    }
+
+    @Test
+    void maxVertices_isEnforcedOnLwpolylinesAndOnRecordSize() throws Exception {
+        Dxf lw = Dxf.create().entities().add(0, "LWPOLYLINE", 5, "3A", 90, 3, 10, 0, 20, 0, 10, 1, 20, 0,
+                10, 1, 20, 1).end();
+        assertEquals(List.of("line 5, LWPOLYLINE (handle 3A): declares 3 vertices, more than the limit 2"),
+                errorNotes(lw, limits(64, 1 << 20, 1_000_000, 2)));
+        assertEquals(List.of(), errorNotes(lw, limits(64, 1 << 20, 1_000_000, 3)));
+        // one record may hold 8 groups per allowed vertex plus 65536: with 1 vertex, 65544 groups
+        Dxf big = Dxf.create().entities().add(0, "TEXT");
+        for (int i = 0; i < 65_545; i++) {
+            big.add(1001, "x");
+        }
+        big.end();
+        DxfInputException e = assertThrows(DxfInputException.class,
+                () -> DxfImporter.read(Dxf.NAME, big.ascii(), limits(64, 1 << 20, 1_000_000, 1)));
+        // group k (from 0) of the TEXT record is on line 7 + 2k; k = 65544 is one too many
+        assertEquals("t.dxf:131095: TEXT: record has more than 65544 groups", e.getMessage());
+    }
+
+    @Test
+    void maxLineBytes_boundsBinaryStringsToo() {
+        byte[] bin = Dxf.create().entities().add(0, "TEXT", 1, "seventeen letters").end().binary(true);
+        DxfInputException e = assertThrows(DxfInputException.class,
+                () -> DxfImporter.read(Dxf.NAME, bin, limits(64, 16, 1_000_000, 10_000_000)));
+        // group code 1 after sentinel (22), SECTION (2+8), ENTITIES (2+9) and TEXT (2+5)
+        assertEquals("t.dxf:byte 50: TEXT: string value longer than 16 bytes", e.getMessage());
+    }
+
+    @Test
+    void limitsBelowTheirMinimum_areRefusedAsBadArguments() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> limits(-1, 0, 5, 5));
+        assertEquals("import limits out of range: maxBlockDepth=-1 (at least 0), maxLineBytes=0, maxControlPoints=5, "
+                + "maxVertices=5 (each at least 1)", e.getMessage());
+    }
 }
