@@ -43,7 +43,7 @@ class HostileCsvCatalogueTest {
             new Case("section-no-mass-column.csv", true,
                     "section-no-mass-column.csv: line 1: the header needs a 'mass_kg_per_m' or a 'shape' column"),
             new Case("section-bad-utf8.csv", true,
-                    "cannot read section table section-bad-utf8.csv: Input length = 1"),
+                    "section-bad-utf8.csv: not UTF-8 text (malformed byte sequence); save the file as UTF-8"),
             new Case("assignment-missing-columns.csv", false,
                     "assignment-missing-columns.csv: line 1: the header needs 'layer' and 'section' columns"),
             new Case("assignment-empty-section.csv", false,
