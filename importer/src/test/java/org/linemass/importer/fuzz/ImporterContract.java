@@ -72,7 +72,8 @@ final class ImporterContract {
         }
         for (ImportNote n : d.notes()) {
             assertTrue(n.message() != null && !n.message().isEmpty(), () -> "empty note: " + n);
-            assertFalse(n.message().contains("\n"), () -> "note must be one line: " + n);
+            assertFalse(n.message().contains("\n") || n.message().contains("\r"),
+                    () -> "note must be one line: " + n);
         }
     }
 
