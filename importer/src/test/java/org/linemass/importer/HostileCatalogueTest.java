@@ -478,4 +478,23 @@ class HostileCatalogueTest {
         assertEquals("import limits out of range: maxBlockDepth=-1 (at least 0), maxLineBytes=0, maxControlPoints=5, "
                 + "maxVertices=5 (each at least 1)", e.getMessage());
     }
+
+    @Test
+    void inputFiles_areOpenedReadOnlyAndLeftUntouched(@TempDir Path dir) throws Exception {
+        // a refused file and a read file, both made read-only: reading works and changes nothing
+        for (String name : List.of("truncated-mid-entity.dxf", "block-bomb.dxf")) {
+            Path f = dir.resolve(name);
+            Files.copy(catalogue().resolve(name), f);
+            byte[] before = Files.readAllBytes(f);
+            var stamp = Files.getLastModifiedTime(f);
+            assertTrue(f.toFile().setReadOnly(), "cannot make the copy read-only");
+            try {
+                DxfImporter.read(f, ImportOptions.DEFAULTS);
+            } catch (DxfInputException expected) {
+                // refusal is the expected outcome of the truncated file
+            }
+            assertTrue(Arrays.equals(before, Files.readAllBytes(f)), name + " content changed");
+            assertEquals(stamp, Files.getLastModifiedTime(f), name + " modification time changed");
+        }
+    }
 }
