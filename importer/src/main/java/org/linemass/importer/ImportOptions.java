@@ -1,5 +1,6 @@
 package org.linemass.importer;
 
+import java.util.Objects;
 import java.util.Optional;
 import org.linemass.drawing.LengthUnit;
 
@@ -12,12 +13,22 @@ import org.linemass.drawing.LengthUnit;
  * @param maxLineBytes longest allowed text line in an ASCII file
  * @param maxControlPoints largest allowed control-point or knot count of one SPLINE
  * @param maxVertices largest allowed vertex count of one polyline
+ * @throws IllegalArgumentException when a limit is below its minimum (depth 0, the others 1)
  */
 public record ImportOptions(Optional<LengthUnit> unitOverride, int maxBlockDepth, int maxLineBytes,
         int maxControlPoints, int maxVertices) {
 
     public static final ImportOptions DEFAULTS =
             new ImportOptions(Optional.empty(), 64, 1 << 20, 1_000_000, 10_000_000);
+
+    public ImportOptions {
+        Objects.requireNonNull(unitOverride, "unitOverride");
+        if (maxBlockDepth < 0 || maxLineBytes < 1 || maxControlPoints < 1 || maxVertices < 1) {
+            throw new IllegalArgumentException("import limits out of range: maxBlockDepth=" + maxBlockDepth
+                    + " (at least 0), maxLineBytes=" + maxLineBytes + ", maxControlPoints=" + maxControlPoints
+                    + ", maxVertices=" + maxVertices + " (each at least 1)");
+        }
+    }
 
     public ImportOptions withUnit(LengthUnit unit) {
         return new ImportOptions(Optional.ofNullable(unit), maxBlockDepth, maxLineBytes, maxControlPoints,
