@@ -89,8 +89,13 @@ public final class Grouper {
         return groups;
     }
 
-    /** Samples per piece for the fit: grows with the number of runs (no source). */
+    /** Fewest and most samples per piece, and samples added per run (no source: enough to see every run). */
+    static final int MIN_SAMPLES = 32;
+    static final int MAX_SAMPLES = 512;
+    static final int SAMPLES_PER_RUN = 16;
+
+    /** Samples per piece for the fit: grows with the number of runs. */
     static int samplesFor(PieceShape s) {
-        return Math.min(512, Math.max(32, 16 * s.runs() + 32));
+        return Math.min(MAX_SAMPLES, Math.max(MIN_SAMPLES, SAMPLES_PER_RUN * s.runs() + MIN_SAMPLES));
     }
 }
