@@ -80,6 +80,10 @@ class FindingKindsTest {
         assertTrue(r.pieces().get(0).closed());
         double kept = r.pieces().get(0).segments().stream().mapToDouble(Curves::length).sum();
         assertEquals(2 * Math.PI * 0.05, kept, LEN_TOL_M);
+        for (Segment s : r.removed()) {
+            assertEquals("11", s.source().handle(), "removed parts carry the removed copy's provenance");
+            assertTrue(s instanceof CircularArc);
+        }
     }
 
     @Test
@@ -148,6 +152,18 @@ class FindingKindsTest {
         List<Finding> g = of(r, FindingKind.GAP);
         assertEquals(1, g.size());
         assertEquals(2 * 0.1 * Math.sin(dt / 2), g.get(0).sizeM(), LEN_TOL_M);
+    }
+
+    @Test
+    void endWithTwoNearEnds_isPairedWithTheNearest() {
+        // wire A ends at (100, 0); wire B starts 1 mm further on, wire C 3 mm off to the side
+        PieceAnalysis r = run(List.of(Fixtures.line(W, "10", 0, 0, 100, 0), Fixtures.line(W, "11", 101, 0, 200, 0),
+                Fixtures.line(W, "12", 100, 3, 100, 100)));
+        List<Finding> g = of(r, FindingKind.GAP);
+        // A-B (1 mm) is A's and B's nearest; C's nearest is A (3 mm), so A-C is reported too
+        assertEquals(2, g.size(), g.toString());
+        assertTrue(g.stream().anyMatch(f -> Math.abs(f.sizeM() - 0.001) < LEN_TOL_M));
+        assertTrue(g.stream().anyMatch(f -> Math.abs(f.sizeM() - 0.003) < LEN_TOL_M));
     }
 
     @Test
