@@ -109,6 +109,21 @@ class FindingKindsTest {
     }
 
     @Test
+    void identicalSplineDrawnTwiceReversed_isADuplicate() {
+        // cubic B-spline, clamped; the copy is the exact reversal (Nurbs.reversed, same point set)
+        org.linemass.geometry.Nurbs s = org.linemass.geometry.Nurbs.of(3, new double[] {0, 0, 0, 0, 0.5, 1, 1, 1, 1},
+                new Vec3[] {new Vec3(0, 0, 0), new Vec3(0.05, 0.08, 0), new Vec3(0.12, -0.03, 0),
+                    new Vec3(0.18, 0.06, 0), new Vec3(0.25, 0, 0)}, null, Provenance.of("t.dxf", W, 10, "10", "SPLINE"));
+        Segment copy = s.reversed().withSource(Provenance.of("t.dxf", W, 11, "11", "SPLINE"));
+        PieceAnalysis r = run(List.of(copy, s));
+        List<Finding> d = of(r, FindingKind.DUPLICATE);
+        assertEquals(1, d.size());
+        assertEquals(Curves.length(s), d.get(0).sizeM(), LEN_TOL_M);
+        assertEquals("11", r.removed().get(0).source().handle(), "the later copy goes");
+        assertEquals(1, r.pieces().size());
+    }
+
+    @Test
     void tinySegment_isAWarningAndAPieceOfItsOwn() {
         PieceAnalysis r = run(List.of(Fixtures.line(W, "10", 0, 0, 100, 0), Fixtures.line(W, "11", 200, 0, 200.05, 0)));
         List<Finding> t = of(r, FindingKind.TINY_SEGMENT);
