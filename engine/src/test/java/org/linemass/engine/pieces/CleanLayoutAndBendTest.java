@@ -108,6 +108,23 @@ class CleanLayoutAndBendTest {
     }
 
     @Test
+    void halfRingSplitAtTheLoopStart_isStillOneBend() {
+        // a "D": straight (0,-50) to (0,50) mm, half ring of r = 50 about the origin drawn as two
+        // quarter arcs meeting at (-50, 0), the loop's lexicographically smallest vertex
+        List<Segment> segs = List.of(Fixtures.line(F, "10", 0, -50, 0, 50), Fixtures.arc(F, "20", 0, 0, 50, 90, 180),
+                Fixtures.arc(F, "21", 0, 0, 50, 180, 270));
+        PieceAnalysis r = PieceAnalyzer.analyze(segs, Fixtures.tol(), Fixtures.sections(F, Fixtures.WIRE_D4), false);
+        Piece p = r.pieces().get(0);
+        assertTrue(p.closed());
+        assertTrue(p.segments().get(0).start().distance(Fixtures.mm(-50, 0)) < 1e-15, "loop starts mid-arc");
+        // one 180 degree arc bend and two sharp 90 degree corners where the arc meets the straight
+        List<Double> arcs = p.bends().stream().filter(b -> b.centreRadiusM() != null).map(Bend::angleDeg).toList();
+        assertEquals(1, arcs.size(), p.bends().toString());
+        assertEquals(180, arcs.get(0), ANGLE_TOL_DEG);
+        assertEquals(3, p.bends().size());
+    }
+
+    @Test
     void arcSplitInTwoOnTheSameCircle_isStillOneBend() {
         List<Segment> segs = new ArrayList<>(Shapes.hook(F, 10));
         org.linemass.geometry.CircularArc a = (org.linemass.geometry.CircularArc) segs.get(1);

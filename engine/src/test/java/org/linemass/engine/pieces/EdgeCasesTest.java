@@ -121,6 +121,31 @@ class EdgeCasesTest {
     }
 
     @Test
+    void nearlyCollinearOverlapWithinTheJoinTolerance_isAnOverlap_butParallelWiresHalfAMillimetreApartAreNot() {
+        // second line 0.05 mm off the first's carrier (join tolerance 0.1 mm): drawn over it
+        PieceAnalysis near = run(List.of(Fixtures.line(W, "10", 0, 0, 200, 0), Fixtures.line(W, "11", 150, 0.05, 300, 0.05)));
+        assertEquals(1, of(near, FindingKind.OVERLAP).size());
+        // the removed part runs from the copy's start (150, 0.05) to the covering line's end (200, 0):
+        // closed form sqrt(50^2 + 0.05^2) mm
+        assertEquals(Math.hypot(0.05, 0.00005), of(near, FindingKind.OVERLAP).get(0).sizeM(), LEN_TOL_M);
+        // 0.5 mm apart: two real wires side by side
+        PieceAnalysis apart = run(List.of(Fixtures.line(W, "10", 0, 0, 200, 0), Fixtures.line(W, "11", 150, 0.5, 300, 0.5)));
+        assertEquals(List.of(), apart.findings());
+        assertEquals(List.of(), apart.removed());
+    }
+
+    @Test
+    void concentricArcsHalfAMillimetreApart_areNotOverlaps() {
+        PieceAnalysis r = run(List.of(Fixtures.arc(W, "10", 0, 0, 50, 0, 180), Fixtures.arc(W, "11", 0, 0, 50.5, 0, 180)));
+        assertEquals(List.of(), r.removed());
+        assertEquals(List.of(), of(r, FindingKind.OVERLAP));
+        assertEquals(2, r.pieces().size());
+        // their ends are 0.5 mm apart at both sides: two gaps, nothing else
+        assertEquals(2, of(r, FindingKind.GAP).size());
+        assertEquals(2, r.findings().size());
+    }
+
+    @Test
     void longChainOfShortLines_isOnePieceOrientedEndToEnd() {
         List<Segment> segs = new ArrayList<>();
         for (int i = 0; i < 1000; i++) {

@@ -80,6 +80,10 @@ class FindingKindsTest {
         assertTrue(r.pieces().get(0).closed());
         double kept = r.pieces().get(0).segments().stream().mapToDouble(Curves::length).sum();
         assertEquals(2 * Math.PI * 0.05, kept, LEN_TOL_M);
+        for (Segment s : r.removed()) {
+            assertEquals("11", s.source().handle(), "removed parts carry the removed copy's provenance");
+            assertTrue(s instanceof CircularArc);
+        }
     }
 
     @Test
@@ -101,6 +105,21 @@ class FindingKindsTest {
         Segment copy = e.reversed().withSource(Provenance.of("t.dxf", W, 11, "11", "ELLIPSE"));
         PieceAnalysis r = run(List.of(e, copy));
         assertEquals(1, of(r, FindingKind.DUPLICATE).size());
+        assertEquals(1, r.pieces().size());
+    }
+
+    @Test
+    void identicalSplineDrawnTwiceReversed_isADuplicate() {
+        // cubic B-spline, clamped; the copy is the exact reversal (Nurbs.reversed, same point set)
+        org.linemass.geometry.Nurbs s = org.linemass.geometry.Nurbs.of(3, new double[] {0, 0, 0, 0, 0.5, 1, 1, 1, 1},
+                new Vec3[] {new Vec3(0, 0, 0), new Vec3(0.05, 0.08, 0), new Vec3(0.12, -0.03, 0),
+                    new Vec3(0.18, 0.06, 0), new Vec3(0.25, 0, 0)}, null, Provenance.of("t.dxf", W, 10, "10", "SPLINE"));
+        Segment copy = s.reversed().withSource(Provenance.of("t.dxf", W, 11, "11", "SPLINE"));
+        PieceAnalysis r = run(List.of(copy, s));
+        List<Finding> d = of(r, FindingKind.DUPLICATE);
+        assertEquals(1, d.size());
+        assertEquals(Curves.length(s), d.get(0).sizeM(), LEN_TOL_M);
+        assertEquals("11", r.removed().get(0).source().handle(), "the later copy goes");
         assertEquals(1, r.pieces().size());
     }
 
@@ -148,6 +167,18 @@ class FindingKindsTest {
         List<Finding> g = of(r, FindingKind.GAP);
         assertEquals(1, g.size());
         assertEquals(2 * 0.1 * Math.sin(dt / 2), g.get(0).sizeM(), LEN_TOL_M);
+    }
+
+    @Test
+    void endWithTwoNearEnds_isPairedWithTheNearest() {
+        // wire A ends at (100, 0); wire B starts 1 mm further on, wire C 3 mm off to the side
+        PieceAnalysis r = run(List.of(Fixtures.line(W, "10", 0, 0, 100, 0), Fixtures.line(W, "11", 101, 0, 200, 0),
+                Fixtures.line(W, "12", 100, 3, 100, 100)));
+        List<Finding> g = of(r, FindingKind.GAP);
+        // A-B (1 mm) is A's and B's nearest; C's nearest is A (3 mm), so A-C is reported too
+        assertEquals(2, g.size(), g.toString());
+        assertTrue(g.stream().anyMatch(f -> Math.abs(f.sizeM() - 0.001) < LEN_TOL_M));
+        assertTrue(g.stream().anyMatch(f -> Math.abs(f.sizeM() - 0.003) < LEN_TOL_M));
     }
 
     @Test

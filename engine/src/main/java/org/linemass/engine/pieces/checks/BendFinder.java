@@ -39,8 +39,9 @@ public final class BendFinder {
     }
 
     /** The bends with their entities, in order along the run. */
-    public static List<Located> located(List<Segment> run, boolean closed, Optional<Section> section,
+    public static List<Located> located(List<Segment> path, boolean closed, Optional<Section> section,
             double angleRad, double joinM) {
+        List<Segment> run = closed ? fromABreak(path, angleRad, joinM) : path;
         List<Located> out = new ArrayList<>();
         int n = run.size();
         Double halfDiameter = section.map(Section::diameterM).map(d -> d / 2).orElse(null);
@@ -76,6 +77,29 @@ public final class BendFinder {
             i = last + 1;
         }
         return out;
+    }
+
+    /**
+     * A closed run rotated to start where one arc does not continue the previous one (a corner or
+     * a change of circle or kind), so an arc drawn across the loop's start is one bend.
+     */
+    private static List<Segment> fromABreak(List<Segment> run, double angleRad, double joinM) {
+        int n = run.size();
+        for (int k = 0; k < n; k++) {
+            Segment prev = run.get((k + n - 1) % n);
+            Segment cur = run.get(k);
+            boolean continues = prev instanceof CircularArc p && cur instanceof CircularArc c && sameCircle(p, c, joinM)
+                    && corner(prev, cur) <= angleRad;
+            if (!continues) {
+                if (k == 0) {
+                    return run;
+                }
+                List<Segment> out = new ArrayList<>(run.subList(k, n));
+                out.addAll(run.subList(0, k));
+                return out;
+            }
+        }
+        return run;
     }
 
     /** Turning angle between the end tangent of {@code a} and the start tangent of {@code b}. */

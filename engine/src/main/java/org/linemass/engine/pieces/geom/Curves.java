@@ -16,6 +16,9 @@ public final class Curves {
     /** Sub-intervals per smooth span for numerical lengths (common practice, no source). */
     public static final int SUBDIVISIONS = 16;
 
+    /** Chords per full turn of an arc or ellipse in {@link #polylineParams} (about 11 degrees each). */
+    public static final int CHORDS_PER_TURN = 32;
+
     /** Fraction of the parameter range used for a one-sided difference when a derivative vanishes. */
     private static final double TANGENT_STEP_FRACTION = 1e-6;
 
@@ -106,7 +109,8 @@ public final class Curves {
     /**
      * Parameters of a polyline that follows the curve: both ends, every breakpoint, and enough
      * points in between that each chord turns by at most about 11 degrees on arcs and ellipses
-     * ({@code 32} per full turn) and each spline span has {@link #SUBDIVISIONS} chords.
+     * ({@link #CHORDS_PER_TURN} per full turn) and each spline span has half of
+     * {@link #SUBDIVISIONS} chords.
      */
     public static double[] polylineParams(Segment s) {
         if (s instanceof Straight) {
@@ -119,7 +123,7 @@ public final class Curves {
         if (s instanceof org.linemass.geometry.Nurbs) {
             per = SUBDIVISIONS / 2;
         } else {
-            per = Math.max(2, (int) Math.ceil((b - a) / (2 * Math.PI) * 32));
+            per = Math.max(2, (int) Math.ceil((b - a) / (2 * Math.PI) * CHORDS_PER_TURN));
         }
         int total = (cuts.length - 1) * per + 1;
         double[] out = new double[total];

@@ -5,6 +5,9 @@ import java.util.List;
 /** The geometric test of {@link Grouper}: one piece's samples against another's starts and directions. */
 final class Congruence {
 
+    /** Height of the lift point above a flat piece, in piece lengths (any size of that order works). */
+    static final double LIFT_FRACTION = 0.5;
+
     private Congruence() {
     }
 
@@ -20,7 +23,7 @@ final class Congruence {
             return false;
         }
         boolean flat = flatInPlan(leadSamples, tol) && flatInPlan(other.samples(0, n, false), tol);
-        double lift = lead.length() / 2;
+        double lift = LIFT_FRACTION * lead.length();
         double[][] a = flat ? lifted(leadSamples, lift) : leadSamples;
         List<Double> starts = other.closed() ? other.runStarts() : List.of(0.0);
         int tries = Math.min(starts.size(), Grouper.MAX_LOOP_STARTS);

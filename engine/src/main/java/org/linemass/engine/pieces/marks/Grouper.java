@@ -27,6 +27,13 @@ public final class Grouper {
     /** Length difference allowed per run for a candidate pair, in group tolerances (no source). */
     public static final double LENGTH_WINDOW = 4;
 
+    /**
+     * Most group leaders a piece is compared with (nearest in length first). Bounds the work when
+     * many different shapes share a bucket and a length; past it a piece starts its own group, so
+     * the cap can only split a mark, never merge different shapes (no source).
+     */
+    public static final int MAX_COMPARISONS = 256;
+
     /** Most starting points tried for a closed piece (bounds the work; no source). */
     public static final int MAX_LOOP_STARTS = 64;
 
@@ -61,7 +68,7 @@ public final class Grouper {
                 PieceShape s = shapes.get(i);
                 double window = LENGTH_WINDOW * tol.groupM() * (s.runs() + 1);
                 int found = -1;
-                for (int k = leaders.size() - 1; k >= 0; k--) {
+                for (int k = leaders.size() - 1; k >= 0 && k >= leaders.size() - MAX_COMPARISONS; k--) {
                     PieceShape lead = shapes.get(leaders.get(k));
                     if (lead.length() < s.length() - window) {
                         break;
@@ -89,8 +96,13 @@ public final class Grouper {
         return groups;
     }
 
-    /** Samples per piece for the fit: grows with the number of runs (no source). */
+    /** Fewest and most samples per piece, and samples added per run (no source: enough to see every run). */
+    static final int MIN_SAMPLES = 32;
+    static final int MAX_SAMPLES = 512;
+    static final int SAMPLES_PER_RUN = 16;
+
+    /** Samples per piece for the fit: grows with the number of runs. */
     static int samplesFor(PieceShape s) {
-        return Math.min(512, Math.max(32, 16 * s.runs() + 32));
+        return Math.min(MAX_SAMPLES, Math.max(MIN_SAMPLES, SAMPLES_PER_RUN * s.runs() + MIN_SAMPLES));
     }
 }
