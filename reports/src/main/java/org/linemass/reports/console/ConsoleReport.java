@@ -185,7 +185,7 @@ public final class ConsoleReport {
             Vec3 a = f.atM();
             t.add(List.of(Integer.toString(n), f.severity().jsonName(), f.kind(),
                     a == null ? "-" : units.longLength(a.x()), a == null ? "-" : units.longLength(a.y()),
-                    a == null ? "-" : units.longLength(a.z()), orDash(units.shortLength(f.sizeM())),
+                    a == null ? "-" : units.longLength(a.z()), orDash(units.defectSize(f.sizeM())),
                     orDash(f.layer()), f.message()));
         }
         out.print(bold("Findings") + "\n" + t.render("  ", MESSAGE_WIDTH) + "\n");

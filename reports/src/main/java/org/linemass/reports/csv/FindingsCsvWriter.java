@@ -43,7 +43,7 @@ public final class FindingsCsvWriter {
                 row.add(CsvCell.text(f.kind()));
                 row.add(f.severity().jsonName());
                 PiecesCsvWriter.addPoint(row, f.atM(), units);
-                row.add(units.shortLength(f.sizeM()));
+                row.add(units.defectSize(f.sizeM()));
                 row.add(CsvCell.text(f.layer()));
                 row.add(units.mass(f.massKg()));
                 row.add(CsvCell.text(PiecesCsvWriter.refs(f.entities())));

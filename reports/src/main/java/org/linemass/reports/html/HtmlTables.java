@@ -131,7 +131,7 @@ final class HtmlTables {
             cell(s, f.severity().jsonName(), false);
             cell(s, f.kind(), false);
             cell(s, f.atM() == null ? "" : point(f.atM()), false);
-            cell(s, units.shortLength(f.sizeM()), true);
+            cell(s, units.defectSize(f.sizeM()), true);
             cell(s, f.layer(), false);
             StringBuilder refs = new StringBuilder();
             f.entities().forEach(e -> refs.append(refs.length() == 0 ? "" : " ").append(e.line())

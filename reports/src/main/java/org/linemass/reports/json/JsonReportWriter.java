@@ -19,6 +19,7 @@ import org.linemass.engine.result.PieceResult;
 import org.linemass.engine.result.SectionUse;
 import org.linemass.engine.result.SourceRef;
 import org.linemass.engine.result.Totals;
+import org.linemass.engine.moments.PrincipalAxes;
 import org.linemass.engine.moments.Sym3;
 import org.linemass.geometry.Vec3;
 import org.linemass.reports.Caution;
@@ -212,7 +213,41 @@ public final class JsonReportWriter {
         vec(g, "length_centroid_m", t.lengthCentroidM());
         g.writeBooleanField("mass_complete", t.massComplete());
         num(g, "error_bound_m", t.errorBoundM());
+        principal(g, t.massKg(), t.inertiaKgM2());
         g.writeEndObject();
+    }
+
+    /**
+     * Principal moments of inertia (ascending), their unit axes (one per moment, right-handed) and
+     * the radii of gyration {@code sqrt(I_k / m)}; all null when the mass is not known.
+     */
+    private static void principal(JsonGenerator g, Double massKg, Sym3 inertia) throws IOException {
+        if (massKg == null || !(massKg > 0) || inertia == null) {
+            g.writeNullField("principal_moments_kg_m2");
+            g.writeNullField("principal_axes");
+            g.writeNullField("radii_of_gyration_m");
+            return;
+        }
+        PrincipalAxes p = PrincipalAxes.of(inertia);
+        g.writeArrayFieldStart("principal_moments_kg_m2");
+        for (double m : p.moments()) {
+            number(g, m);
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("principal_axes");
+        for (Vec3 a : p.axes()) {
+            g.writeStartArray();
+            number(g, a.x());
+            number(g, a.y());
+            number(g, a.z());
+            g.writeEndArray();
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("radii_of_gyration_m");
+        for (double r : p.radiiOfGyration(massKg)) {
+            number(g, r);
+        }
+        g.writeEndArray();
     }
 
     private static void section(JsonGenerator g, SectionUse s) throws IOException {
