@@ -162,6 +162,19 @@ class DialectTest {
     }
 
     @Test
+    void inputFile_isOpenedReadOnlyAndLeftUnchanged(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        Path f = dir.resolve("ro.dxf");
+        byte[] content = Dxf.create().entities().add(0, "LINE", 11, 1).end().ascii();
+        Files.write(f, content);
+        java.nio.file.attribute.FileTime before = Files.getLastModifiedTime(f);
+        f.toFile().setWritable(false);
+        Drawing d = DxfImporter.read(f, ImportOptions.DEFAULTS);
+        assertEquals(1, model(d).size());
+        assertEquals(before, Files.getLastModifiedTime(f));
+        org.junit.jupiter.api.Assertions.assertArrayEquals(content, Files.readAllBytes(f));
+    }
+
+    @Test
     void units_headerOptionAndMeasurementHint() throws Exception {
         Dxf inchHint = Dxf.create().add(0, "SECTION", 2, "HEADER", 9, "$INSUNITS", 70, 0, 9, "$MEASUREMENT", 70, 0,
                 0, "ENDSEC").entities().end();
