@@ -343,6 +343,14 @@ class HostileInputTest {
     }
 
     @Test
+    void absurdLineLimit_isBoundedNotAllocated(@TempDir Path dir) throws Exception {
+        Path f = dir.resolve("l.dxf");
+        Files.write(f, Dxf.create().entities().add(0, "LINE", 11, 1).end().ascii());
+        ImportOptions huge = new ImportOptions(Optional.empty(), 64, Integer.MAX_VALUE, 1000, 1000);
+        assertEquals(1, DxfImporter.read(f, huge).modelSpace().segments().size());
+    }
+
+    @Test
     void tenMegabyteLine() {
         char[] big = new char[10 << 20];
         Arrays.fill(big, 'w');

@@ -10,6 +10,9 @@ import java.nio.channels.ReadableByteChannel;
  */
 final class ByteWindow {
 
+    /** Longest line or string ever buffered, whatever the options say (256 MiB). */
+    static final int MAX_BUFFERED_LINE = 1 << 28;
+
     byte[] buf;
     /** Next unread index in {@link #buf}. */
     int pos;
@@ -29,6 +32,11 @@ final class ByteWindow {
 
     static ByteWindow of(byte[] content) {
         return new ByteWindow(content, content.length, null);
+    }
+
+    /** The line limit actually applied: the option, bounded by {@link #MAX_BUFFERED_LINE}. */
+    static int lineLimit(int requested) {
+        return Math.max(0, Math.min(requested, MAX_BUFFERED_LINE));
     }
 
     static ByteWindow of(ReadableByteChannel channel, int capacity) {
