@@ -52,10 +52,6 @@ final class ByteWindow {
         return exhausted;
     }
 
-    int capacity() {
-        return buf.length;
-    }
-
     /**
      * Moves the unread bytes to the front and reads more. Returns false when nothing more could be
      * read (end of input or buffer full).
