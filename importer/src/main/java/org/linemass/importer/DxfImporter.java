@@ -19,6 +19,13 @@ import org.linemass.importer.read.GroupSource;
  * reported with file, line (or byte offset for binary files), entity and handle; entities that
  * cannot be used are skipped with an error note in {@link Drawing#notes()}; unexpected internal
  * failures are reported as input errors asking for a report rather than escaping.
+ *
+ * <p>Provenance and note line numbers are DXF line numbers of an entity's {@code 0} group for
+ * ASCII files and byte offsets of that group for binary files. Resource limits come from
+ * {@link ImportOptions}: the longest text line (or binary string), the largest vertex and
+ * spline point counts, and the deepest block nesting below model space; the per-record group
+ * limit follows from the vertex limit. Inserts are never expanded here, so arrays and nested
+ * blocks cost one definition each however many copies they place.
  */
 public final class DxfImporter {
 

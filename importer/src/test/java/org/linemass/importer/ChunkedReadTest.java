@@ -67,6 +67,22 @@ class ChunkedReadTest {
     }
 
     @Test
+    void lineLongerThanTheFirstBuffer_growsItWithinTheLimit(@TempDir Path dir) throws Exception {
+        Path f = dir.resolve("long.dxf");
+        Dxf dxf = Dxf.create().entities().add(0, "MTEXT", 1, "n".repeat(3 << 20)).add(0, "LINE", 10, 1, 11, 4, 21, 4)
+                .end();
+        Files.write(f, dxf.ascii());
+        Files.write(dir.resolve("long.bin"), dxf.binary(true));
+        ImportOptions eight = new ImportOptions(java.util.Optional.empty(), 64, 8 << 20, 1000, 1000);
+        for (Path p : List.of(f, dir.resolve("long.bin"))) {
+            org.linemass.drawing.Drawing d = DxfImporter.read(p, eight);
+            // closed form: (1,0,0) to (4,4,0) has length 5
+            assertEquals(5, ((org.linemass.geometry.Straight) d.modelSpace().segments().get(0)).length(), 1e-12);
+            assertEquals(1, d.modelSpace().otherEntityCounts().get("MTEXT"));
+        }
+    }
+
+    @Test
     void binary_streamedEqualsInMemory(@TempDir Path dir) throws Exception {
         byte[] bin = bigDrawing(40_000).binary(true);
         assertEquals(true, bin.length > 2 * (1 << 20), "several buffer fills");

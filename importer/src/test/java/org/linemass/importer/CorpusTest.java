@@ -110,6 +110,51 @@ class CorpusTest {
     }
 
     /**
+     * Every corpus drawing re-written as binary DXF (both code widths, by the test's own writer) reads
+     * to the same segments, layers, handles, blocks and counts as the ASCII file.
+     */
+    @TestFactory
+    Stream<DynamicTest> corpusAsBinary_readsLikeAscii() throws IOException {
+        Path corpus = SharedFiles.corpus();
+        Assumptions.assumeTrue(Files.isRegularFile(corpus.resolve("manifest.json")),
+                "../shared/corpus not present beside the checkout; corpus checks skipped");
+        List<DynamicTest> tests = new ArrayList<>();
+        try (Stream<Path> files = Files.list(corpus)) {
+            for (Path f : files.filter(p -> p.toString().endsWith(".dxf")).sorted().toList()) {
+                tests.add(DynamicTest.dynamicTest(f.getFileName().toString(), () -> {
+                    Drawing ascii = DxfImporter.read(f, ImportOptions.DEFAULTS);
+                    Dxf pairs = Dxf.parse(Files.readString(f, java.nio.charset.StandardCharsets.ISO_8859_1));
+                    for (boolean wide : new boolean[] {true, false}) {
+                        Drawing bin = DxfImporter.read("b.dxf", pairs.binary(wide), ImportOptions.DEFAULTS);
+                        assertEquals(ascii.blocks().keySet(), bin.blocks().keySet());
+                        assertEquals(ascii.layers().keySet(), bin.layers().keySet());
+                        assertEquals(ascii.unit(), bin.unit());
+                        for (String b : ascii.blocks().keySet()) {
+                            var x = ascii.blocks().get(b);
+                            var y = bin.blocks().get(b);
+                            assertEquals(x.curveEntityCounts(), y.curveEntityCounts(), b);
+                            assertEquals(x.otherEntityCounts(), y.otherEntityCounts(), b);
+                            assertEquals(x.inserts().size(), y.inserts().size(), b);
+                            for (int i = 0; i < x.inserts().size(); i++) {
+                                assertEquals(x.inserts().get(i).placement(), y.inserts().get(i).placement());
+                            }
+                            assertEquals(x.segments().size(), y.segments().size(), b);
+                            for (int i = 0; i < x.segments().size(); i++) {
+                                Segment s = x.segments().get(i);
+                                Segment t = y.segments().get(i);
+                                assertEquals(s.withSource(t.source()), t, b + " segment " + i);
+                                assertEquals(s.source().layer(), t.source().layer());
+                                assertEquals(s.source().handle(), t.source().handle());
+                            }
+                        }
+                    }
+                }));
+            }
+        }
+        return tests.stream();
+    }
+
+    /**
      * The fit-point-only spline layer is interpretation dependent (2e-3 in the manifest), but the
      * importer implements exactly the convention the corpus README documents (clamped C2 cubic,
      * chord-length knots, unit end tangents as derivatives), so it must agree to the ordinary 1e-7.

@@ -100,6 +100,17 @@ class DialectTest {
     }
 
     @Test
+    void otherCodePages_decodeTheirBytes() throws Exception {
+        // windows-1251 0xC4 is U+0414 (Cyrillic De); IBM850 0x9D is U+00D8 (O with stroke): the code page tables
+        String[][] cases = {{"ANSI_1251", "\u00c4", "\u0414"}, {"DOS850", "\u009d", "\u00d8"}, {"UNKNOWN_9", "\u00d8", "\u00d8"}};
+        for (String[] c : cases) {
+            Drawing d = Dxf.create().add(0, "SECTION", 2, "HEADER", 9, "$ACADVER", 1, "AC1015", 9, "$DWGCODEPAGE", 3,
+                    c[0], 0, "ENDSEC").entities().add(0, "LINE", 8, "L" + c[1], 11, 1).end().read();
+            assertEquals("L" + c[2], model(d).get(0).source().layer(), c[0]);
+        }
+    }
+
+    @Test
     void escapedUnicodeInOldFiles_isDecoded() throws Exception {
         Drawing d = Dxf.create().entities().add(0, "LINE", 8, "RING_\\U+00D8", 11, 1).end().read();
         assertEquals("RING_\u00d8", model(d).get(0).source().layer());
@@ -148,6 +159,19 @@ class DialectTest {
         Drawing d = DxfImporter.read(f, ImportOptions.DEFAULTS);
         // closed form: |(6, 8)| = 10
         assertEquals(10, ((Straight) model(d).get(0)).length(), EXACT);
+    }
+
+    @Test
+    void inputFile_isOpenedReadOnlyAndLeftUnchanged(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        Path f = dir.resolve("ro.dxf");
+        byte[] content = Dxf.create().entities().add(0, "LINE", 11, 1).end().ascii();
+        Files.write(f, content);
+        java.nio.file.attribute.FileTime before = Files.getLastModifiedTime(f);
+        f.toFile().setWritable(false);
+        Drawing d = DxfImporter.read(f, ImportOptions.DEFAULTS);
+        assertEquals(1, model(d).size());
+        assertEquals(before, Files.getLastModifiedTime(f));
+        org.junit.jupiter.api.Assertions.assertArrayEquals(content, Files.readAllBytes(f));
     }
 
     @Test

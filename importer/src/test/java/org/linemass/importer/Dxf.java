@@ -38,6 +38,22 @@ final class Dxf {
         return add(0, "ENDSEC", 0, "EOF");
     }
 
+    /** The pairs of an ASCII DXF text (LF or CRLF), comments dropped: for re-writing it as binary. */
+    static Dxf parse(String text) {
+        String[] l = text.split("\r?\n", -1);
+        Dxf d = create();
+        for (int i = 0; i + 1 < l.length; i += 2) {
+            if (!l[i].trim().equals("999")) {
+                d.lines.add(l[i].trim());
+                d.lines.add(l[i + 1]);
+            }
+            if (l[i].trim().equals("0") && l[i + 1].equals("EOF")) {
+                break;
+            }
+        }
+        return d;
+    }
+
     List<String> lines() {
         return lines;
     }
@@ -72,18 +88,22 @@ final class Dxf {
                 out.write(255);
                 out.writeBytes(le(code, 2));
             }
-            if ((code >= 10 && code <= 59) || (code >= 110 && code <= 149) || (code >= 210 && code <= 239)) {
+            // value types by code range: DXF Reference, group code value types (FACTS.md §7.1, §7.6)
+            if ((code >= 10 && code <= 59) || (code >= 110 && code <= 149) || (code >= 210 && code <= 239)
+                    || (code >= 460 && code <= 469) || (code >= 1010 && code <= 1059)) {
                 out.writeBytes(ByteBuffer.allocate(8).order(ByteOrder.LITTLE_ENDIAN)
                         .putDouble(Double.parseDouble(v)).array());
-            } else if ((code >= 60 && code <= 79) || (code >= 170 && code <= 179) || (code >= 270 && code <= 289)) {
+            } else if ((code >= 60 && code <= 79) || (code >= 170 && code <= 179) || (code >= 270 && code <= 289)
+                    || (code >= 370 && code <= 389) || (code >= 400 && code <= 409) || (code >= 1060 && code <= 1070)) {
                 out.writeBytes(le(Long.parseLong(v.trim()), 2));
-            } else if (code >= 90 && code <= 99) {
+            } else if ((code >= 90 && code <= 99) || (code >= 420 && code <= 429) || (code >= 440 && code <= 449)
+                    || code == 1071) {
                 out.writeBytes(le(Long.parseLong(v.trim()), 4));
-            } else if (code >= 160 && code <= 169) {
+            } else if ((code >= 160 && code <= 169) || (code >= 450 && code <= 459)) {
                 out.writeBytes(le(Long.parseLong(v.trim()), 8));
             } else if (code >= 290 && code <= 299) {
                 out.write(Integer.parseInt(v.trim()));
-            } else if (code >= 310 && code <= 319) {
+            } else if ((code >= 310 && code <= 319) || code == 1004) {
                 byte[] b = hex(v);
                 out.write(b.length);
                 out.writeBytes(b);

@@ -54,8 +54,10 @@ class HostileEntityTest {
 
     @Test
     void ellipseRejections() throws Exception {
-        assertEquals("ELLIPSE axes must be non-zero, got major axis Vec3[x=0.0, y=0.0, z=0.0] and ratio 0.5",
+        assertEquals("ELLIPSE needs a non-zero major axis and a positive axis ratio, got Vec3[x=0.0, y=0.0, z=0.0] and 0.5",
                 skipped(0, "ELLIPSE", 11, 0, 21, 0, 31, 0, 40, 0.5));
+        assertEquals("ELLIPSE needs a non-zero major axis and a positive axis ratio, got Vec3[x=1.0, y=0.0, z=0.0] and -0.5",
+                skipped(0, "ELLIPSE", 11, 1, 21, 0, 31, 0, 40, -0.5));
         assertEquals("ELLIPSE major axis Vec3[x=0.0, y=0.0, z=2.0] is parallel to its normal Vec3[x=0.0, y=0.0, z=1.0]",
                 skipped(0, "ELLIPSE", 11, 0, 21, 0, 31, 2, 40, 0.5));
     }

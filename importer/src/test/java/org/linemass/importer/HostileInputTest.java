@@ -318,6 +318,39 @@ class HostileInputTest {
     }
 
     @Test
+    void depthLimitIsAnOption() throws Exception {
+        Dxf dxf = blocks(0, "BLOCK", 2, "A", 0, "INSERT", 2, "B", 0, "ENDBLK", 0, "BLOCK", 2, "B", 0, "INSERT", 2, "C",
+                0, "ENDBLK", 0, "BLOCK", 2, "C", 0, "LINE", 11, 1, 0, "ENDBLK").entities().add(0, "INSERT", 2, "A").end();
+        assertTrue(dxf.read().notes().stream().noneMatch(ImportNote::skippedGeometry), "3 levels are within 64");
+        ImportOptions two = new ImportOptions(Optional.empty(), 2, 1 << 20, 1000, 1000);
+        assertEquals("block 'C' would be nested deeper than the limit of 2 levels", skipped(dxf, two).message());
+    }
+
+    @Test
+    void carriageReturnOnlyLineEnds_areNotADxf() {
+        assertEquals("t.dxf:1: expected a group code (an integer), got '0?SECTION?2?ENTITIES?0?ENDSEC?0?EOF'",
+                fails(raw("0\rSECTION\r2\rENTITIES\r0\rENDSEC\r0\rEOF\r")));
+    }
+
+    @Test
+    void blocksAfterEntitiesAndTwoEntitySections_areFine() throws Exception {
+        Drawing d = Dxf.create().entities().add(0, "INSERT", 2, "LATE").add(0, "ENDSEC").entities()
+                .add(0, "LINE", 11, 2).add(0, "ENDSEC").add(0, "SECTION", 2, "BLOCKS", 0, "BLOCK", 2, "LATE",
+                        0, "LINE", 11, 1, 0, "ENDBLK").end().read();
+        assertEquals(1, d.modelSpace().inserts().size());
+        assertEquals(1, d.modelSpace().segments().size());
+        assertTrue(d.notes().stream().noneMatch(ImportNote::skippedGeometry));
+    }
+
+    @Test
+    void absurdLineLimit_isBoundedNotAllocated(@TempDir Path dir) throws Exception {
+        Path f = dir.resolve("l.dxf");
+        Files.write(f, Dxf.create().entities().add(0, "LINE", 11, 1).end().ascii());
+        ImportOptions huge = new ImportOptions(Optional.empty(), 64, Integer.MAX_VALUE, 1000, 1000);
+        assertEquals(1, DxfImporter.read(f, huge).modelSpace().segments().size());
+    }
+
+    @Test
     void tenMegabyteLine() {
         char[] big = new char[10 << 20];
         Arrays.fill(big, 'w');

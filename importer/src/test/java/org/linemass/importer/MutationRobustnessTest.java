@@ -22,7 +22,7 @@ import org.junit.jupiter.api.Test;
  */
 class MutationRobustnessTest {
 
-    private static final int MUTANTS_PER_SEED = 150;
+    private static final int MUTANTS_PER_SEED = 100;
     private static final Duration BUDGET = Duration.ofSeconds(60);
 
     private static List<byte[]> seeds() throws IOException {
@@ -34,7 +34,9 @@ class MutationRobustnessTest {
             }
             try (Stream<Path> s = Files.list(dir)) {
                 for (Path p : s.filter(f -> f.toString().endsWith(".dxf")).sorted().toList()) {
-                    seeds.add(Files.readAllBytes(p));
+                    byte[] ascii = Files.readAllBytes(p);
+                    seeds.add(ascii);
+                    seeds.add(Dxf.parse(new String(ascii, java.nio.charset.StandardCharsets.ISO_8859_1)).binary(true));
                 }
             }
         }

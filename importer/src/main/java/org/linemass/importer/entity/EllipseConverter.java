@@ -27,7 +27,8 @@ final class EllipseConverter {
         Vec3 n = Values.extrusion(r);
         double m = major.norm();
         if (!(m > 0) || !(ratio > 0)) {
-            throw new EntitySkip("ELLIPSE axes must be non-zero, got major axis " + major + " and ratio " + ratio);
+            throw new EntitySkip("ELLIPSE needs a non-zero major axis and a positive axis ratio, got " + major
+                    + " and " + ratio);
         }
         Vec3 dir = n.cross(major);
         if (!(dir.norm() > 0)) {

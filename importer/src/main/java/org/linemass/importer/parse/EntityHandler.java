@@ -40,14 +40,14 @@ final class EntityHandler {
         String type = r.type();
         boolean paper = target == null;
         int line = lineOf(r.position());
-        Provenance p = Provenance.of(file, r.layer(), line, r.handle(), type);
         String layer = r.layer();
         String handle = r.handle();
         if (type.equals("POLYLINE")) {
-            handlePolyline(r, in, paper ? null : target, p);
+            handlePolyline(r, in, paper ? null : target, Provenance.of(file, layer, line, handle, type));
             return;
         }
         if (type.equals("INSERT")) {
+            Provenance p = Provenance.of(file, layer, line, handle, type);
             boolean attribs = r.num(66, 0) == 1;
             if (paper) {
                 paperSpaceEntities++;
@@ -75,6 +75,7 @@ final class EntityHandler {
             target.countOther(type.isEmpty() ? "(unnamed)" : type);
             return;
         }
+        Provenance p = Provenance.of(file, layer, line, handle, type);
         if (r.hasBadValue()) {
             skip(p, badValue(r));
             return;

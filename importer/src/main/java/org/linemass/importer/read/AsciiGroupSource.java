@@ -33,7 +33,7 @@ public final class AsciiGroupSource extends GroupSource {
     private AsciiGroupSource(String file, ByteWindow w, int maxLineBytes) {
         super(file);
         this.w = w;
-        this.maxLineBytes = maxLineBytes;
+        this.maxLineBytes = ByteWindow.lineLimit(maxLineBytes);
     }
 
     public static AsciiGroupSource of(String file, byte[] content, int offset, int maxLineBytes) {
@@ -43,7 +43,7 @@ public final class AsciiGroupSource extends GroupSource {
     }
 
     public static AsciiGroupSource of(String file, ReadableByteChannel channel, int maxLineBytes) {
-        int capacity = (int) Math.min(Integer.MAX_VALUE - 16L, Math.max(1 << 20, maxLineBytes + (1L << 16)));
+        int capacity = (int) Math.max(1 << 20, ByteWindow.lineLimit(maxLineBytes) + (1L << 16));
         return new AsciiGroupSource(file, ByteWindow.of(channel, capacity), maxLineBytes);
     }
 

@@ -33,7 +33,7 @@ public final class BinaryGroupSource extends GroupSource {
     private BinaryGroupSource(String file, ByteWindow w, int maxStringBytes) {
         super(file);
         this.w = w;
-        this.maxStringBytes = maxStringBytes;
+        this.maxStringBytes = ByteWindow.lineLimit(maxStringBytes);
     }
 
     /** A source over {@code content}; the caller has checked that it starts with the sentinel. */
@@ -45,7 +45,7 @@ public final class BinaryGroupSource extends GroupSource {
 
     /** A source over a channel positioned just after the sentinel. */
     public static BinaryGroupSource of(String file, ReadableByteChannel ch, int maxStringBytes) {
-        int capacity = (int) Math.min(Integer.MAX_VALUE - 16L, Math.max(1 << 20, maxStringBytes + (1L << 16)));
+        int capacity = (int) Math.max(1 << 20, ByteWindow.lineLimit(maxStringBytes) + (1L << 16));
         ByteWindow w = ByteWindow.of(ch, capacity);
         w.base = SENTINEL.length;
         return new BinaryGroupSource(file, w, maxStringBytes);

@@ -10,6 +10,11 @@ import java.nio.channels.ReadableByteChannel;
  */
 final class ByteWindow {
 
+    /** Longest line or string ever buffered, whatever the options say (256 MiB). */
+    static final int MAX_BUFFERED_LINE = 1 << 28;
+    /** First buffer size for channel input; lines longer than this grow it, up to the line limit. */
+    static final int INITIAL_CAPACITY = 1 << 20;
+
     byte[] buf;
     /** Next unread index in {@link #buf}. */
     int pos;
@@ -18,29 +23,33 @@ final class ByteWindow {
     /** Absolute offset in the input of {@code buf[0]}. */
     long base;
     private final ReadableByteChannel channel;
+    private final int maxCapacity;
     private boolean exhausted;
 
-    private ByteWindow(byte[] buf, int limit, ReadableByteChannel channel) {
+    private ByteWindow(byte[] buf, int limit, ReadableByteChannel channel, int maxCapacity) {
         this.buf = buf;
+        this.maxCapacity = maxCapacity;
         this.limit = limit;
         this.channel = channel;
         this.exhausted = channel == null;
     }
 
     static ByteWindow of(byte[] content) {
-        return new ByteWindow(content, content.length, null);
+        return new ByteWindow(content, content.length, null, content.length);
     }
 
-    static ByteWindow of(ReadableByteChannel channel, int capacity) {
-        return new ByteWindow(new byte[capacity], 0, channel);
+    /** The line limit actually applied: the option, bounded by {@link #MAX_BUFFERED_LINE}. */
+    static int lineLimit(int requested) {
+        return Math.max(0, Math.min(requested, MAX_BUFFERED_LINE));
+    }
+
+    /** A channel window starting at {@link #INITIAL_CAPACITY} and growing up to {@code maxCapacity}. */
+    static ByteWindow of(ReadableByteChannel channel, int maxCapacity) {
+        return new ByteWindow(new byte[Math.min(INITIAL_CAPACITY, maxCapacity)], 0, channel, maxCapacity);
     }
 
     boolean exhausted() {
         return exhausted;
-    }
-
-    int capacity() {
-        return buf.length;
     }
 
     /**
@@ -58,7 +67,10 @@ final class ByteWindow {
             pos = 0;
         }
         if (limit == buf.length) {
-            return false;
+            if (buf.length >= maxCapacity) {
+                return false;
+            }
+            buf = java.util.Arrays.copyOf(buf, (int) Math.min(maxCapacity, 2L * buf.length));
         }
         ByteBuffer bb = ByteBuffer.wrap(buf, limit, buf.length - limit);
         int total = 0;

@@ -50,13 +50,26 @@ final class TextDecoder {
         }
         int slot = (h ^ (h >>> 16)) & (POOL_SIZE - 1);
         byte[] key = poolKeys[slot];
-        if (key != null && Arrays.equals(key, 0, key.length, b, from, to)) {
+        if (key != null && sameBytes(key, b, from, len)) {
             return poolValues[slot];
         }
         String s = decode(b, from, to);
         poolKeys[slot] = Arrays.copyOfRange(b, from, to);
         poolValues[slot] = s;
         return s;
+    }
+
+    /** Plain loop: for the few bytes of a name it beats the vectorised mismatch's set-up. */
+    private static boolean sameBytes(byte[] key, byte[] b, int from, int len) {
+        if (key.length != len) {
+            return false;
+        }
+        for (int i = 0; i < len; i++) {
+            if (key[i] != b[from + i]) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static String unescape(String s) {
