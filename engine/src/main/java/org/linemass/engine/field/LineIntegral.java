@@ -56,7 +56,7 @@ public final class LineIntegral {
             double t = total + v;
             compensation += Math.abs(total) >= Math.abs(v) ? (total - t) + v : (v - t) + total;
             total = t;
-            error += r.errorBound(0);
+            error += r.reportedBound(relative);
             s0 += arc.length();
         }
         return new Value(total + compensation, error, s0);

@@ -67,7 +67,7 @@ public final class ArcLengthMap {
             cum[i] = sum;
             sum += pieces.get(i).kronrod()[0];
         }
-        return new ArcLengthMap(seg, seg.tStart(), 0, starts, cum, sum, r.errorBound(0));
+        return new ArcLengthMap(seg, seg.tStart(), 0, starts, cum, sum, r.reportedBound(relative));
     }
 
     /** Total length. */

@@ -17,7 +17,9 @@ import org.linemass.geometry.Vec3;
  * and where the speed nearly vanishes ({@link SpeedZeros}); every piece is integrated about its own
  * mid-point and turned into central moments there, and the pieces are combined by the
  * parallel-axis rule with compensated summation ({@link MomentsAccumulator}). The error of the
- * first and second moments is controlled too (scaled by the segment's extent and its square).
+ * first and second moments is controlled too (scaled by the segment's extent and its square). The
+ * error bound is {@link AdaptiveGaussKronrod.Result#reportedBound}: the estimate, and at least the
+ * target once converged.
  *
  * <p>Stateless and thread-safe (the density must be too if shared across threads). A negative or
  * non-finite density is the caller's business: {@link LinearDensity} implementations reject them.
@@ -78,9 +80,9 @@ public final class MomentIntegrator {
             acc.add(f.pieceMoments(p));
         }
         Moments m = acc.result();
-        if (m.mass() == 0) {
-            m = new Moments(0, seg.start(), Sym3.ZERO, m.errorBound());
-        }
+        double bound = r.reportedBound(relative);
+        m = m.mass() == 0 ? new Moments(0, seg.start(), Sym3.ZERO, bound)
+                : new Moments(m.mass(), m.centroid(), m.covariance(), bound);
         return new Result(m, r.evaluations(), r.converged());
     }
 

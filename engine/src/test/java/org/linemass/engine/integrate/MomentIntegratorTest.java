@@ -180,6 +180,51 @@ class MomentIntegratorTest {
         assertEquals(1.19699938153, adaptive(cat1).centroid().y(), 1e-9);
     }
 
+    /**
+     * Complete elliptic integral of the second kind E(m) (parameter convention, FACTS.md §5.3) by the
+     * arithmetic-geometric mean: E = K (1 - sum 2^(n-1) c_n^2), K = pi / (2 a_N) (Abramowitz and Stegun
+     * 17.6, from memory); converges quadratically and needs no quadrature.
+     */
+    static double ellipticE(double ratio) {
+        double a = 1;
+        double b = ratio;
+        double c = Math.sqrt((1 - ratio) * (1 + ratio));
+        double sum = c * c / 2;
+        double pow = 0.5;
+        for (int n = 1; n < 40 && c > 1e-300; n++) {
+            double an = (a + b) / 2;
+            c = (a - b) / 2;
+            b = Math.sqrt(a * b);
+            a = an;
+            pow *= 2;
+            sum += pow * c * c;
+        }
+        return Math.PI / (2 * a) * (1 - sum);
+    }
+
+    @Test
+    void agmReference_reproducesFactsValues() {
+        // FACTS.md §5.3: E(0.75) = 1.21105602756846 (a=2, b=1), E(8/9) = 1.11374110171294 (a=3, b=1)
+        assertEquals(1.21105602756846, ellipticE(0.5), 1e-14);
+        assertEquals(1.11374110171294, ellipticE(1.0 / 3), 1e-14);
+    }
+
+    @Test
+    void flatEllipses_boundCoversError() {
+        for (double ratio : new double[] {0.5, 0.1, 1e-2, 1e-3, 1e-4, 1e-6}) {
+            double a = 1000;
+            EllipticalArc e = EllipticalArc.of(Vec3.ZERO, new Vec3(a, 0, 0), new Vec3(0, a * ratio, 0), 0,
+                    2 * Math.PI, TestCurves.SRC);
+            Moments m = MomentIntegrator.lengthMoments(e, REL);
+            double exact = 4 * a * ellipticE(ratio);
+            double err = Math.abs(m.mass() - exact);
+            // the AGM reference is good to a few ulps of 4000
+            assertTrue(err <= m.errorBound() + 1e-12 * exact, "b/a " + ratio + ": error " + err + " bound "
+                    + m.errorBound());
+            assertTrue(err <= REL * exact, "b/a " + ratio + ": error " + err);
+        }
+    }
+
     @Test
     void evaluationCap_isRespected() {
         EllipticalArc e = EllipticalArc.of(Vec3.ZERO, new Vec3(1000, 0, 0), new Vec3(0, 0.001, 0), 0, 2 * Math.PI,
