@@ -242,6 +242,23 @@ class AnalyzerTest {
     }
 
     @Test
+    void emptyAndDegenerateDrawings_giveEmptyTotals() throws AnalysisException {
+        DrawingResult empty = Analyzer.analyze(Drawings.create().build(), settings(), SimpleStages.CHAIN);
+        assertTrue(empty.layers().isEmpty());
+        assertEquals(0, empty.totals().lengthM(), 0);
+        assertNull(empty.totals().massKg());
+        assertTrue(empty.totals().massComplete());
+        assertTrue(empty.complete());
+        // a zero-length line: the layer is listed with length 0, and a layer with no length needs no section
+        Drawings d = Drawings.create();
+        d.model().line("DOT", new Vec3(5, 5, 5), new Vec3(5, 5, 5));
+        DrawingResult dot = Analyzer.analyze(d.build(), settings(), SimpleStages.EACH_SEGMENT);
+        assertEquals(0, layer(dot, "DOT").lengthM(), 0);
+        assertTrue(dot.findings().stream().noneMatch(f -> f.kind().equals(FindingKind.NO_SECTION)));
+        assertTrue(dot.totals().massComplete());
+    }
+
+    @Test
     void unknownSection_isAnAnalysisException() {
         Drawings d = Drawings.create();
         d.model().line("W", Vec3.ZERO, new Vec3(10, 0, 0));
