@@ -116,7 +116,7 @@ public final class Analyzer {
     /** As {@link #integrateField(Drawing, AnalysisSettings, String)} with the given piece stage. */
     public static FieldIntegralResult integrateField(Drawing drawing, AnalysisSettings settings, String expression,
             PieceStage stage) throws AnalysisException {
-        FieldExpression f = FieldExpression.parse(expression, "(all)", false);
+        FieldExpression f = FieldExpression.parse(expression, "", false);
         MaterialPlan plan = MaterialPlan.of(settings);
         ResolvedDrawing resolved = Resolver.resolve(drawing, settings);
         List<String> reasons = new ArrayList<>(resolved.incompleteReasons());
@@ -137,7 +137,12 @@ public final class Analyzer {
         try {
             for (int i = 0; i < pa.pieces().size(); i++) {
                 var piece = pa.pieces().get(i);
-                LineIntegral.Value v = LineIntegral.along(piece.segments(), f, settings.integrationRelative());
+                LineIntegral.Value v;
+                try {
+                    v = LineIntegral.along(piece.segments(), f, settings.integrationRelative());
+                } catch (FieldException e) {
+                    throw new FieldException("layer " + piece.layer() + ": " + e.getMessage());
+                }
                 int id = assembled.idByStageIndex().get(i);
                 values.add(new PieceValue(id, piece.layer(), v.lengthM(), v.value(), v.errorBound()));
                 double[] acc = perLayer.computeIfAbsent(piece.layer(), k -> new double[4]);

@@ -202,6 +202,9 @@ class AnalyzerTest {
         // integral of s^2 over [0, 3] is 9 and over [0, 1] is 1/3
         assertEquals(9 + 1.0 / 3, s.total(), 1e-10);
         assertEquals(List.of(1, 2), s.pieces().stream().map(p -> p.pieceId()).sorted().toList());
+        AnalysisException e = assertThrows(AnalysisException.class,
+                () -> Analyzer.integrateField(d.build(), settings(), "1 / (z - 1.5)", SimpleStages.CHAIN));
+        assertTrue(e.getMessage().contains("layer CABLE") && e.getMessage().contains("z=1.5"), e.getMessage());
     }
 
     @Test
