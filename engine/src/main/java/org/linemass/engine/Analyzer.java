@@ -63,6 +63,7 @@ public final class Analyzer {
      */
     public static DrawingResult analyze(Drawing drawing, AnalysisSettings settings, PieceStage stage)
             throws AnalysisException {
+        tolerances(settings, 1.0);
         MaterialPlan plan = MaterialPlan.of(settings);
         ResolvedDrawing resolved = Resolver.resolve(drawing, settings);
         Tolerances tol = tolerances(settings, resolved.extentM());
@@ -116,6 +117,7 @@ public final class Analyzer {
     /** As {@link #integrateField(Drawing, AnalysisSettings, String)} with the given piece stage. */
     public static FieldIntegralResult integrateField(Drawing drawing, AnalysisSettings settings, String expression,
             PieceStage stage) throws AnalysisException {
+        tolerances(settings, 1.0);
         FieldExpression f = FieldExpression.parse(expression, "", false);
         MaterialPlan plan = MaterialPlan.of(settings);
         ResolvedDrawing resolved = Resolver.resolve(drawing, settings);

@@ -102,7 +102,8 @@ public final class AdaptiveGaussKronrod {
      * Integrates {@code f} over [cuts[0], cuts[last]].
      *
      * @param cuts ascending parameters, at least two; the first and last are the range ends
-     * @param relative target relative error (positive)
+     * @param relative target relative error (positive; raised to {@code 2 ROUNDING_FACTOR} units of double
+     *     rounding if smaller, the accuracy the rounding allows)
      * @param absolute absolute error that is always good enough (zero or positive)
      * @param maxEvaluations cap on integrand evaluations (at least 21 per initial piece are spent anyway)
      */
@@ -114,6 +115,9 @@ public final class AdaptiveGaussKronrod {
         if (!(relative > 0) || !(absolute >= 0)) {
             throw new IllegalArgumentException("bad error targets: relative " + relative + ", absolute " + absolute);
         }
+        // the rounding term charged to every piece sums to ROUNDING_FACTOR eps times the integral of |f|:
+        // a target below twice that could never be met, so it is raised to it
+        relative = Math.max(relative, 2 * ROUNDING_FACTOR * EPS);
         PriorityQueue<Work> queue = new PriorityQueue<>(Comparator.comparingDouble((Work w) -> -w.norm));
         List<Work> frozen = new ArrayList<>();
         double[] scratch = new double[f.dimension()];

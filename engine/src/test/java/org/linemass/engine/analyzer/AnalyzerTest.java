@@ -262,6 +262,22 @@ class AnalyzerTest {
     }
 
     @Test
+    void badTolerances_areAnalysisExceptions() {
+        Drawings d = Drawings.create();
+        d.model().line("W", Vec3.ZERO, new Vec3(10, 0, 0));
+        AnalysisSettings s = settings();
+        AnalysisSettings badGap = new AnalysisSettings(java.util.Optional.of(0.01), java.util.Optional.of(0.001),
+                s.groupM(), s.integrationRelative(), false, List.of(), List.of(), false, s.sections(), List.of(),
+                Map.of(), s.maxExpandedSegments());
+        AnalysisException e = assertThrows(AnalysisException.class,
+                () -> Analyzer.analyze(d.build(), badGap, SimpleStages.CHAIN));
+        assertTrue(e.getMessage().contains("gap limit"), e.getMessage());
+        AnalysisSettings badRel = new AnalysisSettings(s.joinM(), s.gapLimitM(), s.groupM(), -1, false, List.of(),
+                List.of(), false, s.sections(), List.of(), Map.of(), s.maxExpandedSegments());
+        assertThrows(AnalysisException.class, () -> Analyzer.analyze(d.build(), badRel, SimpleStages.CHAIN));
+    }
+
+    @Test
     void unknownSection_isAnAnalysisException() {
         Drawings d = Drawings.create();
         d.model().line("W", Vec3.ZERO, new Vec3(10, 0, 0));
