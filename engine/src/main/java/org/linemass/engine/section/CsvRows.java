@@ -2,6 +2,7 @@ package org.linemass.engine.section;
 
 import java.io.BufferedReader;
 import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -80,7 +81,7 @@ final class CsvRows {
         List<Row> rows = new ArrayList<>();
         String text;
         int line = 0;
-        while ((text = in.readLine()) != null) {
+        while ((text = readLine(in)) != null) {
             line++;
             if (line == 1 && text.startsWith("\uFEFF")) {
                 text = text.substring(1);
@@ -107,6 +108,19 @@ final class CsvRows {
             throw new IllegalArgumentException("no header row");
         }
         return new CsvRows(header, rows);
+    }
+
+    /**
+     * One line; a byte sequence that is not UTF-8 becomes an IllegalArgumentException with a plain
+     * message (the decoder's own, "Input length = 1", says nothing). No line number: the reader
+     * decodes ahead of the line it returns.
+     */
+    private static String readLine(BufferedReader in) throws IOException {
+        try {
+            return in.readLine();
+        } catch (CharacterCodingException e) {
+            throw new IllegalArgumentException("not UTF-8 text (malformed byte sequence); save the file as UTF-8", e);
+        }
     }
 
     static List<String> split(String text, int line) {
