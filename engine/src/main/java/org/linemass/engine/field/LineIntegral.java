@@ -51,7 +51,8 @@ public final class LineIntegral {
             };
             double[] cuts = MomentIntegrator.cuts(seg);
             AdaptiveGaussKronrod.Result r = AdaptiveGaussKronrod.integrate(integrand, cuts, relative, 0,
-                    MomentIntegrator.DEFAULT_MAX_EVALUATIONS);
+                    Math.max(MomentIntegrator.DEFAULT_MAX_EVALUATIONS,
+                            (long) MomentIntegrator.EVALUATIONS_PER_PIECE * (cuts.length - 1)));
             double v = r.value(0);
             double t = total + v;
             compensation += Math.abs(total) >= Math.abs(v) ? (total - t) + v : (v - t) + total;

@@ -5,6 +5,7 @@ import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.MomentsAccumulator;
 import org.linemass.engine.moments.Sym3;
 import org.linemass.geometry.CircularArc;
+import org.linemass.geometry.Nurbs;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
@@ -40,8 +41,21 @@ public final class MomentIntegrator {
      * turns of conics and points where its speed nearly vanishes. Ascending.
      */
     public static double[] cuts(Segment seg) {
-        return SpeedZeros.cuts(seg, MAX_SPAN_RAD);
+        // the span limit is an angle for conics; a spline's parameter has no such meaning
+        return SpeedZeros.cuts(seg, seg instanceof Nurbs ? Double.POSITIVE_INFINITY : MAX_SPAN_RAD);
     }
+
+    /**
+     * The evaluation budget for a segment cut into {@code pieces} initial pieces: the caller's cap, but
+     * at least {@link #EVALUATIONS_PER_PIECE} per initial piece, so that a spline with many knot spans
+     * gets a budget in proportion to its size.
+     */
+    static long budget(long maxEvaluations, int pieces) {
+        return Math.max(maxEvaluations, (long) EVALUATIONS_PER_PIECE * pieces);
+    }
+
+    /** Minimum budget per initial piece: eight applications of the 21-point rule. */
+    public static final int EVALUATIONS_PER_PIECE = 8 * 21;
 
     /** A result with the work it took. */
     public record Result(Moments moments, long evaluations, boolean converged) {
@@ -57,7 +71,8 @@ public final class MomentIntegrator {
      *
      * @param sOffsetM arc length of the piece before this segment's start (metres), for densities in s
      * @param relative target relative error
-     * @param maxEvaluations cap on integrand evaluations (the arc-length map of a curve in s may spend as much again)
+     * @param maxEvaluations cap on integrand evaluations, raised to {@link #EVALUATIONS_PER_PIECE} per initial
+     *     piece for long splines (the arc-length map of a curve in s may spend as much again)
      */
     public static Result integrate(Segment seg, LinearDensity density, double sOffsetM, double relative,
             long maxEvaluations) {
@@ -72,8 +87,9 @@ public final class MomentIntegrator {
         ArcLengthMap arc = density.usesArcLength() ? ArcLengthMap.of(seg, relative, maxEvaluations) : null;
         double extent = seg.bounds().diagonal();
         MomentIntegrand f = new MomentIntegrand(seg, density, arc, sOffsetM, extent > 0 ? extent : 1);
-        AdaptiveGaussKronrod.Result r = AdaptiveGaussKronrod.integrate(f, SpeedZeros.cuts(seg, MAX_SPAN_RAD),
-                relative, 0, maxEvaluations);
+        double[] cuts = cuts(seg);
+        AdaptiveGaussKronrod.Result r = AdaptiveGaussKronrod.integrate(f, cuts, relative, 0,
+                budget(maxEvaluations, cuts.length - 1));
         MomentsAccumulator acc = new MomentsAccumulator();
         List<AdaptiveGaussKronrod.Piece> pieces = r.pieces();
         for (AdaptiveGaussKronrod.Piece p : pieces) {
