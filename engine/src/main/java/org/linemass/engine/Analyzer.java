@@ -21,6 +21,7 @@ import org.linemass.engine.field.PieceValue;
 import org.linemass.engine.integrate.MomentIntegrator;
 import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.MomentsAccumulator;
+import org.linemass.engine.pieces.Piece;
 import org.linemass.engine.pieces.PieceAnalysis;
 import org.linemass.engine.pieces.PieceAnalyzer;
 import org.linemass.engine.pieces.SectionLookup;
@@ -63,6 +64,24 @@ public final class Analyzer {
      */
     public static DrawingResult analyze(Drawing drawing, AnalysisSettings settings, PieceStage stage)
             throws AnalysisException {
+        return analyzeWithPieces(drawing, settings, stage).result();
+    }
+
+    /**
+     * The result together with the stage's pieces in piece-id order ({@code pieces.get(id - 1)} is the
+     * piece behind {@code PieceResult} {@code id}), for writers that draw each piece's true curves.
+     * Empty when no pieces were formed.
+     */
+    public record Detailed(DrawingResult result, List<Piece> pieces) {
+
+        public Detailed {
+            pieces = List.copyOf(pieces);
+        }
+    }
+
+    /** As {@link #analyze(Drawing, AnalysisSettings, PieceStage)}, also returning the pieces by id. */
+    public static Detailed analyzeWithPieces(Drawing drawing, AnalysisSettings settings, PieceStage stage)
+            throws AnalysisException {
         tolerances(settings, 1.0);
         MaterialPlan plan = MaterialPlan.of(settings);
         ResolvedDrawing resolved = Resolver.resolve(drawing, settings);
@@ -78,6 +97,7 @@ public final class Analyzer {
         Map<String, Moments> removed = Map.of();
         PieceAssembler.Output pieces = PieceAssembler.Output.EMPTY;
         List<Finding> stageFindings = List.of();
+        List<Piece> byId = List.of();
         try {
             Optional<List<Segment>> world = resolved.worldSegments();
             if (world.isPresent()) {
@@ -86,6 +106,11 @@ public final class Analyzer {
                 removed = removedMoments(pa.removed(), settings.integrationRelative());
                 pieces = PieceAssembler.assemble(pa, plan, settings.integrationRelative());
                 stageFindings = pa.findings();
+                Piece[] ordered = new Piece[pa.pieces().size()];
+                for (int i = 0; i < ordered.length; i++) {
+                    ordered[pieces.idByStageIndex().get(i) - 1] = pa.pieces().get(i);
+                }
+                byId = List.of(ordered);
             } else {
                 findings.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
                         String.format(Locale.ROOT, "the drawing expands to more than %d segments; lengths and masses "
@@ -97,9 +122,9 @@ public final class Analyzer {
             findings.addAll(layers.findings());
             findings.addAll(stageFindings);
             reasons.addAll(layers.incompleteReasons());
-            return new DrawingResult(new DrawingInfo(drawing.file(), drawing.dxfVersion(), drawing.binary(),
-                    drawing.unit(), drawing.unitSource()), resolved.entities(), layers.layers(), pieces.pieces(),
-                    pieces.marks(), findings, layers.totals(), layers.sections(), reasons);
+            return new Detailed(new DrawingResult(new DrawingInfo(drawing.file(), drawing.dxfVersion(),
+                    drawing.binary(), drawing.unit(), drawing.unitSource()), resolved.entities(), layers.layers(),
+                    pieces.pieces(), pieces.marks(), findings, layers.totals(), layers.sections(), reasons), byId);
         } catch (FieldException e) {
             throw new AnalysisException(drawing.file() + ": " + e.getMessage());
         }
