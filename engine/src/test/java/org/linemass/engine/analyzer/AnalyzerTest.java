@@ -285,6 +285,22 @@ class AnalyzerTest {
     }
 
     @Test
+    void hiddenLayers_countOnlyWhenAsked() throws AnalysisException {
+        Drawings d = Drawings.create().layer("SPARE", false, false);
+        d.model().line("SPARE", Vec3.ZERO, new Vec3(1000, 0, 0)).line("MAIN", Vec3.ZERO, new Vec3(0, 1000, 0));
+        DrawingResult normal = Analyzer.analyze(d.build(), settings(), SimpleStages.CHAIN);
+        assertEquals(List.of("MAIN"), normal.layers().stream().map(LayerResult::name).toList());
+        AnalysisSettings s = settings();
+        AnalysisSettings all = new AnalysisSettings(s.joinM(), s.gapLimitM(), s.groupM(), s.integrationRelative(),
+                false, List.of(), List.of(), true, s.sections(), List.of(), Map.of(), s.maxExpandedSegments());
+        DrawingResult withHidden = Analyzer.analyze(d.build(), all, SimpleStages.CHAIN);
+        assertEquals(2, withHidden.layers().size());
+        assertFalse(layer(withHidden, "SPARE").visible());
+        assertTrue(layer(withHidden, "MAIN").visible());
+        assertEquals(2.0, withHidden.totals().lengthM(), EXACT);
+    }
+
+    @Test
     void unknownSection_isAnAnalysisException() {
         Drawings d = Drawings.create();
         d.model().line("W", Vec3.ZERO, new Vec3(10, 0, 0));

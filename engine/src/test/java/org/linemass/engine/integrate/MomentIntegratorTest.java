@@ -99,6 +99,22 @@ class MomentIntegratorTest {
     }
 
     @Test
+    void arcSeries_meetsClosedFormAtSwitch() {
+        // f1 and f2 switch from Taylor series to the closed forms at SERIES_BELOW; both sides must agree
+        // there to a few ulps (f1 ~ 1.43, f2 ~ 0.24 at a = 1.5: the closed forms lose at most a digit)
+        double a = ArcMoments.SERIES_BELOW;
+        double below = Math.nextDown(a);
+        assertEquals(ArcMoments.f1(a), ArcMoments.f1(below), 1e-14);
+        assertEquals(ArcMoments.f2(a), ArcMoments.f2(below), 1e-14);
+        // small arcs, first two Taylor terms of a - sin a cos a and a + sin a cos a - 2 sin^2 a / a (derived by
+        // hand from the sine and cosine series): 2a^3/3 - 2a^5/15 (the chord's L^3/12 / R^3 first) and
+        // 2a^5/45 - 2a^7/315; the next terms are 1e-16 relative at a = 1e-4
+        double t = 1e-4;
+        assertEquals(2 * t * t * t / 3 - 2 * Math.pow(t, 5) / 15, ArcMoments.f1(t), 1e-15 * t * t * t);
+        assertEquals(2 * Math.pow(t, 5) / 45 - 2 * Math.pow(t, 7) / 315, ArcMoments.f2(t), 1e-15 * Math.pow(t, 5));
+    }
+
+    @Test
     void rod_inertia_mL2over12() {
         // FACTS.md §5.2 (tiingu, astarmathsandphysics): m = 1 kg, L = 1000 mm -> 83 333.333 kg mm^2
         Straight s = new Straight(new Vec3(0, 0, 0), new Vec3(1.0, 0, 0), TestCurves.SRC);
