@@ -144,7 +144,12 @@ public final class Analyzer {
             PieceStage stage) throws AnalysisException {
         tolerances(settings, 1.0);
         FieldExpression f = FieldExpression.parse(expression, "", false);
-        MaterialPlan plan = MaterialPlan.of(settings);
+        // the pieces are needed for their ids and order only: leave density expressions out, so that one
+        // that fails somewhere cannot stop an unrelated integral
+        MaterialPlan plan = MaterialPlan.of(new AnalysisSettings(settings.joinM(), settings.gapLimitM(),
+                settings.groupM(), settings.integrationRelative(), settings.mirrorGrouping(), settings.includeLayers(),
+                settings.excludeLayers(), settings.includeHiddenLayers(), settings.sections(), settings.assignments(),
+                Map.of(), settings.maxExpandedSegments()));
         ResolvedDrawing resolved = Resolver.resolve(drawing, settings);
         List<String> reasons = new ArrayList<>(resolved.incompleteReasons());
         if (resolved.worldSegments().isEmpty()) {
