@@ -37,6 +37,9 @@ public final class LineIntegral {
         for (Segment seg : piece) {
             ArcLengthMap arc = ArcLengthMap.of(seg, relative, MomentIntegrator.DEFAULT_MAX_EVALUATIONS);
             double offset = s0;
+            // the quadrature nodes never touch the ends: a value that fails there must be reported too
+            f.at(seg.start(), offset);
+            f.at(seg.end(), offset + arc.length());
             Integrand integrand = new Integrand() {
                 @Override
                 public int dimension() {

@@ -85,6 +85,10 @@ public final class MomentIntegrator {
             }
         }
         ArcLengthMap arc = density.usesArcLength() ? ArcLengthMap.of(seg, relative, maxEvaluations) : null;
+        // the quadrature nodes never touch the ends: evaluate there too, so that a density that fails at
+        // an end (1 / (x - x0) starting at x0) is reported instead of integrated towards infinity
+        density.kgPerM(seg.start(), sOffsetM);
+        density.kgPerM(seg.end(), sOffsetM + (arc == null ? 0 : arc.length()));
         double extent = seg.bounds().diagonal();
         MomentIntegrand f = new MomentIntegrand(seg, density, arc, sOffsetM, extent > 0 ? extent : 1);
         double[] cuts = cuts(seg);
