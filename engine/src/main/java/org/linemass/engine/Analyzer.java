@@ -21,6 +21,7 @@ import org.linemass.engine.field.PieceValue;
 import org.linemass.engine.integrate.MomentIntegrator;
 import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.MomentsAccumulator;
+import org.linemass.engine.pieces.Piece;
 import org.linemass.engine.pieces.PieceAnalysis;
 import org.linemass.engine.pieces.PieceAnalyzer;
 import org.linemass.engine.pieces.SectionLookup;
@@ -63,6 +64,25 @@ public final class Analyzer {
      */
     public static DrawingResult analyze(Drawing drawing, AnalysisSettings settings, PieceStage stage)
             throws AnalysisException {
+        return analyzeWithPieces(drawing, settings, stage).result();
+    }
+
+    /**
+     * The result together with the stage's pieces in piece-id order ({@code pieces.get(id - 1)} is the
+     * piece behind {@code PieceResult} {@code id}), for writers that draw each piece's true curves.
+     * Empty when no pieces were formed.
+     */
+    public record Detailed(DrawingResult result, List<Piece> pieces) {
+
+        public Detailed {
+            pieces = List.copyOf(pieces);
+        }
+    }
+
+    /** As {@link #analyze(Drawing, AnalysisSettings, PieceStage)}, also returning the pieces by id. */
+    public static Detailed analyzeWithPieces(Drawing drawing, AnalysisSettings settings, PieceStage stage)
+            throws AnalysisException {
+        tolerances(settings, 1.0);
         MaterialPlan plan = MaterialPlan.of(settings);
         ResolvedDrawing resolved = Resolver.resolve(drawing, settings);
         Tolerances tol = tolerances(settings, resolved.extentM());
@@ -77,6 +97,7 @@ public final class Analyzer {
         Map<String, Moments> removed = Map.of();
         PieceAssembler.Output pieces = PieceAssembler.Output.EMPTY;
         List<Finding> stageFindings = List.of();
+        List<Piece> byId = List.of();
         try {
             Optional<List<Segment>> world = resolved.worldSegments();
             if (world.isPresent()) {
@@ -85,6 +106,11 @@ public final class Analyzer {
                 removed = removedMoments(pa.removed(), settings.integrationRelative());
                 pieces = PieceAssembler.assemble(pa, plan, settings.integrationRelative());
                 stageFindings = pa.findings();
+                Piece[] ordered = new Piece[pa.pieces().size()];
+                for (int i = 0; i < ordered.length; i++) {
+                    ordered[pieces.idByStageIndex().get(i) - 1] = pa.pieces().get(i);
+                }
+                byId = List.of(ordered);
             } else {
                 findings.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
                         String.format(Locale.ROOT, "the drawing expands to more than %d segments; lengths and masses "
@@ -96,9 +122,9 @@ public final class Analyzer {
             findings.addAll(layers.findings());
             findings.addAll(stageFindings);
             reasons.addAll(layers.incompleteReasons());
-            return new DrawingResult(new DrawingInfo(drawing.file(), drawing.dxfVersion(), drawing.binary(),
-                    drawing.unit(), drawing.unitSource()), resolved.entities(), layers.layers(), pieces.pieces(),
-                    pieces.marks(), findings, layers.totals(), layers.sections(), reasons);
+            return new Detailed(new DrawingResult(new DrawingInfo(drawing.file(), drawing.dxfVersion(),
+                    drawing.binary(), drawing.unit(), drawing.unitSource()), resolved.entities(), layers.layers(),
+                    pieces.pieces(), pieces.marks(), findings, layers.totals(), layers.sections(), reasons), byId);
         } catch (FieldException e) {
             throw new AnalysisException(drawing.file() + ": " + e.getMessage());
         }
@@ -116,8 +142,14 @@ public final class Analyzer {
     /** As {@link #integrateField(Drawing, AnalysisSettings, String)} with the given piece stage. */
     public static FieldIntegralResult integrateField(Drawing drawing, AnalysisSettings settings, String expression,
             PieceStage stage) throws AnalysisException {
-        FieldExpression f = FieldExpression.parse(expression, "(all)", false);
-        MaterialPlan plan = MaterialPlan.of(settings);
+        tolerances(settings, 1.0);
+        FieldExpression f = FieldExpression.parse(expression, "", false);
+        // the pieces are needed for their ids and order only: leave density expressions out, so that one
+        // that fails somewhere cannot stop an unrelated integral
+        MaterialPlan plan = MaterialPlan.of(new AnalysisSettings(settings.joinM(), settings.gapLimitM(),
+                settings.groupM(), settings.integrationRelative(), settings.mirrorGrouping(), settings.includeLayers(),
+                settings.excludeLayers(), settings.includeHiddenLayers(), settings.sections(), settings.assignments(),
+                Map.of(), settings.maxExpandedSegments()));
         ResolvedDrawing resolved = Resolver.resolve(drawing, settings);
         List<String> reasons = new ArrayList<>(resolved.incompleteReasons());
         if (resolved.worldSegments().isEmpty()) {
@@ -137,7 +169,12 @@ public final class Analyzer {
         try {
             for (int i = 0; i < pa.pieces().size(); i++) {
                 var piece = pa.pieces().get(i);
-                LineIntegral.Value v = LineIntegral.along(piece.segments(), f, settings.integrationRelative());
+                LineIntegral.Value v;
+                try {
+                    v = LineIntegral.along(piece.segments(), f, settings.integrationRelative());
+                } catch (FieldException e) {
+                    throw new FieldException("layer " + piece.layer() + ": " + e.getMessage());
+                }
                 int id = assembled.idByStageIndex().get(i);
                 values.add(new PieceValue(id, piece.layer(), v.lengthM(), v.value(), v.errorBound()));
                 double[] acc = perLayer.computeIfAbsent(piece.layer(), k -> new double[4]);

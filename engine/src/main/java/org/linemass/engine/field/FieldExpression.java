@@ -34,7 +34,7 @@ public final class FieldExpression {
     /**
      * Parses {@code text}.
      *
-     * @param layer the layer (or pattern) it belongs to, for messages
+     * @param layer the layer (or pattern) it belongs to, for messages; empty when it applies to every layer
      * @param density whether values are linear densities (then negative values are errors)
      * @throws AnalysisException when it does not parse or uses unknown variables
      */
@@ -56,6 +56,9 @@ public final class FieldExpression {
     }
 
     private static String what(boolean density, String layer) {
+        if (layer == null || layer.isEmpty()) {
+            return density ? "density expression" : "expression";
+        }
         return (density ? "density expression for layer " : "expression for layer ") + layer;
     }
 

@@ -37,6 +37,9 @@ public final class LineIntegral {
         for (Segment seg : piece) {
             ArcLengthMap arc = ArcLengthMap.of(seg, relative, MomentIntegrator.DEFAULT_MAX_EVALUATIONS);
             double offset = s0;
+            // the quadrature nodes never touch the ends: a value that fails there must be reported too
+            f.at(seg.start(), offset);
+            f.at(seg.end(), offset + arc.length());
             Integrand integrand = new Integrand() {
                 @Override
                 public int dimension() {
@@ -51,12 +54,13 @@ public final class LineIntegral {
             };
             double[] cuts = MomentIntegrator.cuts(seg);
             AdaptiveGaussKronrod.Result r = AdaptiveGaussKronrod.integrate(integrand, cuts, relative, 0,
-                    MomentIntegrator.DEFAULT_MAX_EVALUATIONS);
+                    Math.max(MomentIntegrator.DEFAULT_MAX_EVALUATIONS,
+                            (long) MomentIntegrator.EVALUATIONS_PER_PIECE * (cuts.length - 1)));
             double v = r.value(0);
             double t = total + v;
             compensation += Math.abs(total) >= Math.abs(v) ? (total - t) + v : (v - t) + total;
             total = t;
-            error += r.errorBound(0);
+            error += r.reportedBound(relative);
             s0 += arc.length();
         }
         return new Value(total + compensation, error, s0);

@@ -56,8 +56,9 @@ public final class ArcLengthMap {
                 out[0] = seg.derivative(t).norm();
             }
         };
-        AdaptiveGaussKronrod.Result r = AdaptiveGaussKronrod.integrate(speedIntegrand,
-                SpeedZeros.cuts(seg, MomentIntegrator.MAX_SPAN_RAD), relative, 0, maxEvaluations);
+        double[] cuts = MomentIntegrator.cuts(seg);
+        AdaptiveGaussKronrod.Result r = AdaptiveGaussKronrod.integrate(speedIntegrand, cuts, relative, 0,
+                MomentIntegrator.budget(maxEvaluations, cuts.length - 1));
         List<AdaptiveGaussKronrod.Piece> pieces = r.pieces();
         double[] starts = new double[pieces.size()];
         double[] cum = new double[pieces.size()];
@@ -67,7 +68,7 @@ public final class ArcLengthMap {
             cum[i] = sum;
             sum += pieces.get(i).kronrod()[0];
         }
-        return new ArcLengthMap(seg, seg.tStart(), 0, starts, cum, sum, r.errorBound(0));
+        return new ArcLengthMap(seg, seg.tStart(), 0, starts, cum, sum, r.reportedBound(relative));
     }
 
     /** Total length. */

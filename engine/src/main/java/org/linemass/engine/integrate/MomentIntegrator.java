@@ -5,6 +5,7 @@ import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.MomentsAccumulator;
 import org.linemass.engine.moments.Sym3;
 import org.linemass.geometry.CircularArc;
+import org.linemass.geometry.Nurbs;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
@@ -17,7 +18,9 @@ import org.linemass.geometry.Vec3;
  * and where the speed nearly vanishes ({@link SpeedZeros}); every piece is integrated about its own
  * mid-point and turned into central moments there, and the pieces are combined by the
  * parallel-axis rule with compensated summation ({@link MomentsAccumulator}). The error of the
- * first and second moments is controlled too (scaled by the segment's extent and its square).
+ * first and second moments is controlled too (scaled by the segment's extent and its square). The
+ * error bound is {@link AdaptiveGaussKronrod.Result#reportedBound}: the estimate, and at least the
+ * target once converged.
  *
  * <p>Stateless and thread-safe (the density must be too if shared across threads). A negative or
  * non-finite density is the caller's business: {@link LinearDensity} implementations reject them.
@@ -38,8 +41,21 @@ public final class MomentIntegrator {
      * turns of conics and points where its speed nearly vanishes. Ascending.
      */
     public static double[] cuts(Segment seg) {
-        return SpeedZeros.cuts(seg, MAX_SPAN_RAD);
+        // the span limit is an angle for conics; a spline's parameter has no such meaning
+        return SpeedZeros.cuts(seg, seg instanceof Nurbs ? Double.POSITIVE_INFINITY : MAX_SPAN_RAD);
     }
+
+    /**
+     * The evaluation budget for a segment cut into {@code pieces} initial pieces: the caller's cap, but
+     * at least {@link #EVALUATIONS_PER_PIECE} per initial piece, so that a spline with many knot spans
+     * gets a budget in proportion to its size.
+     */
+    static long budget(long maxEvaluations, int pieces) {
+        return Math.max(maxEvaluations, (long) EVALUATIONS_PER_PIECE * pieces);
+    }
+
+    /** Minimum budget per initial piece: eight applications of the 21-point rule. */
+    public static final int EVALUATIONS_PER_PIECE = 8 * 21;
 
     /** A result with the work it took. */
     public record Result(Moments moments, long evaluations, boolean converged) {
@@ -55,7 +71,8 @@ public final class MomentIntegrator {
      *
      * @param sOffsetM arc length of the piece before this segment's start (metres), for densities in s
      * @param relative target relative error
-     * @param maxEvaluations cap on integrand evaluations (the arc-length map of a curve in s may spend as much again)
+     * @param maxEvaluations cap on integrand evaluations, raised to {@link #EVALUATIONS_PER_PIECE} per initial
+     *     piece for long splines (the arc-length map of a curve in s may spend as much again)
      */
     public static Result integrate(Segment seg, LinearDensity density, double sOffsetM, double relative,
             long maxEvaluations) {
@@ -68,19 +85,24 @@ public final class MomentIntegrator {
             }
         }
         ArcLengthMap arc = density.usesArcLength() ? ArcLengthMap.of(seg, relative, maxEvaluations) : null;
+        // the quadrature nodes never touch the ends: evaluate there too, so that a density that fails at
+        // an end (1 / (x - x0) starting at x0) is reported instead of integrated towards infinity
+        density.kgPerM(seg.start(), sOffsetM);
+        density.kgPerM(seg.end(), sOffsetM + (arc == null ? 0 : arc.length()));
         double extent = seg.bounds().diagonal();
         MomentIntegrand f = new MomentIntegrand(seg, density, arc, sOffsetM, extent > 0 ? extent : 1);
-        AdaptiveGaussKronrod.Result r = AdaptiveGaussKronrod.integrate(f, SpeedZeros.cuts(seg, MAX_SPAN_RAD),
-                relative, 0, maxEvaluations);
+        double[] cuts = cuts(seg);
+        AdaptiveGaussKronrod.Result r = AdaptiveGaussKronrod.integrate(f, cuts, relative, 0,
+                budget(maxEvaluations, cuts.length - 1));
         MomentsAccumulator acc = new MomentsAccumulator();
         List<AdaptiveGaussKronrod.Piece> pieces = r.pieces();
         for (AdaptiveGaussKronrod.Piece p : pieces) {
             acc.add(f.pieceMoments(p));
         }
         Moments m = acc.result();
-        if (m.mass() == 0) {
-            m = new Moments(0, seg.start(), Sym3.ZERO, m.errorBound());
-        }
+        double bound = r.reportedBound(relative);
+        m = m.mass() == 0 ? new Moments(0, seg.start(), Sym3.ZERO, bound)
+                : new Moments(m.mass(), m.centroid(), m.covariance(), bound);
         return new Result(m, r.evaluations(), r.converged());
     }
 

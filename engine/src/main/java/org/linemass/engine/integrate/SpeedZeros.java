@@ -10,7 +10,8 @@ import org.linemass.geometry.Segment;
  * repeated control points): the integrand {@code |C'|} has a kink there, so the integrator cuts the
  * range at them. Contract: samples {@link #SAMPLES} points per span, takes every interior local
  * minimum below {@link #NEAR_ZERO} times the span's largest sampled speed, and refines it with a
- * golden-section search. Returns the minima in ascending order (may be empty).
+ * golden-section search. Returns the minima in ascending order (may be empty). {@link #cuts} also
+ * grades the cuts towards every such point (see {@code graded}).
  */
 final class SpeedZeros {
 
@@ -99,6 +100,52 @@ final class SpeedZeros {
         all.add(t1);
         double[] c = all.stream().mapToDouble(Double::doubleValue).toArray();
         Arrays.sort(c);
-        return Arrays.stream(c).distinct().toArray();
+        return graded(seg, Arrays.stream(c).distinct().toArray());
     }
+
+    /**
+     * Adds cuts graded geometrically (ratio {@link #GRADING}) towards every cut where the speed is
+     * nearly but not exactly zero. Near such a point the speed behaves like
+     * {@code sqrt(v^2 + |C''|^2 (t - t0)^2)}, a kink rounded over a width {@code w = v / |C''|}; a rule
+     * applied across it can agree with its embedded rule by luck (both miss the rounding), so the
+     * pieces are made proportional to their distance from the point, down to {@code w}.
+     */
+    private static double[] graded(Segment seg, double[] c) {
+        double max = 0;
+        for (int i = 0; i < c.length; i++) {
+            max = Math.max(max, seg.derivative(c[i]).norm());
+            if (i + 1 < c.length) {
+                max = Math.max(max, seg.derivative(0.5 * (c[i] + c[i + 1])).norm());
+            }
+        }
+        List<Double> out = new ArrayList<>();
+        for (int i = 0; i < c.length; i++) {
+            out.add(c[i]);
+            double v = seg.derivative(c[i]).norm();
+            double acc = seg.secondDerivative(c[i]).norm();
+            if (!(v > 0) || !(v < NEAR_ZERO * max) || !(acc > 0)) {
+                continue;
+            }
+            double w = v / acc;
+            if (i > 0) {
+                double room = 0.5 * (c[i] - c[i - 1]);
+                for (double d = Math.max(w, room * MIN_GRADED_FRACTION); d < room; d *= GRADING) {
+                    out.add(c[i] - d);
+                }
+            }
+            if (i + 1 < c.length) {
+                double room = 0.5 * (c[i + 1] - c[i]);
+                for (double d = Math.max(w, room * MIN_GRADED_FRACTION); d < room; d *= GRADING) {
+                    out.add(c[i] + d);
+                }
+            }
+        }
+        return out.stream().mapToDouble(Double::doubleValue).sorted().distinct().toArray();
+    }
+
+    /** Ratio of successive graded cuts towards a near-zero-speed point. */
+    static final double GRADING = 4;
+
+    /** Graded cuts stop at this fraction of the room beside the point (at most 30 cuts per side). */
+    static final double MIN_GRADED_FRACTION = Math.pow(GRADING, -30);
 }

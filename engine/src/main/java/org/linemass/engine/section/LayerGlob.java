@@ -46,16 +46,6 @@ public final class LayerGlob {
         return pattern.matcher(layer).matches();
     }
 
-    /** True when {@code layer} matches any of {@code globs}. */
-    public static boolean anyMatches(Iterable<String> globs, String layer) {
-        for (String g : globs) {
-            if (of(g).matches(layer)) {
-                return true;
-            }
-        }
-        return false;
-    }
-
     @Override
     public String toString() {
         return text;

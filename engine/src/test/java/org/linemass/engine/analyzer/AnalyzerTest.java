@@ -153,6 +153,13 @@ class AnalyzerTest {
         assertEquals("M02", r.pieces().get(0).mark());
         assertEquals("M01", r.pieces().get(4).mark());
         assertTrue(r.pieces().get(1).centroidM().y() < r.pieces().get(2).centroidM().y());
+        // the detailed call hands back the stage's piece behind every id
+        Analyzer.Detailed detailed = Analyzer.analyzeWithPieces(d.build(), settings("LINKS=RB8"), SimpleStages.CHAIN);
+        for (var p : detailed.result().pieces()) {
+            var piece = detailed.pieces().get(p.id() - 1);
+            assertEquals(p.segments(), piece.segments().size());
+            assertEquals(p.startM(), piece.segments().get(0).start());
+        }
         assertEquals(List.of(1, 2, 3, 4), links.pieceIds());
     }
 
@@ -202,6 +209,9 @@ class AnalyzerTest {
         // integral of s^2 over [0, 3] is 9 and over [0, 1] is 1/3
         assertEquals(9 + 1.0 / 3, s.total(), 1e-10);
         assertEquals(List.of(1, 2), s.pieces().stream().map(p -> p.pieceId()).sorted().toList());
+        AnalysisException e = assertThrows(AnalysisException.class,
+                () -> Analyzer.integrateField(d.build(), settings(), "1 / (z - 1.5)", SimpleStages.CHAIN));
+        assertTrue(e.getMessage().contains("layer CABLE") && e.getMessage().contains("z=1.5"), e.getMessage());
     }
 
     @Test
@@ -239,6 +249,55 @@ class AnalyzerTest {
         assertEquals(1_000_000L, r.entities().curves().get("LINE"));
         // 1 mm steel wire: 7850 pi 0.001^2 / 4 kg/m (FACTS.md §3.2: 6.165 g/m)
         assertEquals(100_000 * 0.006165, layer(r, "GRID").massKg(), 100_000 * 0.0000005);
+    }
+
+    @Test
+    void emptyAndDegenerateDrawings_giveEmptyTotals() throws AnalysisException {
+        DrawingResult empty = Analyzer.analyze(Drawings.create().build(), settings(), SimpleStages.CHAIN);
+        assertTrue(empty.layers().isEmpty());
+        assertEquals(0, empty.totals().lengthM(), 0);
+        assertNull(empty.totals().massKg());
+        assertTrue(empty.totals().massComplete());
+        assertTrue(empty.complete());
+        // a zero-length line: the layer is listed with length 0, and a layer with no length needs no section
+        Drawings d = Drawings.create();
+        d.model().line("DOT", new Vec3(5, 5, 5), new Vec3(5, 5, 5));
+        DrawingResult dot = Analyzer.analyze(d.build(), settings(), SimpleStages.EACH_SEGMENT);
+        assertEquals(0, layer(dot, "DOT").lengthM(), 0);
+        assertTrue(dot.findings().stream().noneMatch(f -> f.kind().equals(FindingKind.NO_SECTION)));
+        assertTrue(dot.totals().massComplete());
+    }
+
+    @Test
+    void badTolerances_areAnalysisExceptions() {
+        Drawings d = Drawings.create();
+        d.model().line("W", Vec3.ZERO, new Vec3(10, 0, 0));
+        AnalysisSettings s = settings();
+        AnalysisSettings badGap = new AnalysisSettings(java.util.Optional.of(0.01), java.util.Optional.of(0.001),
+                s.groupM(), s.integrationRelative(), false, List.of(), List.of(), false, s.sections(), List.of(),
+                Map.of(), s.maxExpandedSegments());
+        AnalysisException e = assertThrows(AnalysisException.class,
+                () -> Analyzer.analyze(d.build(), badGap, SimpleStages.CHAIN));
+        assertTrue(e.getMessage().contains("gap limit"), e.getMessage());
+        AnalysisSettings badRel = new AnalysisSettings(s.joinM(), s.gapLimitM(), s.groupM(), -1, false, List.of(),
+                List.of(), false, s.sections(), List.of(), Map.of(), s.maxExpandedSegments());
+        assertThrows(AnalysisException.class, () -> Analyzer.analyze(d.build(), badRel, SimpleStages.CHAIN));
+    }
+
+    @Test
+    void hiddenLayers_countOnlyWhenAsked() throws AnalysisException {
+        Drawings d = Drawings.create().layer("SPARE", false, false);
+        d.model().line("SPARE", Vec3.ZERO, new Vec3(1000, 0, 0)).line("MAIN", Vec3.ZERO, new Vec3(0, 1000, 0));
+        DrawingResult normal = Analyzer.analyze(d.build(), settings(), SimpleStages.CHAIN);
+        assertEquals(List.of("MAIN"), normal.layers().stream().map(LayerResult::name).toList());
+        AnalysisSettings s = settings();
+        AnalysisSettings all = new AnalysisSettings(s.joinM(), s.gapLimitM(), s.groupM(), s.integrationRelative(),
+                false, List.of(), List.of(), true, s.sections(), List.of(), Map.of(), s.maxExpandedSegments());
+        DrawingResult withHidden = Analyzer.analyze(d.build(), all, SimpleStages.CHAIN);
+        assertEquals(2, withHidden.layers().size());
+        assertFalse(layer(withHidden, "SPARE").visible());
+        assertTrue(layer(withHidden, "MAIN").visible());
+        assertEquals(2.0, withHidden.totals().lengthM(), EXACT);
     }
 
     @Test

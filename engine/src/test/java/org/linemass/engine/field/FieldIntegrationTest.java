@@ -71,6 +71,18 @@ class FieldIntegrationTest {
     }
 
     @Test
+    void failureAtAnEnd_isReported() throws AnalysisException {
+        // 1 / x on a wire starting at x = 0 diverges; no quadrature node sits on the end, so the ends are probed
+        Straight s = new Straight(Vec3.ZERO, new Vec3(1, 0, 0), SRC);
+        FieldExpression f = FieldExpression.parse("1 / x", "W", true);
+        FieldException e = assertThrows(FieldException.class, () -> MomentIntegrator.integrate(s, new FieldDensity(f),
+                0, REL, MomentIntegrator.DEFAULT_MAX_EVALUATIONS));
+        assertTrue(e.getMessage().contains("x=0"), e.getMessage());
+        assertThrows(FieldException.class, () -> LineIntegral.along(List.of(s.reversed()),
+                FieldExpression.parse("1 / x", "W", false), REL));
+    }
+
+    @Test
     void badExpressions_areReported() {
         assertThrows(AnalysisException.class, () -> FieldExpression.parse("x +", "W", true));
         assertThrows(AnalysisException.class, () -> FieldExpression.parse("foo(x)", "W", true));

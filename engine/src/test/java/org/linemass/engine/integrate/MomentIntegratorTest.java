@@ -99,6 +99,22 @@ class MomentIntegratorTest {
     }
 
     @Test
+    void arcSeries_meetsClosedFormAtSwitch() {
+        // f1 and f2 switch from Taylor series to the closed forms at SERIES_BELOW; both sides must agree
+        // there to a few ulps (f1 ~ 1.43, f2 ~ 0.24 at a = 1.5: the closed forms lose at most a digit)
+        double a = ArcMoments.SERIES_BELOW;
+        double below = Math.nextDown(a);
+        assertEquals(ArcMoments.f1(a), ArcMoments.f1(below), 1e-14);
+        assertEquals(ArcMoments.f2(a), ArcMoments.f2(below), 1e-14);
+        // small arcs, first two Taylor terms of a - sin a cos a and a + sin a cos a - 2 sin^2 a / a (derived by
+        // hand from the sine and cosine series): 2a^3/3 - 2a^5/15 (the chord's L^3/12 / R^3 first) and
+        // 2a^5/45 - 2a^7/315; the next terms are 1e-16 relative at a = 1e-4
+        double t = 1e-4;
+        assertEquals(2 * t * t * t / 3 - 2 * Math.pow(t, 5) / 15, ArcMoments.f1(t), 1e-15 * t * t * t);
+        assertEquals(2 * Math.pow(t, 5) / 45 - 2 * Math.pow(t, 7) / 315, ArcMoments.f2(t), 1e-15 * Math.pow(t, 5));
+    }
+
+    @Test
     void rod_inertia_mL2over12() {
         // FACTS.md §5.2 (tiingu, astarmathsandphysics): m = 1 kg, L = 1000 mm -> 83 333.333 kg mm^2
         Straight s = new Straight(new Vec3(0, 0, 0), new Vec3(1.0, 0, 0), TestCurves.SRC);
@@ -180,15 +196,96 @@ class MomentIntegratorTest {
         assertEquals(1.19699938153, adaptive(cat1).centroid().y(), 1e-9);
     }
 
+    /**
+     * Complete elliptic integral of the second kind E(m) (parameter convention, FACTS.md §5.3) by the
+     * arithmetic-geometric mean: E = K (1 - sum 2^(n-1) c_n^2), K = pi / (2 a_N) (Abramowitz and Stegun
+     * 17.6, from memory); converges quadratically and needs no quadrature.
+     */
+    static double ellipticE(double ratio) {
+        double a = 1;
+        double b = ratio;
+        double c = Math.sqrt((1 - ratio) * (1 + ratio));
+        double sum = c * c / 2;
+        double pow = 0.5;
+        for (int n = 1; n < 40 && c > 1e-300; n++) {
+            double an = (a + b) / 2;
+            c = (a - b) / 2;
+            b = Math.sqrt(a * b);
+            a = an;
+            pow *= 2;
+            sum += pow * c * c;
+        }
+        return Math.PI / (2 * a) * (1 - sum);
+    }
+
+    @Test
+    void agmReference_reproducesFactsValues() {
+        // FACTS.md §5.3: E(0.75) = 1.21105602756846 (a=2, b=1), E(8/9) = 1.11374110171294 (a=3, b=1)
+        assertEquals(1.21105602756846, ellipticE(0.5), 1e-14);
+        assertEquals(1.11374110171294, ellipticE(1.0 / 3), 1e-14);
+    }
+
+    @Test
+    void flatEllipses_boundCoversError() {
+        for (double ratio : new double[] {0.5, 0.1, 1e-2, 1e-3, 1e-4, 1e-6}) {
+            double a = 1000;
+            EllipticalArc e = EllipticalArc.of(Vec3.ZERO, new Vec3(a, 0, 0), new Vec3(0, a * ratio, 0), 0,
+                    2 * Math.PI, TestCurves.SRC);
+            Moments m = MomentIntegrator.lengthMoments(e, REL);
+            double exact = 4 * a * ellipticE(ratio);
+            double err = Math.abs(m.mass() - exact);
+            // the AGM reference is good to a few ulps of 4000
+            assertTrue(err <= m.errorBound() + 1e-12 * exact, "b/a " + ratio + ": error " + err + " bound "
+                    + m.errorBound());
+            assertTrue(err <= REL * exact, "b/a " + ratio + ": error " + err);
+        }
+    }
+
+    @Test
+    void longSpline_getsBudgetInProportion() {
+        // a helix of 100 turns written as 25,600 cubic pieces: every span must be integrated, so the budget
+        // grows with the spline; length per turn from FACTS.md §5.2: D = 20, p = 5 -> 63.0304827876
+        double k = 5 / (2 * Math.PI);
+        Nurbs helix = TestCurves.hermite(t -> new Vec3(10 * Math.cos(t), 10 * Math.sin(t), k * t),
+                t -> new Vec3(-10 * Math.sin(t), 10 * Math.cos(t), k), 0, 200 * Math.PI, 100 * 256);
+        MomentIntegrator.Result r = MomentIntegrator.integrate(helix, LinearDensity.UNIT, 0, REL,
+                MomentIntegrator.DEFAULT_MAX_EVALUATIONS);
+        assertTrue(r.converged());
+        // cuts at every knot only (no angle-based cuts for splines): one rule application per span suffices
+        assertTrue(r.evaluations() <= 2L * 21 * 25_600, "evaluations " + r.evaluations());
+        // Hermite interpolation error (O(h^4), measured about 5e-10 relative) dominates: compare at 1e-8
+        assertEquals(6303.04827876, r.moments().mass(), 1e-8 * 6303);
+    }
+
     @Test
     void evaluationCap_isRespected() {
+        // the cap applies once it exceeds the per-piece minimum (8 rule applications per initial piece)
         EllipticalArc e = EllipticalArc.of(Vec3.ZERO, new Vec3(1000, 0, 0), new Vec3(0, 0.001, 0), 0, 2 * Math.PI,
                 TestCurves.SRC);
-        MomentIntegrator.Result r = MomentIntegrator.integrate(e, LinearDensity.UNIT, 0, 1e-14, 500);
-        assertTrue(r.evaluations() <= 500, "evaluations " + r.evaluations());
-        assertTrue(!r.converged());
-        // perimeter of this flat ellipse is close to 4a = 4000 (FACTS.md §5.3 worst case b -> 0)
-        double err = Math.abs(r.moments().mass() - 4000.0);
-        assertTrue(err <= r.moments().errorBound() + 1e-3, "error " + err + " bound " + r.moments().errorBound());
+        MomentIntegrator.Result r = MomentIntegrator.integrate(e, LinearDensity.UNIT, 0, 1e-14, 1000);
+        assertTrue(r.evaluations() <= 1000, "evaluations " + r.evaluations());
+        // perimeter 4a E(m) by the AGM (see ellipticE)
+        double err = Math.abs(r.moments().mass() - 4000 * ellipticE(1e-6));
+        assertTrue(err <= r.moments().errorBound() + 1e-9, "error " + err + " bound " + r.moments().errorBound());
+        // a kink the cuts do not know about (sqrt|t - 1/3|) cannot reach 1e-12 in 420 evaluations: the run
+        // stops at the cap, says so, and its bound still covers the error; exact value by antiderivative:
+        // (2/3) ((1/3)^1.5 + (2/3)^1.5)
+        Integrand kink = new Integrand() {
+            @Override
+            public int dimension() {
+                return 1;
+            }
+
+            @Override
+            public void evaluate(double a, double b, double t, double[] out) {
+                out[0] = Math.sqrt(Math.abs(t - 1.0 / 3));
+            }
+        };
+        AdaptiveGaussKronrod.Result k = AdaptiveGaussKronrod.integrate(kink, new double[] {0, 1}, 1e-12, 0, 420);
+        assertTrue(k.evaluations() <= 420);
+        assertTrue(!k.converged());
+        double exact = 2.0 / 3 * (Math.pow(1.0 / 3, 1.5) + Math.pow(2.0 / 3, 1.5));
+        assertTrue(Math.abs(k.value(0) - exact) <= k.reportedBound(1e-12), "bound " + k.reportedBound(1e-12));
     }
+
 }

@@ -138,6 +138,19 @@ class ReferenceLibraryTest {
     }
 
     @Test
+    void unreachableTarget_isRaisedToRoundingLevel() {
+        // a target of 1e-20 cannot be met in double precision; the run must still converge quickly
+        EllipticalArc e = EllipticalArc.of(Vec3.ZERO, new Vec3(3, 0, 0), new Vec3(0, 1, 0), 0, 2 * Math.PI,
+                TestCurves.SRC);
+        MomentIntegrator.Result r = MomentIntegrator.integrate(e, LinearDensity.UNIT, 0, 1e-20,
+                MomentIntegrator.DEFAULT_MAX_EVALUATIONS);
+        assertTrue(r.converged());
+        assertTrue(r.evaluations() < 20_000, "evaluations " + r.evaluations());
+        // FACTS.md §5.3 (mpmath): 13.364893220555258230
+        assertEquals(13.364893220555258230, r.moments().mass(), 1e-13 * 13.4);
+    }
+
+    @Test
     void kronrodRule_exactOnPolynomials() {
         // K21 is exact to degree 31 and G10 to degree 19 (QUADPACK): integral of t^k over [0, 1] is 1/(k+1)
         for (int k = 0; k <= 31; k++) {

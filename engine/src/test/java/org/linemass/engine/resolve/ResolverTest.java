@@ -171,6 +171,16 @@ class ResolverTest {
     }
 
     @Test
+    void undefinedBlock_isLeftOutAndReported() {
+        Drawings d = Drawings.create();
+        d.model().line("W", Vec3.ZERO, new Vec3(1000, 0, 0)).insert("GHOST", "W", Affine.IDENTITY);
+        ResolvedDrawing r = Resolver.resolve(d.build(), settings());
+        assertEquals(1.0, r.layers().moments().get("W").mass(), 1e-15);
+        assertTrue(r.incompleteReasons().stream().anyMatch(s -> s.contains("undefined block GHOST")));
+        assertEquals(1, r.worldSegments().orElseThrow().size());
+    }
+
+    @Test
     void filters_includeExcludeHidden() {
         Drawings d = Drawings.create().layer("OFF", false, false).layer("FROZEN", true, true);
         d.block("K").line("0", Vec3.ZERO, new Vec3(10, 0, 0)).line("KEEP", Vec3.ZERO, new Vec3(0, 10, 0));
