@@ -117,6 +117,45 @@ class EndToEndTest {
         assertEquals(r, t.get("radii_of_gyration_m").get(2).asDouble(), 1e-12);
     }
 
+    @Test
+    void markupDxf_reimportsToTheSameSegments(@TempDir Path dir) throws Exception {
+        // The demo drawing has every kind of segment: lines, bulged polylines, arcs in blocks, a spline.
+        Path demo = dir.resolve("garden-planter.dxf");
+        try (var in = EndToEndTest.class.getResourceAsStream("/org/linemass/app/demo/garden-planter.dxf")) {
+            assumeTrue(in != null, "demo drawing not packaged");
+            Files.copy(in, demo);
+        }
+        Path marked = dir.resolve("marked.dxf");
+        exec(0, 1, new StringWriter(), "check", "-q", "--markup-dxf", marked.toString(), demo.toString());
+        var original = org.linemass.importer.DxfImporter.read(demo, org.linemass.importer.ImportOptions.DEFAULTS);
+        var copy = org.linemass.importer.DxfImporter.read(marked, org.linemass.importer.ImportOptions.DEFAULTS);
+        assertEquals(original.blocks().keySet(), copy.blocks().keySet());
+        for (String block : original.blocks().keySet()) {
+            List<String> want = fingerprints(original.blocks().get(block).segments(), false);
+            List<String> got = fingerprints(copy.blocks().get(block).segments(), true);
+            // exact equality: the writer copies the original bytes through, so every number reads back identically
+            assertEquals(want, got, "segments of block " + block);
+            assertEquals(original.blocks().get(block).inserts().size(), copy.blocks().get(block).inserts().size());
+        }
+    }
+
+    /** Kind, layer, handle and exact points at five parameters of every segment (markup layer left out if asked). */
+    private static List<String> fingerprints(List<org.linemass.geometry.Segment> segments, boolean skipMarkup) {
+        List<String> out = new ArrayList<>();
+        for (var s : segments) {
+            if (skipMarkup && s.source().layer().startsWith("LINEMASS_FINDINGS")) {
+                continue;
+            }
+            StringBuilder b = new StringBuilder(s.kind()).append(' ').append(s.source().layer()).append(' ')
+                    .append(s.source().handle());
+            for (int k = 0; k <= 4; k++) {
+                b.append(' ').append(s.point(s.tStart() + k * (s.tEnd() - s.tStart()) / 4));
+            }
+            out.add(b.toString());
+        }
+        return out;
+    }
+
     private static double distance(JsonNode a, JsonNode b) {
         double s = 0;
         for (int i = 0; i < 3; i++) {
@@ -129,12 +168,17 @@ class EndToEndTest {
     /** Runs the real command line and returns its JSON; the exit code must lie in [lo, hi]. */
     private static JsonNode run(int lo, int hi, String... args) throws Exception {
         StringWriter out = new StringWriter();
+        exec(lo, hi, out, args);
+        return MAPPER.readTree(out.toString());
+    }
+
+    /** Runs the real command line with standard output into {@code out}; the exit code must lie in [lo, hi]. */
+    private static void exec(int lo, int hi, StringWriter out, String... args) {
         StringWriter err = new StringWriter();
         AppContext sys = AppContext.system();
         AppContext ctx = new AppContext(new PrintWriter(out), new PrintWriter(err), sys.pipeline(), sys.sections(),
                 sys.integrator(), false);
         int code = Cli.run(ctx, args);
         assertTrue(code >= lo && code <= hi, "exit " + code + ": " + err);
-        return MAPPER.readTree(out.toString());
     }
 }
