@@ -62,8 +62,8 @@ public final class PieceAnalyzer {
         Objects.requireNonNull(sections, "section lookup");
         SectionCache cache = new SectionCache(sections);
         SegmentIndex index = new SegmentIndex(world, tol.joinM());
-        CandidatePairs pairs = CandidatePairs.of(index, world.size(),
-                (i, j) -> world.get(i).source().layer().equals(world.get(j).source().layer()));
+        // every layer: welds between layers (cross wires on a frame layer) count as contacts
+        CandidatePairs pairs = CandidatePairs.of(index, world.size(), (i, j) -> true);
         DedupResult dedup = Deduplicator.run(world, pairs, tol.joinM(), cache);
         List<Finding> findings = new ArrayList<>(dedup.findings());
 

@@ -86,9 +86,23 @@ class EdgeCasesTest {
     }
 
     @Test
-    void wiresCrossingOnDifferentLayers_areNotReported() {
+    void wiresCrossingOnDifferentLayers_areReportedAsAWeldButNotJoinedOrDeduplicated() {
+        // a cross wire on its own layer welded across a frame bar: one crossing at (100, 0) mm
         PieceAnalysis r = run(List.of(Fixtures.line(W, "10", 0, 0, 200, 0), Fixtures.line("OTHER", "11", 100, -50, 100, 50)));
-        assertEquals(List.of(), r.findings());
+        assertEquals(1, r.findings().size(), r.findings().toString());
+        assertEquals("crossing", r.findings().get(0).kind());
+        assertTrue(r.findings().get(0).atM().closeTo(new org.linemass.geometry.Vec3(0.1, 0, 0), 1e-12));
+        assertEquals(2, r.pieces().size());
+        assertEquals(List.of(), r.removed());
+    }
+
+    @Test
+    void sameLineOnTwoLayers_isNotADuplicate() {
+        // another layer may be another bar (e.g. a bar and its coating drawn apart): only contacts are noted
+        PieceAnalysis r = run(List.of(Fixtures.line(W, "10", 0, 0, 200, 0), Fixtures.line("OTHER", "11", 0, 0, 200, 0)));
+        assertEquals(List.of(), r.removed());
+        assertTrue(r.findings().stream().noneMatch(f -> f.kind().equals("duplicate") || f.kind().equals("overlap")),
+                r.findings().toString());
     }
 
     @Test

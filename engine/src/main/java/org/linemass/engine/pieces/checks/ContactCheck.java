@@ -21,7 +21,8 @@ import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
 
 /**
- * Contacts between pieces on the same layer, found from STR-tree candidates and decided on the
+ * Contacts between pieces on any layers (a cross wire welded to a frame drawn on another layer
+ * counts), found from STR-tree candidates and decided on the
  * true curves ({@link ClosestPoints}; for two straights in one horizontal plane the JTS robust
  * intersector decides a proper crossing exactly):
  * <ul>
@@ -61,7 +62,7 @@ public final class ContactCheck {
         }
         Map<Long, List<Vec3>> seen = new HashMap<>();
         pairs.forEach((oi, oj) -> index.derivedOf(oi, ii -> index.derivedOf(oj, k -> {
-            if (ii == k || layerOf[k] != layerOf[ii] || !index.box(ii).intersects(index.box(k))) {
+            if (ii == k || !index.box(ii).intersects(index.box(k))) {
                 return;
             }
             for (Vec3 at : crossings(segments.get(ii), segments.get(k), 2 * ii, 2 * k, free, j)) {
@@ -116,7 +117,7 @@ public final class ContactCheck {
         int[] who = {-1};
         Vec3[] at = {null};
         index.query(box, k -> {
-            if (k == own || layerOf[k] != layerOf[own]) {
+            if (k == own) {
                 return;
             }
             Segment c = segments.get(k);

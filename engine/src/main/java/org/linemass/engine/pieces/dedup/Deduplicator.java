@@ -39,7 +39,7 @@ public final class Deduplicator {
 
     /**
      * @param segments world segments in metres
-     * @param pairs candidate pairs of {@code segments} on the same layer, boxes grown by at least {@code tolM}
+     * @param pairs candidate pairs of {@code segments} (any layers; only same-layer pairs are used), boxes grown by at least {@code tolM}
      * @param tolM join tolerance (metres): closer than this counts as the same place
      */
     public static DedupResult run(List<Segment> segments, CandidatePairs pairs, double tolM,
@@ -57,7 +57,9 @@ public final class Deduplicator {
             }
             Segment a = segments.get(i);
             Segment b = segments.get(j);
-            if (a.getClass() == b.getClass() && sameCarrier(a, b, tolM)) {
+            // material is counted twice only on one layer: another layer may be another bar
+            if (a.getClass() == b.getClass() && a.source().layer().equals(b.source().layer())
+                    && sameCarrier(a, b, tolM)) {
                 uf.union(i, j);
                 any[i] = true;
                 any[j] = true;
