@@ -85,7 +85,7 @@ final class CheckRun {
         }
         UnitSystem units = common.units();
         if (!outputs.usesStdout()) {
-            new ConsoleReport(units, ctx.terminal(), common.quiet).print(reports, ctx.out());
+            new ConsoleReport(units, ctx.terminal(), common.quiet, common.listNotes).print(reports, ctx.out());
         }
         sink.text(outputs.json, reports, JsonReportWriter::write);
         sink.text(outputs.bomCsv, reports, (r, w) -> BomCsvWriter.write(r, units, w), true);

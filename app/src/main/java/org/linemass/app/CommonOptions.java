@@ -12,6 +12,10 @@ public final class CommonOptions {
     @Option(names = {"-q", "--quiet"}, description = "Print one line per drawing instead of the full summary.")
     boolean quiet;
 
+    @Option(names = "--list-notes", description = "List every note (T-junctions, crossings, ...) in the console "
+            + "findings table instead of counting them; the file reports always list them.")
+    boolean listNotes;
+
     @Option(names = "--imperial", description = "Show lengths in ft and in and masses in lb (JSON stays in SI).")
     boolean imperial;
 

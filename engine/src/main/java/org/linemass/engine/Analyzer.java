@@ -121,6 +121,9 @@ public final class Analyzer {
                     pieces.piecesPerLayer(), pieces.fieldMassPerLayer(), world.isPresent(), plan);
             findings.addAll(layers.findings());
             findings.addAll(stageFindings);
+            // most serious first, so finding 1 is the one to fix first; the sort is stable, so the
+            // order within a severity (import notes, layers, then the piece stage's order) stays
+            findings.sort(java.util.Comparator.comparing(Finding::severity).reversed());
             reasons.addAll(layers.incompleteReasons());
             return new Detailed(new DrawingResult(new DrawingInfo(drawing.file(), drawing.dxfVersion(),
                     drawing.binary(), drawing.unit(), drawing.unitSource()), resolved.entities(), layers.layers(),

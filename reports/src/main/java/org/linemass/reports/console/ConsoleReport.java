@@ -32,11 +32,23 @@ public final class ConsoleReport {
     private final UnitSystem units;
     private final boolean colour;
     private final boolean quiet;
+    private final boolean listNotes;
 
+    /** A report that lists every finding, notes included. */
     public ConsoleReport(UnitSystem units, boolean colour, boolean quiet) {
+        this(units, colour, quiet, true);
+    }
+
+    /**
+     * @param listNotes whether findings of severity info get a table row each; when false they are
+     *        counted by kind under the table (a welded mesh has hundreds), keeping their numbers so
+     *        the rows shown still match the HTML, CSV and JSON reports
+     */
+    public ConsoleReport(UnitSystem units, boolean colour, boolean quiet, boolean listNotes) {
         this.units = units;
         this.colour = colour;
         this.quiet = quiet;
+        this.listNotes = listNotes;
     }
 
     public void print(List<Report> reports, PrintWriter out) {
@@ -180,15 +192,30 @@ public final class ConsoleReport {
                 "y [" + units.longUnit() + "]", "z [" + units.longUnit() + "]", "size [" + units.shortUnit() + "]",
                 "layer", "message"), true, false, false, true, true, true, true, false, false);
         int n = 0;
+        java.util.Map<String, Integer> hidden = new java.util.TreeMap<>();
         for (Finding f : r.findings()) {
             n++;
+            if (!listNotes && f.severity() == org.linemass.engine.result.Severity.INFO) {
+                hidden.merge(f.kind(), 1, Integer::sum);
+                continue;
+            }
             Vec3 a = f.atM();
             t.add(List.of(Integer.toString(n), f.severity().jsonName(), f.kind(),
                     a == null ? "-" : units.longLength(a.x()), a == null ? "-" : units.longLength(a.y()),
                     a == null ? "-" : units.longLength(a.z()), orDash(units.defectSize(f.sizeM())),
                     orDash(f.layer()), f.message()));
         }
-        out.print(bold("Findings") + "\n" + t.render("  ", MESSAGE_WIDTH) + "\n");
+        out.print(bold("Findings") + "\n");
+        if (!t.isEmpty()) {
+            out.print(t.render("  ", MESSAGE_WIDTH) + "\n");
+        }
+        if (!hidden.isEmpty()) {
+            int total = hidden.values().stream().mapToInt(Integer::intValue).sum();
+            StringBuilder kinds = new StringBuilder();
+            hidden.forEach((k, c) -> kinds.append(kinds.length() == 0 ? "" : ", ").append(c).append(' ').append(k));
+            out.print("  " + count(total, "note") + " not listed (" + kinds
+                    + "); every finding is in the HTML, CSV and JSON reports, or add --list-notes\n\n");
+        }
     }
 
     private static String count(int n, String what) {

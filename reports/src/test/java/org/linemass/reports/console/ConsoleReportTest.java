@@ -22,6 +22,20 @@ class ConsoleReportTest {
     }
 
     @Test
+    void print_notesCountedUnlessListed_numbersStayThoseOfTheFileReports() {
+        List<Report> reports = List.of(Report.of(Fixtures.flatFrame("a.dxf")));
+        StringWriter w = new StringWriter();
+        new ConsoleReport(UnitSystem.METRIC, false, false, false).print(reports, new PrintWriter(w));
+        String counted = w.toString();
+        String listed = print(reports, UnitSystem.METRIC, false, false);
+        // the fixture has one error, one warning and one note (see the summary line)
+        assertTrue(counted.contains("1 note not listed ("), counted);
+        assertTrue(counted.contains("or add --list-notes"), counted);
+        assertFalse(listed.contains("not listed"), listed);
+        assertTrue(counted.length() < listed.length() + 200, "the note's row is replaced by one line");
+    }
+
+    @Test
     void print_summaryComesBeforeTables() {
         String s = print(List.of(Report.of(Fixtures.flatFrame("a.dxf"))), UnitSystem.METRIC, false, false);
         int summary = s.indexOf("centre of gravity");
