@@ -62,11 +62,11 @@ public enum UnitSystem {
     }
 
     /**
-     * The size of a drawing defect (a gap, an overlap) in the short unit, with three more decimals
+     * The size of a drawing defect (a gap, an overlap) in the short unit, with two more decimals
      * than a cut length: a 0.05 mm gap must not read as 0.0. Empty text for null.
      */
     public String defectSize(Double metres) {
-        return metres == null ? "" : fixed(metres / shortM, shortDecimals + 3);
+        return metres == null ? "" : fixed(metres / shortM, shortDecimals + 2);
     }
 
     /** A mass in kilograms shown in the mass unit, fixed decimals; empty text for null. */

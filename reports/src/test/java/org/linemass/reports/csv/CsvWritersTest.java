@@ -88,8 +88,8 @@ class CsvWritersTest {
         assertEquals(List.of("number", "kind", "severity", "x [m]", "y [m]", "z [m]", "size [mm]", "layer", "mass [kg]",
                 "entities", "message"), rows.get(0));
         // 1.0005 m shown with 3 decimals rounds half up (java.util.Formatter)
-        // defect sizes get 4 decimals in mm so that a 0.05 mm gap does not read as 0.0
-        assertEquals(List.of("1", "gap", "error", "1.001", "0.000", "0.000", "1.0000", "BARS", "", "120:2A",
+        // defect sizes get 3 decimals in mm so that a 0.05 mm gap does not read as 0.0
+        assertEquals(List.of("1", "gap", "error", "1.001", "0.000", "0.000", "1.000", "BARS", "", "120:2A",
                 "ends 1 mm apart on layer BARS were not joined"), rows.get(1));
         assertEquals("134:2B 120:2A", rows.get(2).get(9));
         assertEquals("'-1+1 message starting with a minus", rows.get(3).get(10));
