@@ -90,8 +90,8 @@ public final class Analyzer {
         List<String> reasons = new ArrayList<>();
         long skipped = drawing.notes().stream().filter(n -> n.skippedGeometry()).count();
         if (skipped > 0) {
-            reasons.add(skipped + " entit" + (skipped == 1 ? "y was" : "ies were")
-                    + " skipped by the importer because they were malformed (see the skipped_entity findings)");
+            reasons.add(skipped + (skipped == 1 ? " entity was skipped because it was" : " entities were skipped because they were")
+                    + " malformed (see the skipped_entity findings)");
         }
         reasons.addAll(resolved.incompleteReasons());
         Map<String, Moments> removed = Map.of();

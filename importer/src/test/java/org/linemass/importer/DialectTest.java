@@ -44,8 +44,8 @@ class DialectTest {
         assertEquals(LengthUnit.MILLIMETRE, d.unit());
         assertEquals(UnitSource.ASSUMED, d.unitSource());
         assertEquals("units_assumed", d.notes().get(0).kind());
-        assertEquals("drawing units not given (no $INSUNITS); assumed mm from no $MEASUREMENT; give the units"
-                + " explicitly to be sure", d.notes().get(0).message());
+        assertEquals("drawing units not given (no $INSUNITS); assumed mm (no $MEASUREMENT either, so the metric"
+                + " default); give the units with --units to be sure", d.notes().get(0).message());
         List<Segment> s = model(d);
         assertEquals(2, s.size());
         Straight line = (Straight) s.get(0);
@@ -181,8 +181,8 @@ class DialectTest {
         Drawing d = inchHint.read();
         assertEquals(LengthUnit.INCH, d.unit());
         assertEquals(UnitSource.ASSUMED, d.unitSource());
-        assertEquals("drawing units not given ($INSUNITS is 0 (unitless)); assumed in from $MEASUREMENT 0; give the"
-                + " units explicitly to be sure", d.notes().get(0).message());
+        assertEquals("drawing units not given ($INSUNITS is 0 (unitless)); assumed in ($MEASUREMENT 0 (imperial));"
+                + " give the units with --units to be sure", d.notes().get(0).message());
         Drawing o = DxfImporter.read(Dxf.NAME, inchHint.ascii(), ImportOptions.DEFAULTS.withUnit(LengthUnit.METRE));
         assertEquals(LengthUnit.METRE, o.unit());
         assertEquals(UnitSource.OPTION, o.unitSource());

@@ -136,8 +136,8 @@ class HostileEntityTest {
                 .map(n -> n.kind() + ": " + n.message()).toList();
         assertEquals(List.of("stray_record: record outside any BLOCK definition; ignored",
                 "duplicate_block: block 'A' is defined again; the first definition is used",
-                "units_assumed: drawing units not given (no $INSUNITS); assumed mm from no $MEASUREMENT; give the"
-                        + " units explicitly to be sure").stream().sorted().toList(),
+                "units_assumed: drawing units not given (no $INSUNITS); assumed mm (no $MEASUREMENT either, so the"
+                        + " metric default); give the units with --units to be sure").stream().sorted().toList(),
                 warnings.stream().sorted().toList());
         assertEquals(1, d.blocks().get("A").segments().size());
     }

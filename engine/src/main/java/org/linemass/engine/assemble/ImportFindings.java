@@ -28,6 +28,24 @@ public final class ImportFindings {
     private ImportFindings() {
     }
 
+    /**
+     * "LINE at line 5, handle 30: " for a note tied to an entity (byte offset for binary files), so
+     * the message alone tells the drafter where to look; empty otherwise.
+     */
+    private static String where(ImportNote n) {
+        if (n.entityType().isEmpty() && n.line() <= 0) {
+            return "";
+        }
+        StringBuilder b = new StringBuilder(n.entityType().isEmpty() ? "entity" : n.entityType());
+        if (n.line() > 0) {
+            b.append(" at line ").append(n.line());
+        }
+        if (!n.handle().isEmpty()) {
+            b.append(", handle ").append(n.handle());
+        }
+        return b.append(": ").toString();
+    }
+
     public static List<Finding> of(Drawing drawing) {
         List<Finding> out = new ArrayList<>();
         boolean unitsNoted = false;
@@ -37,7 +55,7 @@ public final class ImportFindings {
             unitsNoted |= FindingKind.UNITS_ASSUMED.equals(kind);
             List<SourceRef> refs = n.line() > 0 || !n.handle().isEmpty()
                     ? List.of(new SourceRef(n.line(), n.handle(), n.entityType(), List.of())) : List.of();
-            out.add(new Finding(kind, severity(n), null, null, n.layer(), refs, null, n.message()));
+            out.add(new Finding(kind, severity(n), null, null, n.layer(), refs, null, where(n) + n.message()));
         }
         boolean guessed = drawing.unitSource() == UnitSource.ASSUMED || drawing.unit() == LengthUnit.UNITLESS;
         if (guessed && !unitsNoted) {

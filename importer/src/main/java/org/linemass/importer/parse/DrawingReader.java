@@ -296,9 +296,10 @@ public final class DrawingReader {
             LengthUnit guess = h.measurement() == 0 ? LengthUnit.INCH : LengthUnit.MILLIMETRE;
             String why = h.insunits() < 0 ? "no $INSUNITS" : h.insunits() == 0 ? "$INSUNITS is 0 (unitless)"
                     : "$INSUNITS " + h.insunits() + " is not a known unit code";
-            String hint = h.measurement() < 0 ? "no $MEASUREMENT" : "$MEASUREMENT " + h.measurement();
-            String msg = "drawing units not given (" + why + "); assumed " + guess.symbol() + " from " + hint
-                    + "; give the units explicitly to be sure";
+            String hint = h.measurement() < 0 ? "no $MEASUREMENT either, so the metric default"
+                    : "$MEASUREMENT " + h.measurement() + (h.measurement() == 0 ? " (imperial)" : " (metric)");
+            String msg = "drawing units not given (" + why + "); assumed " + guess.symbol() + " (" + hint
+                    + "); give the units with --units to be sure";
             return new UnitChoice(guess, UnitSource.ASSUMED,
                     java.util.Optional.of(Notes.of("warning", "units_assumed", file, 0, "", "", "", msg)));
         }
