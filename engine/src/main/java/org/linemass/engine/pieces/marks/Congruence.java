@@ -25,7 +25,9 @@ final class Congruence {
         if (Grouper.samplesFor(other) != n) {
             return false;
         }
-        double[] na = planeNormal(leadSamples, tol);
+        // with mirror grouping every orthogonal map is allowed and the lift would only add the
+        // out-of-plane wobble of a nearly planar piece to the residual
+        double[] na = mirror ? null : planeNormal(leadSamples, tol);
         double[] nb = na == null ? null : planeNormal(other.samples(0, n, false), tol);
         boolean planar = na != null && nb != null;
         double lift = LIFT_FRACTION * lead.length();
