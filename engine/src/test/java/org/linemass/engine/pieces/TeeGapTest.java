@@ -69,6 +69,19 @@ class TeeGapTest {
     }
 
     @Test
+    void wireStoppingShortOfItsOwnShank_isAGap() {
+        // a loop bent from one wire: along the bottom, up, back along the top and down again,
+        // stopping 2 mm above its own first leg at (100, 0)
+        PieceAnalysis r = run(List.of(Fixtures.line(W, "10", 0, 0, 200, 0), Fixtures.line(W, "11", 200, 0, 200, 50),
+                Fixtures.line(W, "12", 200, 50, 100, 50), Fixtures.line(W, "13", 100, 50, 100, 2)));
+        assertEquals(1, r.pieces().size());
+        List<Finding> g = of(r, FindingKind.GAP);
+        assertEquals(1, g.size(), r.findings().toString());
+        assertEquals(0.002, g.get(0).sizeM(), LEN_TOL_M);
+        assertTrue(g.get(0).atM().distance(Fixtures.mm(100, 0)) < LEN_TOL_M);
+    }
+
+    @Test
     void endsWithinTheJoinToleranceOrBeyondTheGapLimit_areNoGap() {
         // 0.05 mm short: touching (a T-junction, a weld); 6 mm short: beyond the 5 mm gap limit
         PieceAnalysis touching = run(List.of(Fixtures.line(W, "10", 0, 0, 200, 0),

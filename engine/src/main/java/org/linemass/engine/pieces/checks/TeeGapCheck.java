@@ -86,8 +86,11 @@ public final class TeeGapCheck {
                     return;
                 }
                 Contact b = bestContact[0];
-                if (b == null || d < b.distance()
-                        || (d == b.distance() && Curves.compare(ct.pa(), b.pa()) < 0)) {
+                int place = b == null ? -1 : Curves.compare(ct.pa(), b.pa());
+                // ties (e.g. aimed at the corner two frame segments share) go by place, then by
+                // source, so the finding does not depend on input order
+                if (b == null || d < b.distance() || (d == b.distance() && (place < 0 || (place == 0
+                        && c.source().describe().compareTo(segments.get(best[0]).source().describe()) < 0)))) {
                     bestContact[0] = ct;
                     best[0] = k;
                 }
