@@ -53,6 +53,8 @@ class BranchPairingTest {
         assertEquals(1, straight);
         assertEquals(1, r.findings().stream().filter(f -> f.kind().equals(FindingKind.BRANCH)).count(),
                 "the branch is still reported");
+        assertTrue(r.findings().get(0).message().contains("less than 90.0 deg"), "the message states the rule");
+        assertEquals(4, r.findings().get(0).entities().size(), "every spoke at the node is named");
     }
 
     @Test
