@@ -15,6 +15,7 @@ import org.linemass.engine.pieces.checks.Findings;
 import org.linemass.engine.pieces.checks.GapCheck;
 import org.linemass.engine.pieces.checks.SectionCache;
 import org.linemass.engine.pieces.checks.SizeCheck;
+import org.linemass.engine.pieces.checks.TeeGapCheck;
 import org.linemass.engine.pieces.dedup.DedupResult;
 import org.linemass.engine.pieces.dedup.Deduplicator;
 import org.linemass.engine.pieces.geom.CandidatePairs;
@@ -36,7 +37,8 @@ import org.linemass.geometry.Segment;
  * reported and dropped, segments shorter than the join tolerance are reported and kept as pieces
  * of their own ({@link SizeCheck}); the rest are joined end to end on each layer
  * ({@link Joiner}); each piece gets its bends ({@link BendFinder}, {@link BendCheck}); free ends
- * are checked for gaps ({@link GapCheck}) and pieces for T-junctions and crossings
+ * are checked for gaps to other ends ({@link GapCheck}) and to the middle of other wires
+ * ({@link TeeGapCheck}), and pieces for T-junctions and crossings
  * ({@link ContactCheck}); identical pieces are grouped ({@link Grouper}). Every stage uses a hash
  * grid or an STR-tree, so the whole costs O(n log n) for n segments.
  *
@@ -100,10 +102,12 @@ public final class PieceAnalyzer {
             }
             pieces.add(piece(chain.segments(), chain.closed(), cache, tol, findings));
         }
+        boolean[] gapEnds = new boolean[joined.freeEnd().length];
         findings.addAll(GapCheck.check(joinable, layerOf, joined.freeEnd(), joined.endPoint(),
-                joined.chainOfSegment(), chainLength, tol));
+                joined.chainOfSegment(), chainLength, tol, gapEnds));
         DerivedIndex joinIndex = new DerivedIndex(index, world.size(), joinable,
                 java.util.Arrays.copyOf(origin, joinable.size()), tol.joinM());
+        findings.addAll(TeeGapCheck.check(joinable, joinIndex, joined.freeEnd(), joined.endPoint(), gapEnds, tol));
         findings.addAll(ContactCheck.check(joinable, joinIndex, pairs, layerOf, joined.freeEnd(), joined.chainOfSegment(),
                 tol));
 

@@ -78,10 +78,13 @@ class EdgeCasesTest {
     }
 
     @Test
-    void endNearAnotherWireButBeyondTheJoinTolerance_isNeitherJoinedNorATJunction() {
-        // the stem stops 0.5 mm short of the bar: not touching (join tolerance 0.1 mm)
+    void endNearAnotherWireButBeyondTheJoinTolerance_isNeitherJoinedNorATJunction_butAGap() {
+        // the stem stops 0.5 mm short of the bar: not touching (join tolerance 0.1 mm), within the
+        // 5 mm gap limit, so a gap to the middle of the bar (closed form: 0.5 mm at (100, 0))
         PieceAnalysis r = run(List.of(Fixtures.line(W, "10", 0, 0, 200, 0), Fixtures.line(W, "11", 100, 0.5, 100, 80)));
-        assertEquals(List.of(), r.findings());
+        assertEquals(1, r.findings().size(), r.findings().toString());
+        assertEquals(FindingKind.GAP, r.findings().get(0).kind());
+        assertEquals(0.0005, r.findings().get(0).sizeM(), LEN_TOL_M);
         assertEquals(2, r.pieces().size());
     }
 

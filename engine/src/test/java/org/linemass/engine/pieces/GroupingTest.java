@@ -66,6 +66,73 @@ class GroupingTest {
         assertEquals(1, analyze(all, Fixtures.tol(), true).groups().size());
     }
 
+    /** Rotation about the x axis by {@code deg}, counter-clockwise seen from +x (closed form). */
+    private static Affine rotationX(double deg) {
+        double c = Math.cos(Math.toRadians(deg));
+        double s = Math.sin(Math.toRadians(deg));
+        return Affine.ofColumns(new Vec3(1, 0, 0), new Vec3(0, c, s), new Vec3(0, -s, c), Vec3.ZERO);
+    }
+
+    /**
+     * Two right-hand hooks (one turned within its plane, one traced backwards) and one left-hand
+     * hook, all drawn in the plane that {@code tilt} carries the x-y plane to.
+     */
+    private static List<Segment> handedHooks(Affine tilt) {
+        List<Segment> all = new ArrayList<>(Shapes.moved(Shapes.hook(RACK, 10), tilt));
+        all.addAll(Shapes.traced(Shapes.moved(Shapes.hook(RACK, 11), Shapes.place(70, 0.6, 0).andThen(tilt))));
+        all.addAll(Shapes.moved(Shapes.hook(RACK, 12), Affine.scale(-1, 1, 1).andThen(Shapes.place(-25, 0, 0.6))
+                .andThen(tilt)));
+        return all;
+    }
+
+    @Test
+    void mirrorImageHooksInTheXzPlane_groupOnlyWithMirrorGrouping() {
+        // rotation by 90 degrees about x carries the x-y plane to the x-z plane; the two right-hand
+        // hooks are congruent by a proper motion within that plane, the left-hand one only by a mirror
+        List<Segment> all = handedHooks(rotationX(90));
+        assertEquals(2, analyze(all, Fixtures.tol(), false).groups().size(), "right hand, left hand");
+        assertEquals(1, analyze(all, Fixtures.tol(), true).groups().size());
+    }
+
+    @Test
+    void mirrorImageHooksInATiltedPlane_groupOnlyWithMirrorGrouping() {
+        // a plane tilted 35 degrees about x, then turned 20 degrees about z: normal has no zero component
+        Affine tilt = rotationX(35).andThen(Affine.rotationZ(Math.toRadians(20)))
+                .andThen(Affine.translation(new Vec3(0.3, -0.2, 0.1)));
+        List<Segment> all = handedHooks(tilt);
+        PieceAnalysis r = analyze(all, Fixtures.tol(), false);
+        assertEquals(3, r.pieces().size());
+        assertEquals(2, r.groups().size(), "right hand, left hand: " + r.groups());
+        assertEquals(1, analyze(all, Fixtures.tol(), true).groups().size());
+    }
+
+    @Test
+    void hookSeenFromTheOtherSideOfItsPlane_isAMirrorImage() {
+        // by the canonical-normal convention the x-z plane is seen from +y; turning the plan hook by
+        // -90 degrees about x keeps +z on the +y side (same hand), by +90 degrees puts it on -y
+        // (seen from +y it is the other hand)
+        List<Segment> same = new ArrayList<>(Shapes.hook(RACK, 10));
+        same.addAll(Shapes.moved(Shapes.hook(RACK, 11), rotationX(-90).andThen(Shapes.place(0, 0.6, 0))));
+        assertEquals(1, analyze(same, Fixtures.tol(), false).groups().size());
+        List<Segment> other = new ArrayList<>(Shapes.hook(RACK, 10));
+        other.addAll(Shapes.moved(Shapes.hook(RACK, 11), rotationX(90).andThen(Shapes.place(0, 0.6, 0))));
+        assertEquals(2, analyze(other, Fixtures.tol(), false).groups().size());
+        assertEquals(1, analyze(other, Fixtures.tol(), true).groups().size());
+    }
+
+    @Test
+    void crankAndItsMirrorImage_turnedInSpace_groupOnlyWithMirrorGrouping() {
+        // a crank and a copy turned by proper rotations share a mark; its mirror image (x -> -x)
+        // turned the same way does not, unless mirror grouping is on
+        Affine turn = rotationX(50).andThen(Affine.rotationZ(Math.toRadians(110)));
+        List<Segment> all = new ArrayList<>(Shapes.crank(RACK, 10));
+        all.addAll(Shapes.moved(Shapes.crank(RACK, 11), turn.andThen(Affine.translation(new Vec3(0.6, 0, 0)))));
+        all.addAll(Shapes.moved(Shapes.crank(RACK, 12), Affine.scale(-1, 1, 1).andThen(turn)
+                .andThen(Affine.translation(new Vec3(0, 0.6, 0.3)))));
+        assertEquals(2, analyze(all, Fixtures.tol(), false).groups().size());
+        assertEquals(1, analyze(all, Fixtures.tol(), true).groups().size());
+    }
+
     @Test
     void bendMovedOneMicrometre_groupsOnlyUnderALooserTolerance() {
         List<Segment> all = new ArrayList<>(Shapes.ell(RACK, 10, new Vec3(0.1, 0, 0)));

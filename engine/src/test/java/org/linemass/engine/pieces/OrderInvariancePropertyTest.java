@@ -34,6 +34,16 @@ class OrderInvariancePropertyTest {
         }
         all.addAll(Shapes.moved(Shapes.ell("RACK", 200, new Vec3(0.1, 0, 0)), Shapes.place(10, 0, 1.0)));
         all.addAll(Shapes.moved(Shapes.ell("RACK", 201, new Vec3(0.1, 0, 0)), Shapes.place(190, 0.5, 1.5)));
+        // a gate bar and a cross wire stopping 2 mm short of its middle (a gap to a wire's middle),
+        // the cross wire aimed at the point where the bar is split in two
+        all.add(Fixtures.line("GATE", "300", 5000, 0, 5100, 0));
+        all.add(Fixtures.line("GATE", "301", 5100, 0, 5200, 0));
+        all.add(Fixtures.line("GATE", "302", 5100, 80, 5100, 2));
+        // an oval ring drawn twice: the second copy starts elsewhere (a duplicate drawn differently)
+        all.add(org.linemass.geometry.EllipticalArc.of(Fixtures.mm(5000, 500), Fixtures.mm(80, 0, 0),
+                Fixtures.mm(0, 40, 0), 0, 2 * Math.PI, Fixtures.src("OVAL", "310")));
+        all.add(org.linemass.geometry.EllipticalArc.of(Fixtures.mm(5000, 500), Fixtures.mm(80, 0, 0),
+                Fixtures.mm(0, 40, 0), 2, 2 + 2 * Math.PI, Fixtures.src("OVAL", "311")));
         return all;
     }
 
@@ -61,6 +71,20 @@ class OrderInvariancePropertyTest {
         }
         Collections.shuffle(out, rnd);
         return out;
+    }
+
+    @org.junit.jupiter.api.Test
+    void scene_holdsTheGapToAWiresMiddleAndTheOvalDrawnTwice() {
+        PieceAnalysis r = PieceAnalyzer.analyze(scene(), Fixtures.tol(),
+                Fixtures.sections("MESH_WIRE_D4", Fixtures.WIRE_D4), false);
+        // closed forms of the drawn coordinates: 2 mm short of (5100, 0) mm
+        assertEquals(1, r.findings().stream().filter(f -> f.kind().equals("gap") && f.layer().equals("GATE")
+                && Math.abs(f.sizeM() - 0.002) < 1e-12 && f.atM().distance(Fixtures.mm(5100, 0)) < 1e-12).count(),
+                r.findings().toString());
+        // one whole oval removed: Ramanujan's second approximation of the perimeter for semi-axes
+        // 80 and 40 mm is 0.3875379 m (relative error about 1e-10, so 1e-6 m is ample)
+        assertEquals(1, r.findings().stream().filter(f -> f.kind().equals("duplicate") && f.layer().equals("OVAL")
+                && Math.abs(f.sizeM() - 0.3875379) < 1e-6).count(), r.findings().toString());
     }
 
     @Property(tries = 150)

@@ -36,6 +36,16 @@ public final class GapCheck {
      */
     public static List<Finding> check(List<Segment> segments, int[] layerOf, boolean[] free, Vec3[] endPoint,
             int[] chainOf, double[] chainLength, Tolerances tol) {
+        return check(segments, layerOf, free, endPoint, chainOf, chainLength, tol, new boolean[free.length]);
+    }
+
+    /**
+     * As {@link #check(List, int[], boolean[], Vec3[], int[], double[], Tolerances)}, and marks in
+     * {@code reported} (one flag per end) every end that is part of a reported gap, so that
+     * {@link TeeGapCheck} does not report it again.
+     */
+    public static List<Finding> check(List<Segment> segments, int[] layerOf, boolean[] free, Vec3[] endPoint,
+            int[] chainOf, double[] chainLength, Tolerances tol, boolean[] reported) {
         List<Integer> ends = new ArrayList<>();
         for (int e = 0; e < free.length; e++) {
             if (free[e]) {
@@ -54,7 +64,7 @@ public final class GapCheck {
         }
         PointGrid grid = new PointGrid(xyz, group, tol.gapLimitM());
         double limit2 = tol.gapLimitM() * tol.gapLimitM();
-        Set<Long> reported = new HashSet<>();
+        Set<Long> pairsReported = new HashSet<>();
         List<Finding> out = new ArrayList<>();
         for (int k = 0; k < m; k++) {
             final int kk = k;
@@ -85,9 +95,11 @@ public final class GapCheck {
             }
             int a = Math.min(k, best[0]);
             int b = Math.max(k, best[0]);
-            if (!reported.add(((long) a << 32) | b)) {
+            if (!pairsReported.add(((long) a << 32) | b)) {
                 continue;
             }
+            reported[ends.get(a)] = true;
+            reported[ends.get(b)] = true;
             Vec3 pa = endPoint[ends.get(a)];
             Vec3 pb = endPoint[ends.get(b)];
             double d = pa.distance(pb);

@@ -25,8 +25,10 @@ import org.linemass.geometry.Vec3;
  * tolerance of each other's carrier line and whose projections overlap by more than the
  * tolerance, and circular arcs on the same circle (centres, radii and planes within the
  * tolerance), are clustered and resolved by {@link StraightOverlaps} and {@link ArcOverlaps}.
- * Elliptical arcs and splines are only checked for being identical (ends and three interior
- * points within the tolerance, either direction); the copy with the later source position goes.
+ * Elliptical arcs and splines are checked for being identical (ends and three interior points
+ * within the tolerance, either direction; the copy with the later source position goes) and then,
+ * when drawn differently (started elsewhere, split, another kind of curve), for lying wholly
+ * within the tolerance of another curve ({@link CurveCovers}).
  * Zero-length and shorter-than-tolerance segments are left alone (the size check reports them).
  */
 public final class Deduplicator {
@@ -91,6 +93,7 @@ public final class Deduplicator {
                 replacement.set(cluster.get(k), kept.get(k));
             }
         }
+        CurveCovers.find(segments, length, any, pairs, tolM, sections, replacement, removed, findings);
         List<Segment> out = new ArrayList<>(n);
         int[] origin = new int[n + removed.size() + 2 * clusters.size() + 16];
         for (int i = 0; i < n; i++) {

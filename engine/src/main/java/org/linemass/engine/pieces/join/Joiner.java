@@ -93,10 +93,9 @@ public final class Joiner {
                 sum = sum.plus(nodes.point[e]);
             }
             Vec3 at = sum.times(1.0 / size);
-            String message = size + " ends meet at " + Findings.at(at) + "; the run continues through the"
-                    + " straightest pair"
-                    + (size > EndPairing.MAX_PAIRED_ENDS ? " (not paired: too many ends)" : "")
-                    + " and the other ends start or stop separate pieces there.";
+            String message = size + " ends meet at " + Findings.at(at) + "; runs continue through the"
+                    + " straightest pairs turning by less than " + Findings.deg(EndPairing.MAX_BRANCH_TURN_DEG)
+                    + ", and the other ends start or stop separate pieces there.";
             findings.add(Findings.of(FindingKind.BRANCH, Severity.INFO, at, null, who.get(0).layer(), who, null,
                     message));
         }

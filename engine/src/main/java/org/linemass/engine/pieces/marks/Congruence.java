@@ -1,11 +1,14 @@
 package org.linemass.engine.pieces.marks;
 
 import java.util.List;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.RealMatrix;
+import org.apache.commons.math3.linear.SingularValueDecomposition;
 
 /** The geometric test of {@link Grouper}: one piece's samples against another's starts and directions. */
 final class Congruence {
 
-    /** Height of the lift point above a flat piece, in piece lengths (any size of that order works). */
+    /** Height of the lift point off a planar piece, in piece lengths (any size of that order works). */
     static final double LIFT_FRACTION = 0.5;
 
     private Congruence() {
@@ -22,16 +25,20 @@ final class Congruence {
         if (Grouper.samplesFor(other) != n) {
             return false;
         }
-        boolean flat = flatInPlan(leadSamples, tol) && flatInPlan(other.samples(0, n, false), tol);
+        // with mirror grouping every orthogonal map is allowed and the lift would only add the
+        // out-of-plane wobble of a nearly planar piece to the residual
+        double[] na = mirror ? null : planeNormal(leadSamples, tol);
+        double[] nb = na == null ? null : planeNormal(other.samples(0, n, false), tol);
+        boolean planar = na != null && nb != null;
         double lift = LIFT_FRACTION * lead.length();
-        double[][] a = flat ? lifted(leadSamples, lift) : leadSamples;
+        double[][] a = planar ? lifted(leadSamples, na, lift) : leadSamples;
         List<Double> starts = other.closed() ? other.runStarts() : List.of(0.0);
         int tries = Math.min(starts.size(), Grouper.MAX_LOOP_STARTS);
         for (int k = 0; k < tries; k++) {
             for (boolean reverse : new boolean[] {false, true}) {
                 double[][] b = other.samples(starts.get(k), n, reverse);
-                if (flat) {
-                    b = lifted(b, lift);
+                if (planar) {
+                    b = lifted(b, nb, lift);
                 }
                 if (RigidFit.maxDeviation(a, b, mirror) <= tol) {
                     return true;
@@ -41,49 +48,82 @@ final class Congruence {
         return false;
     }
 
-    /** Every sample at one height (within tol) and not all on one line. */
-    static boolean flatInPlan(double[][] p, double tol) {
-        double z = p[0][2];
+    /**
+     * The canonical unit normal of the plane the samples lie in, or null when they do not lie in
+     * one plane within {@code tol} or lie on one line within {@code tol}. The plane is the total
+     * least-squares fit (smallest singular vector of the centred samples' scatter matrix); the
+     * normal's sign makes its largest-magnitude component positive, components within
+     * {@link #NORMAL_TIE} of the largest counting as tied and then z before y before x (so a
+     * drawing in plan gets +z).
+     */
+    static double[] planeNormal(double[][] p, double tol) {
+        double[] c = centroid(p);
+        double[][] m = new double[3][3];
         for (double[] q : p) {
-            if (Math.abs(q[2] - z) > tol) {
-                return false;
+            for (int r = 0; r < 3; r++) {
+                for (int k = 0; k < 3; k++) {
+                    m[r][k] += (q[r] - c[r]) * (q[k] - c[k]);
+                }
             }
         }
-        double[] a = p[0];
-        double[] far = a;
-        double best = -1;
+        RealMatrix u = new SingularValueDecomposition(new Array2DRowRealMatrix(m, false)).getU();
+        double[] axis = u.getColumn(0);
+        double[] normal = u.getColumn(2);
+        double off = 0;
+        double wide = 0;
         for (double[] q : p) {
-            double d = Math.hypot(q[0] - a[0], q[1] - a[1]);
-            if (d > best) {
-                best = d;
-                far = q;
+            double[] d = {q[0] - c[0], q[1] - c[1], q[2] - c[2]};
+            off = Math.max(off, Math.abs(dot(d, normal)));
+            double along = dot(d, axis);
+            wide = Math.max(wide, Math.sqrt(Math.max(0, dot(d, d) - along * along)));
+        }
+        if (off > tol || !(wide > tol)) {
+            return null;
+        }
+        double big = Math.max(Math.abs(normal[0]), Math.max(Math.abs(normal[1]), Math.abs(normal[2])));
+        int lead = 0;
+        for (int k = 2; k >= 0; k--) {
+            if (Math.abs(normal[k]) >= big - NORMAL_TIE) {
+                lead = k;
+                break;
             }
         }
-        double dx = far[0] - a[0];
-        double dy = far[1] - a[1];
-        double len = Math.hypot(dx, dy);
-        if (!(len > 0)) {
-            return false;
-        }
-        for (double[] q : p) {
-            double off = Math.abs((q[0] - a[0]) * dy - (q[1] - a[1]) * dx) / len;
-            if (off > tol) {
-                return true;
+        if (normal[lead] < 0) {
+            for (int k = 0; k < 3; k++) {
+                normal[k] = -normal[k];
             }
         }
-        return false;
+        return normal;
     }
 
-    /** The samples plus one point {@code h} above their centroid. */
-    private static double[][] lifted(double[][] p, double h) {
+    /**
+     * Components of a unit normal closer than this to the largest are tied (dimensionless): far
+     * above the rounding of an SVD normal (about 1e-15), far below any tilt a drafter draws.
+     */
+    static final double NORMAL_TIE = 1e-9;
+
+    private static double dot(double[] a, double[] b) {
+        return a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
+    }
+
+    private static double[] centroid(double[][] p) {
         double[] c = new double[3];
         for (double[] q : p) {
             c[0] += q[0];
             c[1] += q[1];
             c[2] += q[2];
         }
+        for (int k = 0; k < 3; k++) {
+            c[k] /= p.length;
+        }
+        return c;
+    }
+
+    /** The samples plus one point {@code h} along {@code normal} from their centroid. */
+    private static double[][] lifted(double[][] p, double[] normal, double h) {
+        double[] c = centroid(p);
         double[][] out = java.util.Arrays.copyOf(p, p.length + 1);
-        out[p.length] = new double[] {c[0] / p.length, c[1] / p.length, c[2] / p.length + h};
+        out[p.length] = new double[] {c[0] + h * normal[0], c[1] + h * normal[1], c[2] + h * normal[2]};
         return out;
     }
 }

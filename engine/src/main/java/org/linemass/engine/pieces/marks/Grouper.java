@@ -16,11 +16,22 @@ import org.linemass.engine.pieces.Piece;
  * costs one comparison each. The comparison samples both pieces at equal arc-length steps
  * ({@link #samplesFor}) and fits a rigid motion (Kabsch); they match when the largest residual
  * is within {@link Tolerances#groupM()}, trying the other direction of travel and, for closed
- * pieces, each run start of the candidate as its starting point. Pieces flat in plan (every
- * sample at one height, not all on a line) carry a point above their centroid into the fit, so
- * turning one over counts as a mirror, which is only accepted with mirror grouping on; pieces in
- * other planes or in space are compared under every rigid motion in space.
- * Never groups on length alone: the length window only limits which pairs are compared.
+ * pieces, each run start of the candidate as its starting point.
+ *
+ * <p>Handedness, one rule for every plane: without mirror grouping a left-hand and a right-hand
+ * piece are different marks. A planar piece (every sample within the group tolerance of one
+ * plane, not all on one line) is compared keeping its orientation relative to the canonical
+ * normal of its plane: the unit normal whose largest-magnitude component is positive (ties, within
+ * {@link Congruence#NORMAL_TIE}, go to z, then y, then x; a drawing in plan gets +z). Each piece
+ * carries a point off its centroid along its own canonical normal into the fit, and the fit only
+ * uses proper rotations, so a planar piece and its mirror image, seen from the canonical side of
+ * their planes, are told apart in the x-y plane, the x-z plane or any tilted plane alike; turning a
+ * flat piece over counts as a mirror. A non-planar piece (a crank in space) is compared under
+ * proper rotations only (determinant +1), so its mirror image is a different mark. Straight
+ * pieces have no handedness. With mirror grouping on, improper fits are accepted too and mirror
+ * images share a mark. Our own convention; no source.
+ *
+ * <p>Never groups on length alone: the length window only limits which pairs are compared.
  */
 public final class Grouper {
 
