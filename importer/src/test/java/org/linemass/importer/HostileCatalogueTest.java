@@ -111,6 +111,7 @@ class HostileCatalogueTest {
             skipped("zero-scale-insert.dxf",
                     "line 33, INSERT (handle 71): scale factor is zero (41/42/43 = 1.0, 0.0, 1.0)"),
             read("huge-array.dxf"),
+            read("huge-array-of-empty-block.dxf"),
             read("block-bomb.dxf"),
             read("block-bomb-empty-leaf.dxf"),
             read("bad-utf8-r2018.dxf"),
