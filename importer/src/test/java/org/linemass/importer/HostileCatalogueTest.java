@@ -111,7 +111,9 @@ class HostileCatalogueTest {
             skipped("zero-scale-insert.dxf",
                     "line 33, INSERT (handle 71): scale factor is zero (41/42/43 = 1.0, 0.0, 1.0)"),
             read("huge-array.dxf"),
+            read("huge-array-of-empty-block.dxf"),
             read("block-bomb.dxf"),
+            read("block-bomb-empty-leaf.dxf"),
             read("bad-utf8-r2018.dxf"),
             new Case("polyline-over-vertex-limit.dxf", Outcome.SKIPPED,
                     List.of("line 5, POLYLINE (handle B0): has more than 4 vertices"), FOUR_VERTICES));
