@@ -24,7 +24,8 @@ final class LwPolylineConverter {
         }
         int flags = Values.integer(r, 70, 0, "flags");
         double elevation = Values.coordinate(r.num(38, 0), 38);
-        Affine ocs = Ocs.of(Values.extrusion(r));
+        Ocs.Frame frame = Ocs.frame(Values.extrusion(r));
+        Affine ocs = frame.map();
         int given = 0;
         for (int i = 0; i < r.size(); i++) {
             if (r.code(i) == 10) {
@@ -61,12 +62,12 @@ final class LwPolylineConverter {
         Vec3 a = first;
         for (int i = 0; i + 1 < count; i++) {
             Vec3 e = ocs.apply(new Vec3(xs[i + 1], ys[i + 1], elevation));
-            out.add(Bulge.piece(xs[i], ys[i], xs[i + 1], ys[i + 1], elevation, bs[i], ocs, p, a, e));
+            out.add(Bulge.piece(xs[i], ys[i], xs[i + 1], ys[i + 1], elevation, bs[i], frame, p, a, e));
             a = e;
         }
         if ((flags & 1) != 0 && count > 1) {
             int l = count - 1;
-            out.add(Bulge.piece(xs[l], ys[l], xs[0], ys[0], elevation, bs[l], ocs, p, a, first));
+            out.add(Bulge.piece(xs[l], ys[l], xs[0], ys[0], elevation, bs[l], frame, p, a, first));
         }
     }
 }

@@ -17,6 +17,29 @@ public final class Ocs {
     private Ocs() {
     }
 
+    /**
+     * The OCS of one extrusion direction with its world x axis, y axis and negated y axis, shared by
+     * the arcs built in it (they keep references to their axis vectors).
+     */
+    record Frame(Vec3 extrusion, Affine map, Vec3 x, Vec3 y, Vec3 minusY) {
+    }
+
+    /** The frame of the last extrusion asked for (an immutable value; drawings mostly use one). */
+    private static volatile Frame last = new Frame(Vec3.Z, Affine.IDENTITY, Vec3.X, Vec3.Y, Vec3.Y.negate());
+
+    /** {@link #of(Vec3)} with its axes, reusing the previous frame's objects for an equal extrusion. */
+    static Frame frame(Vec3 extrusion) throws EntitySkip {
+        Frame f = last;
+        if (f.extrusion().equals(extrusion)) {
+            return f;
+        }
+        Affine map = of(extrusion);
+        Vec3 y = map.applyLinear(Vec3.Y);
+        f = new Frame(extrusion, map, map.applyLinear(Vec3.X), y, y.negate());
+        last = f;
+        return f;
+    }
+
     /** OCS-to-world map; {@link EntitySkip} for a zero or non-finite direction. */
     public static Affine of(Vec3 extrusion) throws EntitySkip {
         double len = extrusion.norm();
