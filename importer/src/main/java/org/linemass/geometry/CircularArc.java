@@ -50,13 +50,19 @@ public final class CircularArc implements Segment {
             throw new IllegalArgumentException("arc parameter range must satisfy 0 < t1 - t0 <= 2 pi, got "
                     + t0 + " .. " + t1);
         }
-        Vec3 uu = u.unit();
-        if (uu.equals(u)) {
-            uu = u;
-        }
-        Vec3 vv = v.minus(uu.times(uu.dot(v))).unit();
-        if (vv.equals(v)) {
+        Vec3 uu = u.norm() == 1 ? u : u.unit();
+        // v minus its component along uu, normalised; v itself when that changes nothing
+        double d = uu.dot(v);
+        double wx = v.x() - uu.x() * d;
+        double wy = v.y() - uu.y() * d;
+        double wz = v.z() - uu.z() * d;
+        double n = Math.sqrt(wx * wx + wy * wy + wz * wz);
+        Vec3 vv;
+        if (n == 1 && Double.compare(wx, v.x()) == 0 && Double.compare(wy, v.y()) == 0
+                && Double.compare(wz, v.z()) == 0) {
             vv = v;
+        } else {
+            vv = new Vec3(wx, wy, wz).unit();
         }
         return new CircularArc(centre, radius, uu, vv, t0, t1, source);
     }

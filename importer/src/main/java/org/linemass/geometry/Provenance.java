@@ -12,16 +12,29 @@ import java.util.Objects;
  * <p>A value with the accessors, exact equality and text form of a record of those six
  * components. A handle in canonical form (1 to 16 upper-case hexadecimal digits without leading
  * zeros, as DXF writers emit them) is held as a number and its text rebuilt on request, so a large
- * drawing does not keep one string per entity; any other handle text is kept as given.
+ * drawing does not keep one string per entity; any other handle text is kept as given. File,
+ * layer, entity type and block path are held in a scope object shared with other provenances.
  */
 public final class Provenance {
 
     private static final int MAX_HEX_DIGITS = 16;
+    private static final byte[] HEX = "0123456789ABCDEF".getBytes(java.nio.charset.StandardCharsets.ISO_8859_1);
 
-    private final String file;
-    private final String layer;
-    private final String entityType;
-    private final List<String> blockPath;
+    /** Slots of the scope cache (a power of two). */
+    private static final int SCOPE_SLOTS = 256;
+
+    /**
+     * Recently used scopes, so the provenances of one file, layer, type and block path share one
+     * scope object. Direct-mapped and unsynchronised: a slot holds an immutable record, and a lost
+     * race only costs a duplicate scope. Bounded, so it keeps at most a few hundred small values.
+     */
+    private static final Scope[] SCOPES = new Scope[SCOPE_SLOTS];
+
+    /** The components many provenances have in common. */
+    private record Scope(String file, String layer, String entityType, List<String> blockPath) {
+    }
+
+    private final Scope scope;
     /** The handle text when it is not canonical hexadecimal, else null. */
     private final String handleText;
     private final long handleBits;
@@ -29,38 +42,54 @@ public final class Provenance {
 
     public Provenance(String file, String layer, int line, String handle, String entityType,
             List<String> blockPath) {
-        this.file = file;
-        this.layer = layer;
+        this.scope = scope(file, layer, entityType, List.copyOf(blockPath));
         this.line = line;
-        this.entityType = entityType;
-        this.blockPath = List.copyOf(blockPath);
         String h = handle == null ? "" : handle;
         long bits = canonicalHex(h);
         this.handleBits = bits;
         this.handleText = h.isEmpty() ? "" : bits < 0 && !isAllF(h) ? h : null;
     }
 
-    private Provenance(String file, String layer, int line, String handleText, long handleBits,
-            String entityType, List<String> blockPath) {
-        this.file = file;
-        this.layer = layer;
+    private Provenance(Scope scope, int line, String handleText, long handleBits) {
+        this.scope = scope;
         this.line = line;
         this.handleText = handleText;
         this.handleBits = handleBits;
-        this.entityType = entityType;
-        this.blockPath = blockPath;
+    }
+
+    private static Scope scope(String file, String layer, String entityType, List<String> blockPath) {
+        int h = 31 * (31 * (31 * Objects.hashCode(file) + Objects.hashCode(layer)) + Objects.hashCode(entityType))
+                + blockPath.hashCode();
+        int slot = (h ^ (h >>> 16)) & (SCOPE_SLOTS - 1);
+        Scope s = SCOPES[slot];
+        if (s != null && Objects.equals(s.file(), file) && Objects.equals(s.layer(), layer)
+                && Objects.equals(s.entityType(), entityType) && s.blockPath().equals(blockPath)) {
+            return s;
+        }
+        s = new Scope(file, layer, entityType, blockPath);
+        SCOPES[slot] = s;
+        return s;
     }
 
     public static Provenance of(String file, String layer, int line, String handle, String entityType) {
         return new Provenance(file, layer, line, handle, entityType, List.of());
     }
 
+    /**
+     * As {@link #of(String, String, int, String, String)} with the handle given by its value: the
+     * handle text is the value in upper-case hexadecimal without leading zeros (the value is read
+     * as unsigned, so -1 stands for sixteen F digits).
+     */
+    public static Provenance ofHandleValue(String file, String layer, int line, long handle, String entityType) {
+        return new Provenance(scope(file, layer, entityType, List.of()), line, null, handle);
+    }
+
     public String file() {
-        return file;
+        return scope.file();
     }
 
     public String layer() {
-        return layer;
+        return scope.layer();
     }
 
     public int line() {
@@ -69,39 +98,51 @@ public final class Provenance {
 
     /** The entity handle text ("" when the entity has none). */
     public String handle() {
-        return handleText != null ? handleText : Long.toHexString(handleBits).toUpperCase(java.util.Locale.ROOT);
+        if (handleText != null) {
+            return handleText;
+        }
+        byte[] digits = new byte[MAX_HEX_DIGITS];
+        int i = MAX_HEX_DIGITS;
+        long v = handleBits;
+        do {
+            digits[--i] = HEX[(int) (v & 0xF)];
+            v >>>= 4;
+        } while (v != 0);
+        return new String(digits, i, MAX_HEX_DIGITS - i, java.nio.charset.StandardCharsets.ISO_8859_1);
     }
 
     public String entityType() {
-        return entityType;
+        return scope.entityType();
     }
 
     public List<String> blockPath() {
-        return blockPath;
+        return scope.blockPath();
     }
 
     public Provenance withLayer(String newLayer) {
-        return new Provenance(file, newLayer, line, handleText, handleBits, entityType, blockPath);
+        return new Provenance(scope(scope.file(), newLayer, scope.entityType(), scope.blockPath()), line,
+                handleText, handleBits);
     }
 
     /** This provenance seen through one more block insert (the insert's block name goes first). */
     public Provenance throughBlock(String blockName) {
-        List<String> path = new java.util.ArrayList<>(blockPath.size() + 1);
+        List<String> path = new java.util.ArrayList<>(scope.blockPath().size() + 1);
         path.add(blockName);
-        path.addAll(blockPath);
-        return new Provenance(file, layer, line, handleText, handleBits, entityType, List.copyOf(path));
+        path.addAll(scope.blockPath());
+        return new Provenance(scope(scope.file(), scope.layer(), scope.entityType(), List.copyOf(path)), line,
+                handleText, handleBits);
     }
 
     /** Short human reference such as {@code line 120, handle 2F (LINE)}. */
     public String describe() {
         StringBuilder sb = new StringBuilder();
-        sb.append(entityType).append(" at line ").append(line);
+        sb.append(scope.entityType()).append(" at line ").append(line);
         String handle = handle();
         if (!handle.isEmpty()) {
             sb.append(", handle ").append(handle);
         }
-        if (!blockPath.isEmpty()) {
-            sb.append(", via block ").append(String.join(" > ", blockPath));
+        if (!scope.blockPath().isEmpty()) {
+            sb.append(", via block ").append(String.join(" > ", scope.blockPath()));
         }
         return sb.toString();
     }
@@ -109,21 +150,19 @@ public final class Provenance {
     @Override
     public boolean equals(Object o) {
         return o == this || o instanceof Provenance p && line == p.line && handleBits == p.handleBits
-                && Objects.equals(handleText, p.handleText) && Objects.equals(file, p.file)
-                && Objects.equals(layer, p.layer) && Objects.equals(entityType, p.entityType)
-                && blockPath.equals(p.blockPath);
+                && Objects.equals(handleText, p.handleText) && (scope == p.scope || scope.equals(p.scope));
     }
 
     @Override
     public int hashCode() {
-        int h = Objects.hash(file, layer, line, entityType, blockPath);
+        int h = 31 * scope.hashCode() + line;
         return 31 * h + (handleText != null ? handleText.hashCode() : Long.hashCode(handleBits));
     }
 
     @Override
     public String toString() {
-        return "Provenance[file=" + file + ", layer=" + layer + ", line=" + line + ", handle=" + handle()
-                + ", entityType=" + entityType + ", blockPath=" + blockPath + "]";
+        return "Provenance[file=" + scope.file() + ", layer=" + scope.layer() + ", line=" + line + ", handle="
+                + handle() + ", entityType=" + scope.entityType() + ", blockPath=" + scope.blockPath() + "]";
     }
 
     /**

@@ -28,18 +28,14 @@ final class Bulge {
 
     static Segment piece(double x1, double y1, double x2, double y2, double z, double b, Ocs.Frame ocs,
             Provenance p) {
-        Affine m = ocs.map();
-        return piece(x1, y1, x2, y2, z, b, ocs, p, m.apply(new Vec3(x1, y1, z)), m.apply(new Vec3(x2, y2, z)));
-    }
-
-    /** As above with the world end points already computed (shared between neighbouring pieces). */
-    static Segment piece(double x1, double y1, double x2, double y2, double z, double b, Ocs.Frame ocs,
-            Provenance p, Vec3 a, Vec3 e) {
+        if (Math.abs(b) < STRAIGHT_BULGE) {
+            return straight(x1, y1, x2, y2, z, ocs, p);
+        }
         double dx = x2 - x1;
         double dy = y2 - y1;
         double c = Math.hypot(dx, dy);
-        if (Math.abs(b) < STRAIGHT_BULGE || !(c > 0)) {
-            return new Straight(a, e, p);
+        if (!(c > 0)) {
+            return straight(x1, y1, x2, y2, z, ocs, p);
         }
         double ux = dx / c;
         double uy = dy / c;
@@ -52,5 +48,19 @@ final class Bulge {
         double t0 = b > 0 ? Math.atan2(y1 - cy, x1 - cx) : Math.atan2(cy - y1, x1 - cx);
         return CircularArc.of(ocs.map().apply(new Vec3(cx, cy, z)), r, ocs.x(), b > 0 ? ocs.y() : ocs.minusY(), t0,
                 t0 + sweep, p);
+    }
+
+    /**
+     * The straight between two OCS points. For the identity frame the world coordinates are the
+     * OCS ones plus 0.0, exactly what applying the identity map gives (it turns -0.0 into +0.0),
+     * without the intermediate vectors.
+     */
+    private static Straight straight(double x1, double y1, double x2, double y2, double z, Ocs.Frame ocs,
+            Provenance p) {
+        Affine m = ocs.map();
+        if (m == Affine.IDENTITY) {
+            return new Straight(x1 + 0.0, y1 + 0.0, z + 0.0, x2 + 0.0, y2 + 0.0, z + 0.0, p);
+        }
+        return new Straight(m.apply(new Vec3(x1, y1, z)), m.apply(new Vec3(x2, y2, z)), p);
     }
 }

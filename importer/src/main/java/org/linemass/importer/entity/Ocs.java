@@ -1,6 +1,7 @@
 package org.linemass.importer.entity;
 
 import org.linemass.geometry.Affine;
+import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Vec3;
 
 /**
@@ -25,7 +26,7 @@ public final class Ocs {
     }
 
     /** The frame of the last extrusion asked for (an immutable value; drawings mostly use one). */
-    private static volatile Frame last = new Frame(Vec3.Z, Affine.IDENTITY, Vec3.X, Vec3.Y, Vec3.Y.negate());
+    private static volatile Frame last = new Frame(Vec3.Z, Affine.IDENTITY, Vec3.X, Vec3.Y, new Vec3(0, -1, 0));
 
     /** {@link #of(Vec3)} with its axes, reusing the previous frame's objects for an equal extrusion. */
     static Frame frame(Vec3 extrusion) throws EntitySkip {
@@ -34,8 +35,11 @@ public final class Ocs {
             return f;
         }
         Affine map = of(extrusion);
-        Vec3 y = map.applyLinear(Vec3.Y);
-        f = new Frame(extrusion, map, map.applyLinear(Vec3.X), y, y.negate());
+        // axes as the arc factory normalises them, so arcs built on them keep these very objects
+        Vec3 x = map.applyLinear(Vec3.X);
+        CircularArc plus = CircularArc.of(Vec3.ZERO, 1, x, map.applyLinear(Vec3.Y), 0, 1, null);
+        CircularArc minus = CircularArc.of(Vec3.ZERO, 1, plus.u(), map.applyLinear(Vec3.Y).negate(), 0, 1, null);
+        f = new Frame(extrusion, map, plus.u(), plus.v(), minus.v());
         last = f;
         return f;
     }

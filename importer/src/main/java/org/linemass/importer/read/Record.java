@@ -12,7 +12,10 @@ public final class Record {
 
     String type = "";
     long position;
+    /** The handle text, or null while it is held as {@link #handleBits} and not yet asked for. */
     String handle = "";
+    /** The handle's value when it is canonical hexadecimal, else -1 (see {@link GroupSource#hexValue()}). */
+    long handleBits = -1;
     String layer = "0";
     int n;
     int[] codes = new int[64];
@@ -36,6 +39,7 @@ public final class Record {
         n = 0;
         ns = 0;
         handle = "";
+        handleBits = -1;
         layer = "0";
         badPosition = -1;
         endOfInput = false;
@@ -74,8 +78,27 @@ public final class Record {
         return position;
     }
 
+    /** The entity handle text ("" when the record has none). */
     public String handle() {
+        if (handle == null) {
+            handle = hexText(handleBits);
+        }
         return handle;
+    }
+
+    /** True when the handle is canonical hexadecimal, so {@link #handleValue()} stands for it. */
+    public boolean numericHandle() {
+        return handleBits != -1;
+    }
+
+    /** The handle's value when {@link #numericHandle()}, else -1. */
+    public long handleValue() {
+        return handleBits;
+    }
+
+    /** Upper-case hexadecimal text of a handle value. */
+    public static String hexText(long value) {
+        return Long.toHexString(value).toUpperCase(java.util.Locale.ROOT);
     }
 
     public String layer() {

@@ -96,7 +96,7 @@ public final class RecordReader {
     }
 
     private DxfInputException withContext(DxfInputException e, Record rec) {
-        return src.error(src.lastErrorPosition(), rec.type, rec.handle, e.problem());
+        return src.error(src.lastErrorPosition(), rec.type, rec.handle(), e.problem());
     }
 
     /**
@@ -143,8 +143,16 @@ public final class RecordReader {
                     s = src.pooledValue().trim();
                     rec.layer = s;
                 } else if (code == 5) {
-                    s = src.stringValue().trim();
-                    rec.handle = s;
+                    long v = src.hexValue();
+                    if (v != -1) {
+                        // held as a number: no string per entity unless someone asks for it
+                        rec.handleBits = v;
+                        rec.handle = null;
+                    } else {
+                        s = src.stringValue().trim();
+                        rec.handle = s;
+                        rec.handleBits = -1;
+                    }
                 } else if (code == 2 || code == 9 || code == 100) {
                     s = src.pooledValue().trim();
                 } else if (code >= 1 && code <= 7) {
