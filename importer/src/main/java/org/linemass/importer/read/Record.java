@@ -18,6 +18,10 @@ public final class Record {
     long handleBits = -1;
     String layer = "0";
     int n;
+    /** Codes below this have their first group index in {@link #first} (covers every DXF code). */
+    private static final int INDEXED_CODES = 1072;
+    /** Index of the first group of each code below {@link #INDEXED_CODES}, -1 when absent. */
+    private final int[] first = newFirst();
     int[] codes = new int[64];
     /** Numeric value, or for a decoded string the index into {@link #strs}; NaN when absent. */
     double[] nums = new double[64];
@@ -32,7 +36,19 @@ public final class Record {
     boolean lwpolyline;
     boolean manyGroups;
 
+    private static int[] newFirst() {
+        int[] f = new int[INDEXED_CODES];
+        Arrays.fill(f, -1);
+        return f;
+    }
+
     void clear() {
+        for (int i = 0; i < n; i++) {
+            int c = codes[i];
+            if (c >= 0 && c < INDEXED_CODES) {
+                first[c] = -1;
+            }
+        }
         if (ns > 0) {
             Arrays.fill(strs, 0, ns, null);
         }
@@ -53,6 +69,9 @@ public final class Record {
         }
         codes[n] = code;
         nums[n] = num;
+        if (code >= 0 && code < INDEXED_CODES && first[code] < 0) {
+            first[code] = n;
+        }
         n++;
     }
 
@@ -139,7 +158,7 @@ public final class Record {
     }
 
     public int indexOf(int code) {
-        return indexOf(code, 0);
+        return code >= 0 && code < INDEXED_CODES ? first[code] : indexOf(code, 0);
     }
 
     public double num(int code, double dflt) {
