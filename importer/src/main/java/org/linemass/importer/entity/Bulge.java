@@ -12,7 +12,8 @@ import org.linemass.geometry.Vec3;
  * tan(theta / 4) (FACTS.md §7.5): b = 0 is straight, b > 0 an arc counter-clockwise about the
  * OCS z axis, b < 0 clockwise. Chord c, radius r = c (1 + b^2) / (4 |b|), centre on the left
  * normal at signed distance c (1 - b^2) / (4 b) from the chord midpoint. The piece is mapped to
- * the world by {@code ocs}.
+ * the world by {@code ocs}; an arc's u and v are the frame's x axis and (b > 0) y axis or (b < 0)
+ * negated y axis, so all arcs of one frame share them, and t0 is the start vertex's angle.
  */
 final class Bulge {
 
@@ -25,19 +26,16 @@ final class Bulge {
     private Bulge() {
     }
 
-    static Segment piece(double x1, double y1, double x2, double y2, double z, double b, Affine ocs,
+    static Segment piece(double x1, double y1, double x2, double y2, double z, double b, Ocs.Frame ocs,
             Provenance p) {
-        return piece(x1, y1, x2, y2, z, b, ocs, p, ocs.apply(new Vec3(x1, y1, z)), ocs.apply(new Vec3(x2, y2, z)));
-    }
-
-    /** As above with the world end points already computed (shared between neighbouring pieces). */
-    static Segment piece(double x1, double y1, double x2, double y2, double z, double b, Affine ocs,
-            Provenance p, Vec3 a, Vec3 e) {
+        if (Math.abs(b) < STRAIGHT_BULGE) {
+            return straight(x1, y1, x2, y2, z, ocs, p);
+        }
         double dx = x2 - x1;
         double dy = y2 - y1;
         double c = Math.hypot(dx, dy);
-        if (Math.abs(b) < STRAIGHT_BULGE || !(c > 0)) {
-            return new Straight(a, e, p);
+        if (!(c > 0)) {
+            return straight(x1, y1, x2, y2, z, ocs, p);
         }
         double ux = dx / c;
         double uy = dy / c;
@@ -46,9 +44,23 @@ final class Bulge {
         double cy = 0.5 * (y1 + y2) + h * ux;
         double r = c * (1 + b * b) / (4 * Math.abs(b));
         double sweep = 4 * Math.atan(Math.abs(b));
-        Vec3 u = new Vec3(x1 - cx, y1 - cy, 0).unit();
-        Vec3 v = b > 0 ? new Vec3(-u.y(), u.x(), 0) : new Vec3(u.y(), -u.x(), 0);
-        return CircularArc.of(ocs.apply(new Vec3(cx, cy, z)), r, ocs.applyLinear(u), ocs.applyLinear(v), 0,
-                sweep, p);
+        // u = OCS x and v = +-OCS y (shared axis objects); t0 is the start vertex's angle in that frame
+        double t0 = b > 0 ? Math.atan2(y1 - cy, x1 - cx) : Math.atan2(cy - y1, x1 - cx);
+        return CircularArc.of(ocs.map().apply(new Vec3(cx, cy, z)), r, ocs.x(), b > 0 ? ocs.y() : ocs.minusY(), t0,
+                t0 + sweep, p);
+    }
+
+    /**
+     * The straight between two OCS points. For the identity frame the world coordinates are the
+     * OCS ones plus 0.0, exactly what applying the identity map gives (it turns -0.0 into +0.0),
+     * without the intermediate vectors.
+     */
+    private static Straight straight(double x1, double y1, double x2, double y2, double z, Ocs.Frame ocs,
+            Provenance p) {
+        Affine m = ocs.map();
+        if (m == Affine.IDENTITY) {
+            return new Straight(x1 + 0.0, y1 + 0.0, z + 0.0, x2 + 0.0, y2 + 0.0, z + 0.0, p);
+        }
+        return new Straight(m.apply(new Vec3(x1, y1, z)), m.apply(new Vec3(x2, y2, z)), p);
     }
 }

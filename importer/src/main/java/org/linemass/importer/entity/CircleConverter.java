@@ -29,7 +29,8 @@ final class CircleConverter {
         if (!(radius > 0)) {
             throw new EntitySkip((arc ? "ARC" : "CIRCLE") + " radius must be positive, got " + radius);
         }
-        Affine ocs = Ocs.of(Values.extrusion(r));
+        Ocs.Frame frame = Ocs.frame(Values.extrusion(r));
+        Affine ocs = frame.map();
         double t0 = 0;
         double t1 = 2 * Math.PI;
         if (arc) {
@@ -53,6 +54,6 @@ final class CircleConverter {
             t0 = Math.toRadians(s);
             t1 = t0 + Math.toRadians(sweep);
         }
-        out.add(CircularArc.of(ocs.apply(c), radius, ocs.applyLinear(Vec3.X), ocs.applyLinear(Vec3.Y), t0, t1, p));
+        out.add(CircularArc.of(ocs.apply(c), radius, frame.x(), frame.y(), t0, t1, p));
     }
 }

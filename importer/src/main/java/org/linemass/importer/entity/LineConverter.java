@@ -13,6 +13,8 @@ final class LineConverter {
     }
 
     static void convert(Record r, Provenance p, List<Segment> out) throws EntitySkip {
-        out.add(new Straight(Values.point(r, 10), Values.point(r, 11), p));
+        out.add(new Straight(Values.coordinate(r.num(10, 0), 10), Values.coordinate(r.num(20, 0), 20),
+                Values.coordinate(r.num(30, 0), 30), Values.coordinate(r.num(11, 0), 11),
+                Values.coordinate(r.num(21, 0), 21), Values.coordinate(r.num(31, 0), 31), p));
     }
 }

@@ -1,10 +1,8 @@
 package org.linemass.importer.entity;
 
 import java.util.List;
-import org.linemass.geometry.Affine;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
-import org.linemass.geometry.Vec3;
 import org.linemass.importer.read.Record;
 
 /**
@@ -24,7 +22,7 @@ final class LwPolylineConverter {
         }
         int flags = Values.integer(r, 70, 0, "flags");
         double elevation = Values.coordinate(r.num(38, 0), 38);
-        Affine ocs = Ocs.of(Values.extrusion(r));
+        Ocs.Frame frame = Ocs.frame(Values.extrusion(r));
         int given = 0;
         for (int i = 0; i < r.size(); i++) {
             if (r.code(i) == 10) {
@@ -34,39 +32,58 @@ final class LwPolylineConverter {
         if (given != declared) {
             throw new EntitySkip("declares " + declared + " vertices but has " + given);
         }
-        double[] xs = new double[Math.max(declared, 1)];
-        double[] ys = new double[xs.length];
-        double[] bs = new double[xs.length];
-        int k = -1;
+        // validate every value before the first piece, then emit pieces straight from the record
+        boolean seen = false;
         for (int i = 0; i < r.size(); i++) {
             int code = r.code(i);
             if (code == 10) {
-                k++;
-                if (k >= declared) {
-                    throw new EntitySkip("declares " + declared + " vertices but has more");
-                }
-                xs[k] = Values.coordinate(r.num(i), 10);
-            } else if (k >= 0 && code == 20) {
-                ys[k] = Values.coordinate(r.num(i), 20);
-            } else if (k >= 0 && code == 42) {
-                bs[k] = Values.real(r.num(i), 42, "bulge");
+                seen = true;
+                Values.coordinate(r.num(i), 10);
+            } else if (seen && code == 20) {
+                Values.coordinate(r.num(i), 20);
+            } else if (seen && code == 42) {
+                Values.real(r.num(i), 42, "bulge");
             }
         }
-        int count = k + 1;
-        if (count != declared) {
-            throw new EntitySkip("declares " + declared + " vertices but has " + count);
+        if (declared < 2) {
+            return;
         }
-        // neighbouring pieces share their joint point objects (less memory, exact same coordinates)
-        Vec3 first = count > 0 ? ocs.apply(new Vec3(xs[0], ys[0], elevation)) : null;
-        Vec3 a = first;
-        for (int i = 0; i + 1 < count; i++) {
-            Vec3 e = ocs.apply(new Vec3(xs[i + 1], ys[i + 1], elevation));
-            out.add(Bulge.piece(xs[i], ys[i], xs[i + 1], ys[i + 1], elevation, bs[i], ocs, p, a, e));
-            a = e;
+        double x0 = 0;
+        double y0 = 0;
+        double px = 0;
+        double py = 0;
+        double pb = 0;
+        double x = 0;
+        double y = 0;
+        double b = 0;
+        int k = -1;
+        for (int i = 0; i <= r.size(); i++) {
+            int code = i < r.size() ? r.code(i) : 10;
+            if (code == 10) {
+                // the vertex read so far is complete: keep the first, emit the piece that ends in it
+                if (k == 0) {
+                    x0 = x;
+                    y0 = y;
+                } else if (k > 0) {
+                    out.add(Bulge.piece(px, py, x, y, elevation, pb, frame, p));
+                }
+                px = x;
+                py = y;
+                pb = b;
+                k++;
+                if (i < r.size()) {
+                    x = r.num(i);
+                    y = 0;
+                    b = 0;
+                }
+            } else if (k >= 0 && code == 20) {
+                y = r.num(i);
+            } else if (k >= 0 && code == 42) {
+                b = r.num(i);
+            }
         }
-        if ((flags & 1) != 0 && count > 1) {
-            int l = count - 1;
-            out.add(Bulge.piece(xs[l], ys[l], xs[0], ys[0], elevation, bs[l], ocs, p, a, first));
+        if ((flags & 1) != 0) {
+            out.add(Bulge.piece(px, py, x0, y0, elevation, pb, frame, p));
         }
     }
 }

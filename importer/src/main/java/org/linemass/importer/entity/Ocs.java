@@ -1,6 +1,7 @@
 package org.linemass.importer.entity;
 
 import org.linemass.geometry.Affine;
+import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Vec3;
 
 /**
@@ -15,6 +16,32 @@ public final class Ocs {
     private static final double ARBITRARY_AXIS_CAP = 1.0 / 64.0;
 
     private Ocs() {
+    }
+
+    /**
+     * The OCS of one extrusion direction with its world x axis, y axis and negated y axis, shared by
+     * the arcs built in it (they keep references to their axis vectors).
+     */
+    record Frame(Vec3 extrusion, Affine map, Vec3 x, Vec3 y, Vec3 minusY) {
+    }
+
+    /** The frame of the last extrusion asked for (an immutable value; drawings mostly use one). */
+    private static volatile Frame last = new Frame(Vec3.Z, Affine.IDENTITY, Vec3.X, Vec3.Y, new Vec3(0, -1, 0));
+
+    /** {@link #of(Vec3)} with its axes, reusing the previous frame's objects for an equal extrusion. */
+    static Frame frame(Vec3 extrusion) throws EntitySkip {
+        Frame f = last;
+        if (f.extrusion().equals(extrusion)) {
+            return f;
+        }
+        Affine map = of(extrusion);
+        // axes as the arc factory normalises them, so arcs built on them keep these very objects
+        Vec3 x = map.applyLinear(Vec3.X);
+        CircularArc plus = CircularArc.of(Vec3.ZERO, 1, x, map.applyLinear(Vec3.Y), 0, 1, null);
+        CircularArc minus = CircularArc.of(Vec3.ZERO, 1, plus.u(), map.applyLinear(Vec3.Y).negate(), 0, 1, null);
+        f = new Frame(extrusion, map, plus.u(), plus.v(), minus.v());
+        last = f;
+        return f;
     }
 
     /** OCS-to-world map; {@link EntitySkip} for a zero or non-finite direction. */

@@ -2,7 +2,6 @@ package org.linemass.importer.entity;
 
 import java.util.Arrays;
 import java.util.List;
-import org.linemass.geometry.Affine;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Straight;
@@ -121,7 +120,7 @@ public final class PolylineBuilder {
             }
             return;
         }
-        Affine ocs = Ocs.of(extrusion);
+        Ocs.Frame ocs = Ocs.frame(extrusion);
         boolean splineFit = (flags & SPLINE_FIT) != 0;
         for (int i = 0; i + 1 < m; i++) {
             int a = use[i];

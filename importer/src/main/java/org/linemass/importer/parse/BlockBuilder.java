@@ -16,7 +16,8 @@ final class BlockBuilder {
 
     final String name;
     Vec3 basePoint;
-    final List<Segment> segments = new ArrayList<>();
+    /** Chunked: no growth copies however many segments a block collects. */
+    final List<Segment> segments = new ChunkedList<>();
     final List<InsertSpec> insertSpecs = new ArrayList<>();
     final List<Insert> inserts = new ArrayList<>();
     private final Map<String, int[]> curveCounts = new HashMap<>();

@@ -118,9 +118,19 @@ public final class DrawingReader {
 
     private Record nextInSection(String section, long lastPos, String lastType, String lastHandle)
             throws DxfInputException, IOException {
+        return nextInSection(section, lastPos, lastType, lastHandle, -1);
+    }
+
+    /**
+     * As above with the last record's handle as text, or when that is null as its value (so the
+     * entity loops keep no handle string per record).
+     */
+    private Record nextInSection(String section, long lastPos, String lastType, String lastHandle,
+            long lastHandleValue) throws DxfInputException, IOException {
         Record r = in.next();
         if (r == null || r.type().equals("EOF")) {
-            throw src.error(lastPos, lastType, lastHandle, "file ends inside the " + section
+            String handle = lastHandle != null ? lastHandle : Record.hexText(lastHandleValue);
+            throw src.error(lastPos, lastType, handle, "file ends inside the " + section
                     + " section (0 ENDSEC missing)");
         }
         return r;
@@ -232,8 +242,9 @@ public final class DrawingReader {
         long pos = r.position();
         String type = r.type();
         String handle = r.handle();
+        long handleValue = -1;
         while (true) {
-            Record e = nextInSection("BLOCKS", pos, type, handle);
+            Record e = nextInSection("BLOCKS", pos, type, handle, handleValue);
             if (e.type().equals("ENDBLK")) {
                 return;
             }
@@ -242,7 +253,8 @@ public final class DrawingReader {
             }
             pos = e.position();
             type = e.type();
-            handle = e.handle();
+            handleValue = e.handleValue();
+            handle = e.numericHandle() ? null : e.handle();
             handler.handle(e, in, target);
         }
     }
@@ -252,14 +264,16 @@ public final class DrawingReader {
         long pos = 0;
         String type = "SECTION";
         String handle = "";
+        long handleValue = -1;
         while (true) {
-            Record e = nextInSection("ENTITIES", pos, type, handle);
+            Record e = nextInSection("ENTITIES", pos, type, handle, handleValue);
             if (e.type().equals("ENDSEC")) {
                 return;
             }
             pos = e.position();
             type = e.type();
-            handle = e.handle();
+            handleValue = e.handleValue();
+            handle = e.numericHandle() ? null : e.handle();
             handler.handle(e, in, e.num(67, 0) == 1 ? null : model);
         }
     }

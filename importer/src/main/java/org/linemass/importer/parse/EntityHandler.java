@@ -41,13 +41,12 @@ final class EntityHandler {
         boolean paper = target == null;
         int line = lineOf(r.position());
         String layer = r.layer();
-        String handle = r.handle();
         if (type.equals("POLYLINE")) {
-            handlePolyline(r, in, paper ? null : target, Provenance.of(file, layer, line, handle, type));
+            handlePolyline(r, in, paper ? null : target, provenance(r, layer, line, type));
             return;
         }
         if (type.equals("INSERT")) {
-            Provenance p = Provenance.of(file, layer, line, handle, type);
+            Provenance p = provenance(r, layer, line, type);
             boolean attribs = r.num(66, 0) == 1;
             if (paper) {
                 paperSpaceEntities++;
@@ -75,7 +74,7 @@ final class EntityHandler {
             target.countOther(type.isEmpty() ? "(unnamed)" : type);
             return;
         }
-        Provenance p = Provenance.of(file, layer, line, handle, type);
+        Provenance p = provenance(r, layer, line, type);
         if (r.hasBadValue()) {
             skip(p, badValue(r));
             return;
@@ -84,8 +83,14 @@ final class EntityHandler {
             Converters.convert(r, p, options.maxVertices(), options.maxControlPoints(), target.segments);
             target.countCurve(type);
         } catch (EntitySkip e) {
-            notes.add(Notes.of("error", "skipped_entity", file, line, type, handle, layer, e.getMessage()));
+            notes.add(Notes.of("error", "skipped_entity", file, line, type, r.handle(), layer, e.getMessage()));
         }
+    }
+
+    /** The provenance of record {@code r}, without a handle string when the handle is a number. */
+    private Provenance provenance(Record r, String layer, int line, String type) {
+        return r.numericHandle() ? Provenance.ofHandleValue(file, layer, line, r.handleValue(), type)
+                : Provenance.of(file, layer, line, r.handle(), type);
     }
 
     private void handlePolyline(Record r, RecordStream in, BlockBuilder target, Provenance p)

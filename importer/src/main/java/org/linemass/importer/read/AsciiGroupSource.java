@@ -253,6 +253,20 @@ public final class AsciiGroupSource extends GroupSource {
     }
 
     @Override
+    public long hexValue() {
+        byte[] b = w.buf;
+        int s = lineStart;
+        int e = lineEnd;
+        while (s < e && (b[s] & 0xff) <= ' ') {
+            s++;
+        }
+        while (e > s && (b[e - 1] & 0xff) <= ' ') {
+            e--;
+        }
+        return hex(b, s, e);
+    }
+
+    @Override
     public String valueExcerpt() {
         return excerpt();
     }

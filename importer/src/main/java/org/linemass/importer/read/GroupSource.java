@@ -46,6 +46,39 @@ public abstract class GroupSource {
     /** The current value decoded through a small pool, for names that repeat (types, layers). */
     public abstract String pooledValue();
 
+    /**
+     * The current value as a handle number when its text, blanks around it ignored, is canonical
+     * upper-case hexadecimal (1 to 16 digits, no leading zero); -1 for any other text, including
+     * sixteen F digits (whose value is -1), which callers then keep as text.
+     */
+    public long hexValue() {
+        String t = stringValue().trim();
+        byte[] b = t.getBytes(java.nio.charset.StandardCharsets.ISO_8859_1);
+        return t.length() == b.length ? hex(b, 0, b.length) : -1;
+    }
+
+    /** {@link #hexValue()} of the bytes [s, e). */
+    static long hex(byte[] b, int s, int e) {
+        int n = e - s;
+        if (n == 0 || n > Long.BYTES * 2 || (b[s] == '0' && n > 1)) {
+            return -1;
+        }
+        long v = 0;
+        for (int i = s; i < e; i++) {
+            int c = b[i];
+            int d;
+            if (c >= '0' && c <= '9') {
+                d = c - '0';
+            } else if (c >= 'A' && c <= 'F') {
+                d = c - ('A' - 10);
+            } else {
+                return -1;
+            }
+            v = (v << 4) | d;
+        }
+        return v;
+    }
+
     /** A short printable excerpt of the raw value for error messages. */
     public abstract String valueExcerpt();
 

@@ -12,9 +12,16 @@ public final class Record {
 
     String type = "";
     long position;
+    /** The handle text, or null while it is held as {@link #handleBits} and not yet asked for. */
     String handle = "";
+    /** The handle's value when it is canonical hexadecimal, else -1 (see {@link GroupSource#hexValue()}). */
+    long handleBits = -1;
     String layer = "0";
     int n;
+    /** Codes below this have their first group index in {@link #first} (covers every DXF code). */
+    private static final int INDEXED_CODES = 1072;
+    /** Index of the first group of each code below {@link #INDEXED_CODES}, -1 when absent. */
+    private final int[] first = newFirst();
     int[] codes = new int[64];
     /** Numeric value, or for a decoded string the index into {@link #strs}; NaN when absent. */
     double[] nums = new double[64];
@@ -29,13 +36,26 @@ public final class Record {
     boolean lwpolyline;
     boolean manyGroups;
 
+    private static int[] newFirst() {
+        int[] f = new int[INDEXED_CODES];
+        Arrays.fill(f, -1);
+        return f;
+    }
+
     void clear() {
+        for (int i = 0; i < n; i++) {
+            int c = codes[i];
+            if (c >= 0 && c < INDEXED_CODES) {
+                first[c] = -1;
+            }
+        }
         if (ns > 0) {
             Arrays.fill(strs, 0, ns, null);
         }
         n = 0;
         ns = 0;
         handle = "";
+        handleBits = -1;
         layer = "0";
         badPosition = -1;
         endOfInput = false;
@@ -49,6 +69,9 @@ public final class Record {
         }
         codes[n] = code;
         nums[n] = num;
+        if (code >= 0 && code < INDEXED_CODES && first[code] < 0) {
+            first[code] = n;
+        }
         n++;
     }
 
@@ -74,8 +97,27 @@ public final class Record {
         return position;
     }
 
+    /** The entity handle text ("" when the record has none). */
     public String handle() {
+        if (handle == null) {
+            handle = hexText(handleBits);
+        }
         return handle;
+    }
+
+    /** True when the handle is canonical hexadecimal, so {@link #handleValue()} stands for it. */
+    public boolean numericHandle() {
+        return handleBits != -1;
+    }
+
+    /** The handle's value when {@link #numericHandle()}, else -1. */
+    public long handleValue() {
+        return handleBits;
+    }
+
+    /** Upper-case hexadecimal text of a handle value. */
+    public static String hexText(long value) {
+        return Long.toHexString(value).toUpperCase(java.util.Locale.ROOT);
     }
 
     public String layer() {
@@ -116,7 +158,7 @@ public final class Record {
     }
 
     public int indexOf(int code) {
-        return indexOf(code, 0);
+        return code >= 0 && code < INDEXED_CODES ? first[code] : indexOf(code, 0);
     }
 
     public double num(int code, double dflt) {

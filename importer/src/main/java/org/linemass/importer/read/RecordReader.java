@@ -23,6 +23,17 @@ public final class RecordReader {
      */
     private static final int SMALL_RECORD_GROUPS = 4096;
 
+    private static final int SUBCLASS_MARKERS = 1;
+    private static final int KEEP_ALL = 2;
+    private static final int LWPOLYLINE = 4;
+    private static final int MANY_GROUPS = 8;
+    /** Slots of the type-flag cache (a power of two). */
+    private static final int TYPE_SLOTS = 16;
+
+    /** Recent record types (pooled strings, compared by identity) and their flags. */
+    private final String[] cachedTypes = new String[TYPE_SLOTS];
+    private final int[] cachedFlags = new int[TYPE_SLOTS];
+
     private final GroupSource src;
     private final int maxGroups;
     private boolean started;
@@ -57,12 +68,11 @@ public final class RecordReader {
         rec.clear();
         rec.type = src.pooledValue().trim();
         rec.position = src.position();
-        // subclass markers matter only where one record holds two subclasses with clashing codes
-        rec.keepSubclassMarkers = rec.type.equals("HELIX");
-        rec.keepAll = !IDENTITY_ONLY.contains(rec.type);
-        rec.lwpolyline = rec.type.equals("LWPOLYLINE");
-        rec.manyGroups = rec.lwpolyline || rec.keepSubclassMarkers || rec.type.equals("SPLINE")
-                || rec.type.equals("SECTION");
+        int flags = typeFlags(rec.type);
+        rec.keepSubclassMarkers = (flags & SUBCLASS_MARKERS) != 0;
+        rec.keepAll = (flags & KEEP_ALL) != 0;
+        rec.lwpolyline = (flags & LWPOLYLINE) != 0;
+        rec.manyGroups = (flags & MANY_GROUPS) != 0;
         if (rec.type.equals("EOF")) {
             // nothing after EOF is read: trailing bytes may be anything
             atEnd = true;
@@ -95,8 +105,25 @@ public final class RecordReader {
         }
     }
 
+    /** How a record of {@code type} is kept; cached, as the same few types repeat. */
+    private int typeFlags(String type) {
+        int slot = type.hashCode() & (TYPE_SLOTS - 1);
+        if (cachedTypes[slot] == type) {
+            return cachedFlags[slot];
+        }
+        // subclass markers matter only where one record holds two subclasses with clashing codes
+        boolean helix = type.equals("HELIX");
+        boolean lw = type.equals("LWPOLYLINE");
+        int flags = (helix ? SUBCLASS_MARKERS : 0) | (IDENTITY_ONLY.contains(type) ? 0 : KEEP_ALL)
+                | (lw ? LWPOLYLINE : 0)
+                | (lw || helix || type.equals("SPLINE") || type.equals("SECTION") ? MANY_GROUPS : 0);
+        cachedTypes[slot] = type;
+        cachedFlags[slot] = flags;
+        return flags;
+    }
+
     private DxfInputException withContext(DxfInputException e, Record rec) {
-        return src.error(src.lastErrorPosition(), rec.type, rec.handle, e.problem());
+        return src.error(src.lastErrorPosition(), rec.type, rec.handle(), e.problem());
     }
 
     /**
@@ -143,8 +170,16 @@ public final class RecordReader {
                     s = src.pooledValue().trim();
                     rec.layer = s;
                 } else if (code == 5) {
-                    s = src.stringValue().trim();
-                    rec.handle = s;
+                    long v = src.hexValue();
+                    if (v != -1) {
+                        // held as a number: no string per entity unless someone asks for it
+                        rec.handleBits = v;
+                        rec.handle = null;
+                    } else {
+                        s = src.stringValue().trim();
+                        rec.handle = s;
+                        rec.handleBits = -1;
+                    }
                 } else if (code == 2 || code == 9 || code == 100) {
                     s = src.pooledValue().trim();
                 } else if (code >= 1 && code <= 7) {
