@@ -97,9 +97,11 @@ public final class ConsoleReport {
     }
 
     private void totalsLines(Totals t, boolean complete, PrintWriter out) {
-        field(out, "length", units.longLength(t.lengthM()) + " " + units.longUnit()
-                + (t.drawnLengthM() != t.lengthM() ? " (drawn " + units.longLength(t.drawnLengthM()) + " "
-                        + units.longUnit() + ", overlaps counted once)" : ""));
+        String length = units.longLength(t.lengthM());
+        String drawn = units.longLength(t.drawnLengthM());
+        // only when the difference shows at the printed precision
+        field(out, "length", length + " " + units.longUnit()
+                + (!drawn.equals(length) ? " (drawn " + drawn + " " + units.longUnit() + ", overlaps counted once)" : ""));
         if (t.massKg() == null) {
             field(out, "mass", "unknown (no layer has a section)");
         } else {

@@ -47,7 +47,8 @@ class HtmlReportWriterTest {
         for (int n = 1; n <= 2; n++) {
             assertTrue(s.contains("id=\"marker-" + n + "\" href=\"#finding-" + n + "\""), "marker " + n);
             assertTrue(s.contains("<tr id=\"finding-" + n + "\""), "row " + n);
-            assertTrue(s.contains("<a href=\"#marker-" + n + "\">" + n + "</a>"), "row link " + n);
+            assertTrue(s.contains("<a href=\"#marker-" + n + "\" title=\"show in the picture\">" + n + "</a>"),
+                    "row link " + n);
         }
         // finding 3 has no place: a row but no marker
         assertTrue(s.contains("<tr id=\"finding-3\""));
@@ -64,8 +65,13 @@ class HtmlReportWriterTest {
         assertEquals(1, count(html(List.of(Report.of(Fixtures.flatFrame("a.dxf")))), "<svg class=\"view\""));
         // ring lifted 0.3 m above bars spanning 1 m: z extent 30 % of the horizontal one
         String s = html(List.of(Report.of(Fixtures.frame("a.dxf", 0.3, false))));
-        assertEquals(2, count(s, "<svg class=\"view\""));
-        assertTrue(s.contains("Front elevation"));
+        // extents 1 x 0.5 x 0.3 m: every extent at least 20 % of the largest, so an isometric view too;
+        // plan and front elevation both show 2 m of bar, the tie keeps the plan first
+        assertEquals(3, count(s, "<svg class=\"view\""));
+        int plan = s.indexOf("Plan view");
+        int front = s.indexOf("Front elevation");
+        int iso = s.indexOf("Isometric view");
+        assertTrue(plan >= 0 && plan < front && front < iso, "plan, front elevation, isometric in that order");
     }
 
     @Test
@@ -73,7 +79,10 @@ class HtmlReportWriterTest {
         String s = html(List.of(Report.of(Fixtures.flatFrame("a.dxf"))));
         assertTrue(s.contains("class=\"legend\""));
         assertTrue(s.contains("A <span class=\"note\">2 &times; B10, BARS</span>"), "legend names quantity, section, layer");
-        assertTrue(s.contains("<g class=\"cog\" id=\"cog-plan\""));
+        assertTrue(s.contains("<g class=\"cog fixed\" id=\"cog-plan\""));
+        // the centre of gravity's tooltip gives its coordinates in the report's units
+        assertTrue(Pattern.compile("<title>centre of gravity: x [0-9.]+, y [0-9.]+, z [0-9.]+ m</title>").matcher(s).find());
+        assertTrue(s.contains("href=\"#caution\""), "a short caution beside the totals links to the full one");
         assertTrue(s.contains("<g class=\"scale\">"));
         assertTrue(s.contains("BS 4449 nominal mass &lt;table 1&gt;"), "section source shown, escaped");
         assertTrue(s.contains("Caution"));
@@ -104,7 +113,8 @@ class HtmlReportWriterTest {
         double x0 = Double.parseDouble(bar.group(1));
         double x1 = Double.parseDouble(bar.group(3));
         double y1 = Double.parseDouble(bar.group(4));
-        Matcher marker = Pattern.compile("id=\"marker-1\".*?<circle cx=\"([0-9.]+)\" cy=\"([0-9.]+)\"").matcher(s);
+        Matcher marker = Pattern.compile("id=\"marker-1\" href=\"#finding-1\" data-x=\"([0-9.]+)\" data-y=\"([0-9.]+)\"")
+                .matcher(s);
         assertTrue(marker.find());
         double pxPerM = (x1 - x0) / 1.0;
         // positions are printed with 2 decimals: 0.01 px
