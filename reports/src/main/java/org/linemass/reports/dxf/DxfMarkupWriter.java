@@ -14,10 +14,11 @@ import org.linemass.geometry.Vec3;
 
 /**
  * Writes a copy of an ASCII DXF drawing with a markup layer added. The original bytes are copied
- * through unchanged; new content is spliced in at three places only: a layer record before the
- * ENDTAB of the LAYER table (when the file has one), the new entities before the ENDSEC of the
- * ENTITIES section, and a raised $HANDSEED (when the header has one) so that the new handles stay
- * unique. Each finding with a place gets a CIRCLE and a TEXT "n kind" (n is the finding's number in
+ * through unchanged; new content is spliced in at four places only: a layer record before the
+ * ENDTAB of the LAYER table and that table's entry count (group 70) raised by one (when the file
+ * has a LAYER table), the new entities before the ENDSEC of the ENTITIES section, and a raised
+ * $HANDSEED (when the header has one) so that the new handles stay unique. The new records get
+ * handles when the file is R13 or later or uses handles ($HANDLING 1, as R12 files often do). Each finding with a place gets a CIRCLE and a TEXT "n kind" (n is the finding's number in
  * every report); the centre of gravity (or the length centroid without mass) gets a CIRCLE, two
  * LINEs and the TEXT "CG"; a drawing read incompletely gets one more TEXT saying so. Sizes are 1 % of the drawing's extent. Coordinates are converted back
  * from metres to drawing units. Files from R13 on get handles and subclass markers; R12 files get
@@ -54,13 +55,19 @@ public final class DxfMarkupWriter {
             layer = LAYER + "_" + i;
         }
         boolean modern = layout.version.compareTo("AC1012") >= 0;
-        DxfRecords e = new DxfRecords(eol, modern, layout.nextHandle, layout.modelSpaceHandle);
+        DxfRecords e = new DxfRecords(eol, modern, layout.handles, layout.nextHandle, layout.modelSpaceHandle);
         double perMetre = 1.0 / result.drawing().unit().metres();
         double size = markerSize(result) * perMetre;
 
         List<Splice> splices = new ArrayList<>();
         if (layout.layerTableEnd >= 0) {
             splices.add(new Splice(layout.layerTableEnd, 0, e.layer(layer, layout.layerTableHandle, LAYER_COLOUR)));
+            if (layout.layerCountValueOffset >= 0) {
+                // the table's entry count grows by the one record added (readers may size the table by it)
+                splices.add(new Splice(layout.layerCountValueOffset, layout.layerCountValueLength,
+                        padLike(text.substring(layout.layerCountValueOffset,
+                                layout.layerCountValueOffset + layout.layerCountValueLength), layout.layerCount + 1)));
+            }
         }
         StringBuilder ents = new StringBuilder();
         int n = 0;
@@ -87,7 +94,7 @@ public final class DxfMarkupWriter {
             ents.append(e.text(layer, at, size, "TOTALS INCOMPLETE: PART OF THE DRAWING WAS NOT COUNTED", 0));
         }
         splices.add(new Splice(layout.entitiesEnd, 0, ents.toString()));
-        if (layout.handseedValueOffset >= 0 && modern) {
+        if (layout.handseedValueOffset >= 0 && (modern || layout.handles)) {
             splices.add(new Splice(layout.handseedValueOffset, layout.handseedValueLength,
                     Long.toHexString(e.handle).toUpperCase(Locale.ROOT)));
         }
@@ -124,6 +131,15 @@ public final class DxfMarkupWriter {
         double diag = min[0] > max[0] ? 0 : new Vec3(max[0] - min[0], max[1] - min[1], max[2] - min[2]).norm();
         double fallback = 0.01 * r.drawing().unit().metres();
         return diag > 0 ? MARKER_SHARE * diag : fallback;
+    }
+
+    /** {@code value} right-aligned to the width of {@code original} when that was padded with spaces. */
+    private static String padLike(String original, int value) {
+        String v = Integer.toString(value);
+        if (original.startsWith(" ") && original.length() > v.length()) {
+            return " ".repeat(original.length() - v.length()) + v;
+        }
+        return v;
     }
 
     private static String ascii(String s) {
