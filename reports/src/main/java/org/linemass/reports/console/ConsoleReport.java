@@ -100,12 +100,13 @@ public final class ConsoleReport {
         String length = units.longLength(t.lengthM());
         String drawn = units.longLength(t.drawnLengthM());
         // only when the difference shows at the printed precision
-        field(out, "length", length + " " + units.longUnit()
+        String fine = units.longLengthReadable(t.lengthM()).substring(length.length());
+        field(out, "length", length + " " + units.longUnit() + fine
                 + (!drawn.equals(length) ? " (drawn " + drawn + " " + units.longUnit() + ", overlaps counted once)" : ""));
         if (t.massKg() == null) {
             field(out, "mass", "unknown (no layer has a section)");
         } else {
-            field(out, "mass", units.mass(t.massKg()) + " " + units.massUnit()
+            field(out, "mass", units.massReadable(t.massKg()) + " " + units.massUnit()
                     + (t.massComplete() ? "" : " (only layers with a section)"));
         }
         Vec3 g = t.centroidM() != null ? t.centroidM() : t.lengthCentroidM();

@@ -24,13 +24,13 @@ final class HtmlTables {
 
     void totals(StringBuilder s, Totals t) {
         s.append("<table class=\"totals\">\n");
-        String length = units.longLength(t.lengthM());
-        String drawn = units.longLength(t.drawnLengthM());
+        String length = units.longLengthReadable(t.lengthM());
+        String drawn = units.longLengthReadable(t.drawnLengthM());
         // only when the difference shows at the printed precision
         row(s, "Length [" + units.longUnit() + "]", length
                 + (!drawn.equals(length) ? " (drawn " + drawn + "; material drawn twice counted once)" : ""));
         row(s, "Mass [" + units.massUnit() + "]", t.massKg() == null ? "unknown: no layer has a section"
-                : units.mass(t.massKg()) + (t.massComplete() ? "" : " (only the layers that have a section)"));
+                : units.massReadable(t.massKg()) + (t.massComplete() ? "" : " (only the layers that have a section)"));
         Vec3 g = t.centroidM();
         row(s, "Centre of gravity [" + units.longUnit() + "]", g == null ? "unknown" : point(g));
         Vec3 lc = t.lengthCentroidM();
@@ -68,7 +68,7 @@ final class HtmlTables {
             cell(s, m.material(), false);
             cell(s, units.shortLength(m.lengthEachM()), true);
             cell(s, Integer.toString(m.bendsEach()), true);
-            cell(s, units.mass(m.massEachKg()), true);
+            cell(s, units.massReadable(m.massEachKg()), true);
             cell(s, units.mass(m.massTotalKg()), true);
             cell(s, m.layer(), false);
             s.append("</tr>\n");
