@@ -2,12 +2,14 @@ package org.linemass.reports.html;
 
 import java.math.BigDecimal;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.PieceResult;
+import org.linemass.engine.result.Severity;
 import org.linemass.geometry.Vec3;
 import org.linemass.reports.UnitSystem;
 
@@ -34,6 +36,8 @@ final class SvgView {
     /** Balloon radius, px: two digits fit; three or more get {@link #WIDE_BALLOON_R}. */
     private static final double BALLOON_R = 10;
     private static final double WIDE_BALLOON_R = 13;
+    /** Notes (welds, junctions) get smaller balloons so errors and warnings stand out. */
+    private static final double NOTE_BALLOON_R = 8;
     /** Ring drawn exactly at the finding's place, px. */
     private static final double RING_R = 5;
 
@@ -152,12 +156,20 @@ final class SvgView {
             ys[i] = f.y(placed.get(i).atM());
         }
         List<MarkerLayout.Offset> offsets = MarkerLayout.place(xs, ys);
+        // notes first, errors last: later elements are drawn on top, so an error is never hidden by a note
+        List<Integer> order = new ArrayList<>();
         for (int i = 0; i < placed.size(); i++) {
+            order.add(i);
+        }
+        order.sort(Comparator.comparingInt((Integer i) -> placed.get(i).severity().ordinal()));
+        for (int i : order) {
             Finding fd = placed.get(i);
             int num = numbers.get(i);
             MarkerLayout.Offset o = offsets.get(i);
             String marker = ids + "marker-" + num + (primary ? "" : "-" + view.name().toLowerCase(Locale.ROOT));
-            double br = Integer.toString(num).length() > 2 ? WIDE_BALLOON_R : BALLOON_R;
+            boolean wide = Integer.toString(num).length() > 2;
+            double br = fd.severity() == Severity.INFO ? (wide ? BALLOON_R : NOTE_BALLOON_R)
+                    : wide ? WIDE_BALLOON_R : BALLOON_R;
             double len = Math.hypot(o.dx(), o.dy());
             double lead = Math.max(0, len - br) / Math.max(len, 1);
             s.append("<a class=\"marker fixed ").append(fd.severity().jsonName()).append("\" id=\"").append(marker)
@@ -169,7 +181,8 @@ final class SvgView {
                     .append("<line x1=\"0\" y1=\"0\" x2=\"").append(num(o.dx() * lead)).append("\" y2=\"")
                     .append(num(o.dy() * lead)).append("\"/><circle class=\"balloon\" cx=\"").append(num(o.dx()))
                     .append("\" cy=\"").append(num(o.dy())).append("\" r=\"").append(num(br))
-                    .append("\"/><text x=\"").append(num(o.dx())).append("\" y=\"").append(num(o.dy() + 4))
+                    .append("\"/><text x=\"").append(num(o.dx())).append("\" y=\"")
+                    .append(num(o.dy() + (fd.severity() == Severity.INFO ? 3 : 4)))
                     .append("\">").append(num).append("</text></a>\n");
         }
     }

@@ -13,8 +13,8 @@ import org.linemass.geometry.Vec3;
  * <p>{@link #choose} picks the views for a drawing. A flat drawing (height, the z extent, at most
  * {@value #THIRD_DIMENSION_SHARE} of its largest horizontal extent) gets the plan only. A
  * three-dimensional one gets the two orthographic views whose pictures are largest (the area of
- * the projected bounding box: a view that sees the drawing edge-on, like an arch in a vertical
- * plane seen from above, is a thin strip), ties broken by the wire shown (the sum of projected
+ * the projected bounding box, the plan's weighted by {@value #PLAN_PREFERENCE}: a view that sees
+ * the drawing edge-on, like an arch in a vertical plane seen from above, is a thin strip), ties broken by the wire shown (the sum of projected
  * segment lengths), then plan before front before side; the isometric view comes as well when all three
  * extents are at least {@value #SOLID_SHARE} of the largest (a cage, a chair: no single pair of
  * orthographic views shows how the parts sit together).
@@ -30,6 +30,12 @@ enum View {
     static final double THIRD_DIMENSION_SHARE = 0.01;
     /** Share of the largest extent that every extent must reach for the isometric view (chosen by eye, no source). */
     static final double SOLID_SHARE = 0.2;
+
+    /**
+     * The plan's picture area counts this much more: drawings are made and read in plan, so an
+     * elevation comes first only when it is clearly larger, like an arch standing up (chosen by eye, no source).
+     */
+    static final double PLAN_PREFERENCE = 1.5;
 
     final String title;
     private final Vec3 right;
@@ -97,7 +103,7 @@ enum View {
         }
         List<View> ortho = new ArrayList<>(List.of(PLAN, FRONT, SIDE));
         // stable sort: on a full tie the plan, then the front elevation, stays first
-        ortho.sort(Comparator.comparingDouble((View v) -> -v.boxArea(lines))
+        ortho.sort(Comparator.comparingDouble((View v) -> -v.boxArea(lines) * (v == PLAN ? PLAN_PREFERENCE : 1))
                 .thenComparingDouble(v -> -v.projectedLength(lines)));
         List<View> views = new ArrayList<>(ortho.subList(0, 2));
         double largest = Math.max(horizontal, extent.z());

@@ -66,6 +66,16 @@ class ViewTest {
     }
 
     @Test
+    void choose_elevationOnlySlightlyLarger_planStaysFirst() {
+        // a box frame 1 x 0.5 x 0.6: front box 0.6 m2 beats the plan's 0.5 m2, but not by the plan's weight 1.5
+        List<List<Vec3>> lines = List.of(
+                List.of(Vec3.ZERO, new Vec3(1, 0, 0), new Vec3(1, 0.5, 0), new Vec3(0, 0.5, 0), Vec3.ZERO),
+                List.of(Vec3.ZERO, new Vec3(0, 0, 0.6)),
+                List.of(new Vec3(1, 0.5, 0), new Vec3(1, 0.5, 0.6)));
+        assertEquals(View.PLAN, View.choose(new Vec3(1, 0.5, 0.6), lines).get(0));
+    }
+
+    @Test
     void iso_projectsAxesAtThirtyDegrees() {
         // closed form of the isometric projection: each axis foreshortened to sqrt(2/3), x and y at
         // 30 degrees below the horizontal on either side, z straight up
