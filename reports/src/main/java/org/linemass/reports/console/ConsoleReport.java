@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import java.util.TreeMap;
 import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.LayerResult;
@@ -31,6 +32,9 @@ public final class ConsoleReport {
 
     private final UnitSystem units;
     private final boolean colour;
+    /** Most notes listed one by one in the findings table. */
+    static final int NOTES_LISTED = 10;
+
     private final boolean quiet;
 
     public ConsoleReport(UnitSystem units, boolean colour, boolean quiet) {
@@ -175,6 +179,11 @@ public final class ConsoleReport {
         out.print(bold("Layers") + "\n" + t.render("  ") + "\n");
     }
 
+    /**
+     * The findings table: errors and warnings first, each under its number in every report; notes
+     * follow in the table while there are at most {@value #NOTES_LISTED}, else they are summed up
+     * by kind in one line (a welded frame has dozens of weld notes that would bury the errors).
+     */
     private void findings(DrawingResult r, PrintWriter out) {
         if (r.findings().isEmpty()) {
             return;
@@ -182,16 +191,35 @@ public final class ConsoleReport {
         TextTable t = new TextTable(List.of("#", "severity", "kind", "x [" + units.longUnit() + "]",
                 "y [" + units.longUnit() + "]", "z [" + units.longUnit() + "]", "size [" + units.shortUnit() + "]",
                 "layer", "message"), true, false, false, true, true, true, true, false, false);
-        int n = 0;
-        for (Finding f : r.findings()) {
-            n++;
-            Vec3 a = f.atM();
-            t.add(List.of(Integer.toString(n), f.severity().jsonName(), f.kind(),
-                    a == null ? "-" : units.longLength(a.x()), a == null ? "-" : units.longLength(a.y()),
-                    a == null ? "-" : units.longLength(a.z()), orDash(units.defectSize(f.sizeM())),
-                    orDash(f.layer()), f.message()));
+        long notes = r.findings().stream().filter(f -> f.severity() == Severity.INFO).count();
+        boolean listNotes = notes <= NOTES_LISTED;
+        Map<String, Integer> noteKinds = new TreeMap<>();
+        for (Severity level : new Severity[] {Severity.ERROR, Severity.WARNING, Severity.INFO}) {
+            int n = 0;
+            for (Finding f : r.findings()) {
+                n++;
+                if (f.severity() != level) {
+                    continue;
+                }
+                if (level == Severity.INFO && !listNotes) {
+                    noteKinds.merge(f.kind(), 1, Integer::sum);
+                    continue;
+                }
+                Vec3 a = f.atM();
+                t.add(List.of(Integer.toString(n), f.severity().jsonName(), f.kind(),
+                        a == null ? "-" : units.longLength(a.x()), a == null ? "-" : units.longLength(a.y()),
+                        a == null ? "-" : units.longLength(a.z()), orDash(units.defectSize(f.sizeM())),
+                        orDash(f.layer()), f.message()));
+            }
         }
-        out.print(bold("Findings") + "\n" + t.render("  ", MESSAGE_WIDTH) + "\n");
+        out.print(bold("Findings") + "\n" + (t.isEmpty() ? "" : t.render("  ", MESSAGE_WIDTH)));
+        if (!noteKinds.isEmpty()) {
+            StringBuilder b = new StringBuilder();
+            noteKinds.forEach((k, c) -> b.append(b.length() == 0 ? "" : ", ").append(c).append(' ').append(k));
+            out.print("  " + count((int) notes, "note") + " not listed here (" + b + "): each is in the findings CSV, "
+                    + "the JSON and the HTML report\n");
+        }
+        out.print("\n");
     }
 
     private static String count(int n, String what) {
