@@ -40,6 +40,8 @@ final class SvgView {
     private static final double NOTE_BALLOON_R = 8;
     /** Ring drawn exactly at the finding's place, px. */
     private static final double RING_R = 5;
+    /** Room kept between a balloon and the picture's edge, px. */
+    private static final double EDGE_MARGIN_PX = 4;
 
     private SvgView() {
     }
@@ -87,19 +89,28 @@ final class SvgView {
         double left = PAD + (w - 2 * PAD - (maxU - minU) * k) / 2;
         Frame f = new Frame(view, minU, maxV, k, left);
 
+        StringBuilder body = new StringBuilder();
+        pieces(body, lines, owners, f, units, markIndex);
+        if (cog != null && cog.isFinite()) {
+            cog(body, r, cog, f, units, ids, view);
+        }
+        // balloons near the edge may reach past the padding: the picture grows to show them whole
+        double[] reach = {0, 0, w, h};
+        markers(body, r, f, ids, view, primary, reach);
+        double x0 = reach[0];
+        double y0 = reach[1];
+        double vw = reach[2] - x0;
+        double vh = reach[3] - y0;
+
         StringBuilder s = new StringBuilder();
-        s.append("<svg class=\"view\" xmlns=\"http://www.w3.org/2000/svg\" viewBox=\"0 0 ")
-                .append(num(w)).append(' ').append(num(h)).append("\" width=\"").append(num(w))
-                .append("\" height=\"").append(num(h)).append("\" role=\"img\" aria-label=\"")
+        s.append("<svg class=\"view\" xmlns=\"http://www.w3.org/2000/svg\" viewBox=\"").append(num(x0)).append(' ')
+                .append(num(y0)).append(' ').append(num(vw)).append(' ').append(num(vh)).append("\" width=\"")
+                .append(num(vw)).append("\" height=\"").append(num(vh)).append("\" role=\"img\" aria-label=\"")
                 .append(Html.escape(view.title)).append("\" data-px-per-m=\"").append(num(k))
                 .append("\" data-units=\"").append(units.name().toLowerCase(Locale.ROOT)).append("\">\n");
         s.append("<rect class=\"paper\" x=\"-100000\" y=\"-100000\" width=\"200000\" height=\"200000\"/>\n");
-        pieces(s, lines, owners, f, units, markIndex);
-        if (cog != null && cog.isFinite()) {
-            cog(s, r, cog, f, units, ids, view);
-        }
-        markers(s, r, f, ids, view, primary);
-        scaleBar(s, units, k, h);
+        s.append(body);
+        scaleBar(s, units, k, x0, reach[3]);
         s.append("</svg>\n");
         return s.toString();
     }
@@ -138,7 +149,12 @@ final class SvgView {
                 .append("<text class=\"cog-label\" x=\"11\" y=\"16\">CG</text></g>\n");
     }
 
-    private static void markers(StringBuilder s, DrawingResult r, Frame f, String ids, View view, boolean primary) {
+    /**
+     * Writes the markers; widens {@code reach} (min x, min y, max x, max y, picture px) to take in
+     * every balloon with a margin.
+     */
+    private static void markers(StringBuilder s, DrawingResult r, Frame f, String ids, View view, boolean primary,
+            double[] reach) {
         List<Integer> numbers = new ArrayList<>();
         List<Finding> placed = new ArrayList<>();
         int n = 0;
@@ -170,6 +186,11 @@ final class SvgView {
             boolean wide = Integer.toString(num).length() > 2;
             double br = fd.severity() == Severity.INFO ? (wide ? BALLOON_R : NOTE_BALLOON_R)
                     : wide ? WIDE_BALLOON_R : BALLOON_R;
+            double margin = br + EDGE_MARGIN_PX;
+            reach[0] = Math.min(reach[0], xs[i] + o.dx() - margin);
+            reach[1] = Math.min(reach[1], ys[i] + o.dy() - margin);
+            reach[2] = Math.max(reach[2], xs[i] + o.dx() + margin);
+            reach[3] = Math.max(reach[3], ys[i] + o.dy() + margin);
             double len = Math.hypot(o.dx(), o.dy());
             double lead = Math.max(0, len - br) / Math.max(len, 1);
             s.append("<a class=\"marker fixed ").append(fd.severity().jsonName()).append("\" id=\"").append(marker)
@@ -193,12 +214,13 @@ final class SvgView {
                 .append(num(x)).append(',').append(num(y)).append(")\"");
     }
 
-    private static void scaleBar(StringBuilder s, UnitSystem units, double pxPerM, double h) {
+    /** The scale bar at the bottom left of a picture whose view box starts at x0 and ends at bottom. */
+    private static void scaleBar(StringBuilder s, UnitSystem units, double pxPerM, double x0, double bottom) {
         ScaleBar bar = ScaleBar.fitting(units, FIT_W / 5 / pxPerM);
         double px = bar.metres() * pxPerM;
-        double y = h - 18;
-        s.append("<g class=\"scale\"><path d=\"M").append(num(PAD)).append(',').append(num(y - 5))
-                .append(" v5 h").append(num(px)).append(" v-5\"/><text x=\"").append(num(PAD + px + 6))
+        double y = bottom - 18;
+        s.append("<g class=\"scale\"><path d=\"M").append(num(x0 + PAD)).append(',').append(num(y - 5))
+                .append(" v5 h").append(num(px)).append(" v-5\"/><text x=\"").append(num(x0 + PAD + px + 6))
                 .append("\" y=\"").append(num(y)).append("\">").append(bar.label()).append("</text></g>\n");
     }
 

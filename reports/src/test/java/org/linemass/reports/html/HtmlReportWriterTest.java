@@ -6,9 +6,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.io.StringWriter;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import org.linemass.engine.result.DrawingResult;
+import org.linemass.engine.result.Finding;
+import org.linemass.engine.result.FindingKind;
+import org.linemass.engine.result.Severity;
+import org.linemass.geometry.Vec3;
 import org.linemass.reports.Fixtures;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
@@ -120,6 +126,41 @@ class HtmlReportWriterTest {
         // positions are printed with 2 decimals: 0.01 px
         assertEquals(x1 + 0.0005 * pxPerM, Double.parseDouble(marker.group(1)), 0.011);
         assertEquals(y1, Double.parseDouble(marker.group(2)), 0.011);
+    }
+
+    @Test
+    void write_balloonsStayInsideThePicture() throws IOException {
+        // 30 notes at the drawing's corner (0, 0): their fan (radius 30 * 24 px / 2 pi = 115 px) is far
+        // wider than the 40 px padding, so the picture must grow to show it
+        DrawingResult base = Fixtures.flatFrame("a.dxf");
+        List<Finding> findings = new ArrayList<>(base.findings());
+        for (int i = 0; i < 30; i++) {
+            findings.add(new Finding(FindingKind.T_JUNCTION, Severity.INFO, Vec3.ZERO, null, "BARS", List.of(), null,
+                    "weld " + i));
+        }
+        DrawingResult r = new DrawingResult(base.drawing(), base.entities(), base.layers(), base.pieces(), base.groups(),
+                findings, base.totals(), base.sections(), base.incompleteReasons());
+        String s = html(List.of(Report.of(r)));
+        Matcher vb = Pattern.compile("viewBox=\"(-?[0-9.]+) (-?[0-9.]+) ([0-9.]+) ([0-9.]+)\"").matcher(s);
+        assertTrue(vb.find());
+        double x0 = Double.parseDouble(vb.group(1));
+        double y0 = Double.parseDouble(vb.group(2));
+        double x1 = x0 + Double.parseDouble(vb.group(3));
+        double y1 = y0 + Double.parseDouble(vb.group(4));
+        Matcher m = Pattern.compile("id=\"marker-[0-9]+\" href=\"#finding-[0-9]+\" data-x=\"(-?[0-9.]+)\" "
+                + "data-y=\"(-?[0-9.]+)\".*?<circle class=\"balloon\" cx=\"(-?[0-9.]+)\" cy=\"(-?[0-9.]+)\" "
+                + "r=\"([0-9.]+)\"").matcher(s);
+        int n = 0;
+        while (m.find()) {
+            n++;
+            double x = Double.parseDouble(m.group(1)) + Double.parseDouble(m.group(3));
+            double y = Double.parseDouble(m.group(2)) + Double.parseDouble(m.group(4));
+            double radius = Double.parseDouble(m.group(5));
+            assertTrue(x - radius >= x0 && x + radius <= x1 && y - radius >= y0 && y + radius <= y1,
+                    "balloon at " + x + "," + y + " outside " + vb.group());
+        }
+        assertEquals(32, n);
+        assertTrue(x0 < 0 && y1 > 0, "the view box grew past the origin");
     }
 
     @Test
