@@ -16,6 +16,10 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import org.linemass.engine.result.DrawingResult;
+import org.linemass.engine.result.Finding;
+import org.linemass.engine.result.FindingKind;
+import org.linemass.engine.result.Severity;
+import org.linemass.geometry.Vec3;
 import org.linemass.importer.DxfImporter;
 import org.linemass.importer.DxfInputException;
 import org.linemass.importer.ImportOptions;
@@ -189,6 +193,31 @@ class DxfMarkupWriterTest {
             }
         }
         assertTrue(seed != null && Long.parseLong(seed, 16) > max, "$HANDSEED above every handle");
+    }
+
+    @Test
+    void write_findingsAtOnePlace_labelsStacked() throws IOException {
+        DrawingResult base = Fixtures.flatFrame("bars.dxf");
+        List<Finding> findings = new ArrayList<>();
+        for (int i = 0; i < 3; i++) {
+            findings.add(new Finding(FindingKind.CROSSING, Severity.INFO, new Vec3(0.5, 0, 0), null, "BARS", List.of(),
+                    null, "weld " + i));
+        }
+        DrawingResult r = new DrawingResult(base.drawing(), base.entities(), base.layers(), base.pieces(), base.groups(),
+                findings, base.totals(), base.sections(), base.incompleteReasons());
+        List<Pair> pairs = DxfPairScanner.scan(markup(R12.getBytes(StandardCharsets.ISO_8859_1), r));
+        Set<String> labelYs = new HashSet<>();
+        for (int i = 0; i < pairs.size(); i++) {
+            if (pairs.get(i).code() == 0 && pairs.get(i).value().equals("TEXT")) {
+                for (int j = i + 1; j < pairs.size() && pairs.get(j).code() != 0; j++) {
+                    if (pairs.get(j).code() == 20) {
+                        labelYs.add(pairs.get(j).value());
+                    }
+                }
+            }
+        }
+        // three finding labels on three lines, plus the CG label
+        assertEquals(4, labelYs.size(), labelYs.toString());
     }
 
     @Test
