@@ -63,6 +63,24 @@ public enum UnitSystem {
         return metres == null ? "" : fixed(metres / longM, longDecimals);
     }
 
+    /** A length in metres shown in the long unit with {@code extra} more decimals than usual; empty text for null. */
+    public String longLength(Double metres, int extra) {
+        return metres == null ? "" : fixed(metres / longM, longDecimals + Math.max(0, extra));
+    }
+
+    /**
+     * Extra decimals for coordinates of a drawing whose total wire length is {@code scaleM}: one
+     * per factor of ten below one long unit, at most three, so a 6 mm clip's centre of gravity does
+     * not read "x 0.000, y 0.000".
+     */
+    public int extraDecimalsFor(double scaleM) {
+        double v = scaleM / longM;
+        if (!(v > 0) || v >= 1 || !Double.isFinite(v)) {
+            return 0;
+        }
+        return (int) Math.min(3, Math.ceil(-Math.log10(v)));
+    }
+
     /** A length in metres shown in the short unit, fixed decimals; empty text for null. */
     public String shortLength(Double metres) {
         return metres == null ? "" : fixed(metres / shortM, shortDecimals);

@@ -49,4 +49,14 @@ class UnitSystemTest {
         assertEquals("0.000", UnitSystem.METRIC.massReadable(0.0));
         assertEquals("", UnitSystem.METRIC.massReadable(null));
     }
+
+    @Test
+    void extraDecimals_growForSmallDrawings() {
+        // 7 m of wire: the usual 3 decimals (1 mm); 6.3 mm of wire: 3 more (1 micrometre)
+        assertEquals(0, UnitSystem.METRIC.extraDecimalsFor(7.0));
+        assertEquals(1, UnitSystem.METRIC.extraDecimalsFor(0.5));
+        assertEquals(3, UnitSystem.METRIC.extraDecimalsFor(0.0063));
+        assertEquals(3, UnitSystem.METRIC.extraDecimalsFor(1e-9), "capped");
+        assertEquals("0.000212", UnitSystem.METRIC.longLength(0.000212, 3));
+    }
 }

@@ -115,7 +115,7 @@ public final class ConsoleReport {
         }
         Vec3 g = t.centroidM() != null ? t.centroidM() : t.lengthCentroidM();
         String which = t.centroidM() != null ? "centre of gravity" : "length centroid";
-        field(out, which, g == null ? "none" : point(g));
+        field(out, which, g == null ? "none" : point(g, units.extraDecimalsFor(t.lengthM())));
         if (!complete) {
             field(out, "complete", paint("31", "NO: some of the drawing was not counted, see below"));
         }
@@ -129,9 +129,9 @@ public final class ConsoleReport {
         };
     }
 
-    private String point(Vec3 g) {
-        return "x " + units.longLength(g.x()) + "  y " + units.longLength(g.y()) + "  z " + units.longLength(g.z())
-                + " " + units.longUnit();
+    private String point(Vec3 g, int extra) {
+        return "x " + units.longLength(g.x(), extra) + "  y " + units.longLength(g.y(), extra) + "  z "
+                + units.longLength(g.z(), extra) + " " + units.longUnit();
     }
 
     private String severityCounts(List<Finding> findings) {

@@ -32,14 +32,21 @@ final class HtmlTables {
         row(s, "Mass [" + units.massUnit() + "]", t.massKg() == null ? "unknown: no layer has a section"
                 : units.massReadable(t.massKg()) + (t.massComplete() ? "" : " (only the layers that have a section)"));
         Vec3 g = t.centroidM();
-        row(s, "Centre of gravity [" + units.longUnit() + "]", g == null ? "unknown" : point(g));
+        int extra = units.extraDecimalsFor(t.lengthM());
+        row(s, "Centre of gravity [" + units.longUnit() + "]", g == null ? "unknown" : point(g, extra));
         Vec3 lc = t.lengthCentroidM();
-        row(s, "Length centroid [" + units.longUnit() + "]", lc == null ? "none" : point(lc));
+        row(s, "Length centroid [" + units.longUnit() + "]", lc == null ? "none" : point(lc, extra));
         s.append("</table>\n");
     }
 
     String point(Vec3 g) {
-        return "x " + units.longLength(g.x()) + ", y " + units.longLength(g.y()) + ", z " + units.longLength(g.z());
+        return point(g, 0);
+    }
+
+    /** "x .., y .., z .." in the long unit with {@code extra} more decimals than usual. */
+    String point(Vec3 g, int extra) {
+        return "x " + units.longLength(g.x(), extra) + ", y " + units.longLength(g.y(), extra) + ", z "
+                + units.longLength(g.z(), extra);
     }
 
     static void row(StringBuilder s, String name, String value) {

@@ -139,8 +139,9 @@ final class SvgView {
     private static void cog(StringBuilder s, DrawingResult r, Vec3 cog, Frame f, UnitSystem units, String ids,
             View view) {
         String what = r.totals().centroidM() != null ? "centre of gravity" : "length centroid (no mass known)";
-        String at = "x " + units.longLength(cog.x()) + ", y " + units.longLength(cog.y()) + ", z "
-                + units.longLength(cog.z()) + " " + units.longUnit();
+        int extra = units.extraDecimalsFor(r.totals().lengthM());
+        String at = "x " + units.longLength(cog.x(), extra) + ", y " + units.longLength(cog.y(), extra) + ", z "
+                + units.longLength(cog.z(), extra) + " " + units.longUnit();
         s.append("<g class=\"cog fixed\" id=\"").append(ids).append("cog-").append(view.name().toLowerCase(Locale.ROOT))
                 .append('"');
         anchor(s, f.x(cog), f.y(cog));
