@@ -3,6 +3,7 @@ package org.linemass.app;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import org.linemass.drawing.LengthUnit;
 import org.linemass.engine.AnalysisException;
@@ -10,6 +11,7 @@ import org.linemass.engine.AnalysisSettings;
 import org.linemass.engine.section.LayerAssignment;
 import org.linemass.engine.section.SectionTable;
 import org.linemass.importer.ImportOptions;
+import org.linemass.reports.dxf.DxfMarkupWriter;
 import picocli.CommandLine.Option;
 
 /**
@@ -26,7 +28,11 @@ public final class DrawingOptions {
             description = "Count only layers matching GLOB (* and ?, case-insensitive); repeatable.")
     List<String> onlyLayers = new ArrayList<>();
 
-    @Option(names = "--skip-layer", paramLabel = "GLOB", description = "Do not count layers matching GLOB; repeatable.")
+    /** Glob of the layer {@code --markup-dxf} adds (with its numeric suffixes); never counted unless asked for. */
+    static final String MARKUP_LAYERS = DxfMarkupWriter.LAYER + "*";
+
+    @Option(names = "--skip-layer", paramLabel = "GLOB", description = "Do not count layers matching GLOB; repeatable. "
+            + "The layer a marked-up copy adds (" + DxfMarkupWriter.LAYER + ") is never counted.")
     List<String> skipLayers = new ArrayList<>();
 
     @Option(names = "--count-hidden-layers", description = "Also count layers that are switched off or frozen.")
@@ -80,8 +86,22 @@ public final class DrawingOptions {
                     + LengthParser.describe(joinM) + ")");
         }
         return new AnalysisSettings(Optional.ofNullable(joinM), Optional.ofNullable(gapLimitM), Optional.empty(),
-                AnalysisSettings.defaults(table).integrationRelative(), mirrorAlike, onlyLayers, skipLayers,
+                AnalysisSettings.defaults(table).integrationRelative(), mirrorAlike, onlyLayers, skipped(),
                 hiddenLayers, table, rules, java.util.Map.of(), AnalysisSettings.DEFAULT_MAX_EXPANDED_SEGMENTS);
+    }
+
+    /**
+     * The layers not to count: those given with --skip-layer, and the layer a marked-up copy adds
+     * ({@link #MARKUP_LAYERS}), so that checking a marked-up drawing again does not count its
+     * circles and labels as wire; unless --only-layer names that layer on purpose.
+     */
+    List<String> skipped() {
+        List<String> all = new ArrayList<>(skipLayers);
+        boolean wanted = onlyLayers.stream().anyMatch(g -> g.toUpperCase(Locale.ROOT).startsWith("LINEMASS"));
+        if (!wanted) {
+            all.add(MARKUP_LAYERS);
+        }
+        return all;
     }
 
     /** {@code LAYER=SECTION}; the layer glob may itself contain '=', so the last '=' splits. */

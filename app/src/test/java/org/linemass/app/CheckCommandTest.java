@@ -246,7 +246,8 @@ class CheckCommandTest {
         assertEquals(List.of("FR*", "A=B"), s.assignments().stream().map(LayerAssignment::layerGlob).toList());
         assertEquals(List.of("B8", "C"), s.assignments().stream().map(LayerAssignment::sectionId).toList());
         assertEquals(List.of("F*"), s.includeLayers());
-        assertEquals(List.of("TEXT*"), s.excludeLayers());
+        // the layer a marked-up copy adds is always left out as well
+        assertEquals(List.of("TEXT*", "LINEMASS_FINDINGS*"), s.excludeLayers());
         assertTrue(s.includeHiddenLayers());
         assertTrue(s.mirrorGrouping());
         assertEquals(Optional.of(LengthUnit.INCH), pipeline.imports.get(0).unitOverride());

@@ -139,6 +139,24 @@ class EndToEndTest {
         }
     }
 
+    @Test
+    void markupDxf_checkedAgain_markupLayerNotCounted(@TempDir Path dir) throws Exception {
+        Path demo = dir.resolve("garden-planter.dxf");
+        try (var in = EndToEndTest.class.getResourceAsStream("/org/linemass/app/demo/garden-planter.dxf")) {
+            assumeTrue(in != null, "demo drawing not packaged");
+            Files.copy(in, demo);
+        }
+        Path marked = dir.resolve("marked.dxf");
+        JsonNode first = run(0, 1, "check", "--json", "-", "--markup-dxf", marked.toString(), demo.toString());
+        JsonNode again = run(0, 1, "check", "--json", "-", marked.toString());
+        // the same wire: the circles and labels of the added layer are not material (equal to the last bit:
+        // the same segments are integrated in the same order)
+        assertEquals(first.get("totals").get("length_m").asDouble(), again.get("totals").get("length_m").asDouble(), 0.0);
+        // asked for on purpose, the layer is read
+        JsonNode only = run(0, 1, "check", "--json", "-", "--only-layer", "LINEMASS_FINDINGS*", marked.toString());
+        assertTrue(only.get("totals").get("length_m").asDouble() > 0, only.get("totals").toString());
+    }
+
     /** Kind, layer, handle and exact points at five parameters of every segment (markup layer left out if asked). */
     private static List<String> fingerprints(List<org.linemass.geometry.Segment> segments, boolean skipMarkup) {
         List<String> out = new ArrayList<>();

@@ -1,5 +1,7 @@
 package org.linemass.reports;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.Locale;
 
 /**
@@ -12,6 +14,11 @@ public enum UnitSystem {
     METRIC("m", 1.0, 3, "mm", 0.001, 1, "kg", 1.0, 3),
     /** Long lengths and coordinates in ft, cut lengths and small sizes in in, mass in lb. */
     IMPERIAL("ft", 0.3048, 3, "in", 0.0254, 3, "lb", 0.45359237, 3);
+
+    /** Share of a unit below which a value also gets a finer reading (chosen for readability, no source). */
+    static final double SMALL = 0.1;
+    /** Significant digits of a small mass. */
+    static final int SMALL_DIGITS = 3;
 
     private final String longUnit;
     private final double longM;
@@ -56,6 +63,24 @@ public enum UnitSystem {
         return metres == null ? "" : fixed(metres / longM, longDecimals);
     }
 
+    /** A length in metres shown in the long unit with {@code extra} more decimals than usual; empty text for null. */
+    public String longLength(Double metres, int extra) {
+        return metres == null ? "" : fixed(metres / longM, longDecimals + Math.max(0, extra));
+    }
+
+    /**
+     * Extra decimals for coordinates of a drawing whose total wire length is {@code scaleM}: one
+     * per factor of ten below one long unit, at most three, so a 6 mm clip's centre of gravity does
+     * not read "x 0.000, y 0.000".
+     */
+    public int extraDecimalsFor(double scaleM) {
+        double v = scaleM / longM;
+        if (!(v > 0) || v >= 1 || !Double.isFinite(v)) {
+            return 0;
+        }
+        return (int) Math.min(3, Math.ceil(-Math.log10(v)));
+    }
+
     /** A length in metres shown in the short unit, fixed decimals; empty text for null. */
     public String shortLength(Double metres) {
         return metres == null ? "" : fixed(metres / shortM, shortDecimals);
@@ -72,6 +97,34 @@ public enum UnitSystem {
     /** A mass in kilograms shown in the mass unit, fixed decimals; empty text for null. */
     public String mass(Double kg) {
         return kg == null ? "" : fixed(kg / massKg, massDecimals);
+    }
+
+    /**
+     * Like {@link #longLength}, followed by the short unit in brackets when the value is below
+     * {@value #SMALL} of the long unit, so a 6 mm clip reads "0.006 (6.3 mm)", not just "0.006".
+     */
+    public String longLengthReadable(Double metres) {
+        if (metres == null) {
+            return "";
+        }
+        String s = longLength(metres);
+        double v = Math.abs(metres / longM);
+        return v > 0 && v < SMALL ? s + " (" + shortLength(metres) + " " + shortUnit + ")" : s;
+    }
+
+    /**
+     * A mass in the mass unit: fixed decimals, or {@value #SMALL_DIGITS} significant digits when
+     * below {@value #SMALL} of the unit, so a wire clip does not read "0.000". Empty text for null.
+     */
+    public String massReadable(Double kg) {
+        if (kg == null) {
+            return "";
+        }
+        double v = kg / massKg;
+        if (v == 0 || Math.abs(v) >= SMALL || !Double.isFinite(v)) {
+            return mass(kg);
+        }
+        return new BigDecimal(v).round(new MathContext(SMALL_DIGITS)).toPlainString();
     }
 
     /** A number with a fixed count of decimals, Locale.ROOT, no grouping; "-0.000" shown as "0.000". */

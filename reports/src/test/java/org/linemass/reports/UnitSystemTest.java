@@ -35,4 +35,28 @@ class UnitSystemTest {
             Locale.setDefault(before);
         }
     }
+
+    @Test
+    void readable_smallValuesKeepTheirDigits() {
+        // a 6.3 mm clip: 0.006 m alone hides the size; the mm reading follows in brackets
+        assertEquals("0.006 (6.3 mm)", UnitSystem.METRIC.longLengthReadable(0.0063));
+        assertEquals("1.500", UnitSystem.METRIC.longLengthReadable(1.5));
+        // 1 in = 0.0254 m exactly (FACTS.md section 0.1): 0.05 ft is 0.6 in
+        assertEquals("0.050 (0.600 in)", UnitSystem.IMPERIAL.longLengthReadable(0.05 * 0.3048));
+        // 0.000123 kg with three significant digits, not "0.000"; large masses keep fixed decimals
+        assertEquals("0.000123", UnitSystem.METRIC.massReadable(0.000123));
+        assertEquals("12.346", UnitSystem.METRIC.massReadable(12.3456));
+        assertEquals("0.000", UnitSystem.METRIC.massReadable(0.0));
+        assertEquals("", UnitSystem.METRIC.massReadable(null));
+    }
+
+    @Test
+    void extraDecimals_growForSmallDrawings() {
+        // 7 m of wire: the usual 3 decimals (1 mm); 6.3 mm of wire: 3 more (1 micrometre)
+        assertEquals(0, UnitSystem.METRIC.extraDecimalsFor(7.0));
+        assertEquals(1, UnitSystem.METRIC.extraDecimalsFor(0.5));
+        assertEquals(3, UnitSystem.METRIC.extraDecimalsFor(0.0063));
+        assertEquals(3, UnitSystem.METRIC.extraDecimalsFor(1e-9), "capped");
+        assertEquals("0.000212", UnitSystem.METRIC.longLength(0.000212, 3));
+    }
 }

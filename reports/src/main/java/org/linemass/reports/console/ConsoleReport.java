@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import java.util.TreeMap;
 import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.LayerResult;
@@ -31,18 +32,21 @@ public final class ConsoleReport {
 
     private final UnitSystem units;
     private final boolean colour;
+    /** Most notes listed one by one in the findings table. */
+    static final int NOTES_LISTED = 10;
+
     private final boolean quiet;
     private final boolean listNotes;
 
-    /** A report that lists every finding, notes included. */
+    /** A report that lists notes one by one only when there are at most {@link #NOTES_LISTED}. */
     public ConsoleReport(UnitSystem units, boolean colour, boolean quiet) {
-        this(units, colour, quiet, true);
+        this(units, colour, quiet, false);
     }
 
     /**
-     * @param listNotes whether findings of severity info get a table row each; when false they are
-     *        counted by kind under the table (a welded mesh has hundreds), keeping their numbers so
-     *        the rows shown still match the HTML, CSV and JSON reports
+     * @param listNotes whether every finding of severity info gets a table row; when false and there
+     *        are more than {@link #NOTES_LISTED} they are counted by kind under the table (a welded
+     *        mesh has hundreds), keeping their numbers so the rows shown match the HTML, CSV and JSON
      */
     public ConsoleReport(UnitSystem units, boolean colour, boolean quiet, boolean listNotes) {
         this.units = units;
@@ -109,18 +113,21 @@ public final class ConsoleReport {
     }
 
     private void totalsLines(Totals t, boolean complete, PrintWriter out) {
-        field(out, "length", units.longLength(t.lengthM()) + " " + units.longUnit()
-                + (t.drawnLengthM() != t.lengthM() ? " (drawn " + units.longLength(t.drawnLengthM()) + " "
-                        + units.longUnit() + ", overlaps counted once)" : ""));
+        String length = units.longLength(t.lengthM());
+        String drawn = units.longLength(t.drawnLengthM());
+        // only when the difference shows at the printed precision
+        String fine = units.longLengthReadable(t.lengthM()).substring(length.length());
+        field(out, "length", length + " " + units.longUnit() + fine
+                + (!drawn.equals(length) ? " (drawn " + drawn + " " + units.longUnit() + ", overlaps counted once)" : ""));
         if (t.massKg() == null) {
             field(out, "mass", "unknown (no layer has a section)");
         } else {
-            field(out, "mass", units.mass(t.massKg()) + " " + units.massUnit()
+            field(out, "mass", units.massReadable(t.massKg()) + " " + units.massUnit()
                     + (t.massComplete() ? "" : " (only layers with a section)"));
         }
         Vec3 g = t.centroidM() != null ? t.centroidM() : t.lengthCentroidM();
         String which = t.centroidM() != null ? "centre of gravity" : "length centroid";
-        field(out, which, g == null ? "none" : point(g));
+        field(out, which, g == null ? "none" : point(g, units.extraDecimalsFor(t.lengthM())));
         if (!complete) {
             field(out, "complete", paint("31", "NO: some of the drawing was not counted, see below"));
         }
@@ -134,9 +141,9 @@ public final class ConsoleReport {
         };
     }
 
-    private String point(Vec3 g) {
-        return "x " + units.longLength(g.x()) + "  y " + units.longLength(g.y()) + "  z " + units.longLength(g.z())
-                + " " + units.longUnit();
+    private String point(Vec3 g, int extra) {
+        return "x " + units.longLength(g.x(), extra) + "  y " + units.longLength(g.y(), extra) + "  z "
+                + units.longLength(g.z(), extra) + " " + units.longUnit();
     }
 
     private String severityCounts(List<Finding> findings) {
@@ -184,6 +191,11 @@ public final class ConsoleReport {
         out.print(bold("Layers") + "\n" + t.render("  ") + "\n");
     }
 
+    /**
+     * The findings table: errors and warnings first, each under its number in every report; notes
+     * follow in the table while there are at most {@value #NOTES_LISTED}, else they are summed up
+     * by kind in one line (a welded frame has dozens of weld notes that would bury the errors).
+     */
     private void findings(DrawingResult r, PrintWriter out) {
         if (r.findings().isEmpty()) {
             return;
@@ -191,31 +203,35 @@ public final class ConsoleReport {
         TextTable t = new TextTable(List.of("#", "severity", "kind", "x [" + units.longUnit() + "]",
                 "y [" + units.longUnit() + "]", "z [" + units.longUnit() + "]", "size [" + units.shortUnit() + "]",
                 "layer", "message"), true, false, false, true, true, true, true, false, false);
-        int n = 0;
-        java.util.Map<String, Integer> hidden = new java.util.TreeMap<>();
-        for (Finding f : r.findings()) {
-            n++;
-            if (!listNotes && f.severity() == org.linemass.engine.result.Severity.INFO) {
-                hidden.merge(f.kind(), 1, Integer::sum);
-                continue;
+        long notes = r.findings().stream().filter(f -> f.severity() == Severity.INFO).count();
+        boolean showNotes = listNotes || notes <= NOTES_LISTED;
+        Map<String, Integer> noteKinds = new TreeMap<>();
+        for (Severity level : new Severity[] {Severity.ERROR, Severity.WARNING, Severity.INFO}) {
+            int n = 0;
+            for (Finding f : r.findings()) {
+                n++;
+                if (f.severity() != level) {
+                    continue;
+                }
+                if (level == Severity.INFO && !showNotes) {
+                    noteKinds.merge(f.kind(), 1, Integer::sum);
+                    continue;
+                }
+                Vec3 a = f.atM();
+                t.add(List.of(Integer.toString(n), f.severity().jsonName(), f.kind(),
+                        a == null ? "-" : units.longLength(a.x()), a == null ? "-" : units.longLength(a.y()),
+                        a == null ? "-" : units.longLength(a.z()), orDash(units.defectSize(f.sizeM())),
+                        orDash(f.layer()), f.message()));
             }
-            Vec3 a = f.atM();
-            t.add(List.of(Integer.toString(n), f.severity().jsonName(), f.kind(),
-                    a == null ? "-" : units.longLength(a.x()), a == null ? "-" : units.longLength(a.y()),
-                    a == null ? "-" : units.longLength(a.z()), orDash(units.defectSize(f.sizeM())),
-                    orDash(f.layer()), f.message()));
         }
-        out.print(bold("Findings") + "\n");
-        if (!t.isEmpty()) {
-            out.print(t.render("  ", MESSAGE_WIDTH) + "\n");
+        out.print(bold("Findings") + "\n" + (t.isEmpty() ? "" : t.render("  ", MESSAGE_WIDTH)));
+        if (!noteKinds.isEmpty()) {
+            StringBuilder b = new StringBuilder();
+            noteKinds.forEach((k, c) -> b.append(b.length() == 0 ? "" : ", ").append(c).append(' ').append(k));
+            out.print("  " + count((int) notes, "note") + " not listed here (" + b + "): each is in the findings CSV, "
+                    + "the JSON and the HTML report, or add --list-notes\n");
         }
-        if (!hidden.isEmpty()) {
-            int total = hidden.values().stream().mapToInt(Integer::intValue).sum();
-            StringBuilder kinds = new StringBuilder();
-            hidden.forEach((k, c) -> kinds.append(kinds.length() == 0 ? "" : ", ").append(c).append(' ').append(k));
-            out.print("  " + count(total, "note") + " not listed (" + kinds
-                    + "); every finding is in the HTML, CSV and JSON reports, or add --list-notes\n\n");
-        }
+        out.print("\n");
     }
 
     private static String count(int n, String what) {

@@ -66,11 +66,14 @@ public final class PiecesCsvWriter {
         row.add(p == null ? "" : units.longLength(p.z()));
     }
 
-    /** Entity references as "line:handle" separated by spaces (handle omitted when empty). */
+    /**
+     * Entity references as "line 1911 handle 3D" separated by "; " (the handle part left out when
+     * empty). Spelled out rather than "1911:3D" because a spreadsheet reads "1911:32" as a time.
+     */
     static String refs(List<SourceRef> sources) {
         return sources.stream()
-                .map(s -> s.handle() == null || s.handle().isEmpty() ? Integer.toString(s.line())
-                        : s.line() + ":" + s.handle())
-                .collect(Collectors.joining(" "));
+                .map(s -> "line " + s.line()
+                        + (s.handle() == null || s.handle().isEmpty() ? "" : " handle " + s.handle()))
+                .collect(Collectors.joining("; "));
     }
 }

@@ -5,8 +5,10 @@ import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.PieceResult;
@@ -14,14 +16,18 @@ import org.linemass.geometry.Vec3;
 
 /**
  * Writes a copy of an ASCII DXF drawing with a markup layer added. The original bytes are copied
- * through unchanged; new content is spliced in at three places only: a layer record before the
- * ENDTAB of the LAYER table (when the file has one), the new entities before the ENDSEC of the
- * ENTITIES section, and a raised $HANDSEED (when the header has one) so that the new handles stay
- * unique. Each finding with a place gets a CIRCLE and a TEXT "n kind" (n is the finding's number in
- * every report); the centre of gravity (or the length centroid without mass) gets a CIRCLE, two
- * LINEs and the TEXT "CG"; a drawing read incompletely gets one more TEXT saying so. Sizes are 1 % of the drawing's extent. Coordinates are converted back
- * from metres to drawing units. Files from R13 on get handles and subclass markers; R12 files get
- * the plain R12 form. Binary DXF is refused (IOException).
+ * through unchanged; new content is spliced in at four places only: a layer record before the
+ * ENDTAB of the LAYER table and that table's entry count (group 70) raised by one (when the file
+ * has a LAYER table), the new entities before the ENDSEC of the ENTITIES section, and a raised
+ * $HANDSEED (when the header has one) so that the new handles stay unique. The new records get
+ * handles when the file is R13 or later or uses handles ($HANDLING 1, as R12 files often do).
+ *
+ * <p>Each finding with a place gets a CIRCLE and a TEXT "n kind" (n is the finding's number in
+ * every report; labels of findings at the same place are stacked one under the other); the centre
+ * of gravity (or the length centroid without mass) gets a CIRCLE, two LINEs and the TEXT "CG"; a
+ * drawing read incompletely gets one more TEXT saying so. Sizes are 1 % of the drawing's extent.
+ * Coordinates are converted back from metres to drawing units. Files from R13 on get subclass
+ * markers; R12 files get the plain R12 form. Binary DXF is refused (IOException).
  */
 public final class DxfMarkupWriter {
 
@@ -32,6 +38,8 @@ public final class DxfMarkupWriter {
     /** AutoCAD colour index of the layer (1 = red) and of the centre-of-gravity marker (5 = blue). */
     private static final int LAYER_COLOUR = 1;
     private static final int COG_COLOUR = 5;
+    /** Line pitch of stacked labels, in text heights. */
+    private static final double LABEL_PITCH = 1.5;
     private static final String BINARY_SENTINEL = "AutoCAD Binary DXF";
 
     private DxfMarkupWriter() {
@@ -54,15 +62,22 @@ public final class DxfMarkupWriter {
             layer = LAYER + "_" + i;
         }
         boolean modern = layout.version.compareTo("AC1012") >= 0;
-        DxfRecords e = new DxfRecords(eol, modern, layout.nextHandle, layout.modelSpaceHandle);
+        DxfRecords e = new DxfRecords(eol, modern, layout.handles, layout.nextHandle, layout.modelSpaceHandle);
         double perMetre = 1.0 / result.drawing().unit().metres();
         double size = markerSize(result) * perMetre;
 
         List<Splice> splices = new ArrayList<>();
         if (layout.layerTableEnd >= 0) {
             splices.add(new Splice(layout.layerTableEnd, 0, e.layer(layer, layout.layerTableHandle, LAYER_COLOUR)));
+            if (layout.layerCountValueOffset >= 0) {
+                // the table's entry count grows by the one record added (readers may size the table by it)
+                splices.add(new Splice(layout.layerCountValueOffset, layout.layerCountValueLength,
+                        padLike(text.substring(layout.layerCountValueOffset,
+                                layout.layerCountValueOffset + layout.layerCountValueLength), layout.layerCount + 1)));
+            }
         }
         StringBuilder ents = new StringBuilder();
+        Map<String, Integer> stacked = new HashMap<>();
         int n = 0;
         for (Finding f : result.findings()) {
             n++;
@@ -70,8 +85,12 @@ public final class DxfMarkupWriter {
                 continue;
             }
             Vec3 p = f.atM().times(perMetre);
+            // labels of findings at one place are stacked downwards instead of printed over each other
+            String cell = Math.round(p.x() / size) + "," + Math.round(p.y() / size) + "," + Math.round(p.z() / size);
+            int below = stacked.merge(cell, 1, Integer::sum) - 1;
             ents.append(e.circle(layer, p, size, 0));
-            ents.append(e.text(layer, p.plus(new Vec3(size, size, 0)), size, n + " " + ascii(f.kind()), 0));
+            ents.append(e.text(layer, p.plus(new Vec3(size, size - LABEL_PITCH * size * below, 0)), size,
+                    n + " " + ascii(f.kind()), 0));
         }
         Vec3 cog = result.totals().centroidM() != null ? result.totals().centroidM() : result.totals().lengthCentroidM();
         if (cog != null && cog.isFinite()) {
@@ -87,7 +106,7 @@ public final class DxfMarkupWriter {
             ents.append(e.text(layer, at, size, "TOTALS INCOMPLETE: PART OF THE DRAWING WAS NOT COUNTED", 0));
         }
         splices.add(new Splice(layout.entitiesEnd, 0, ents.toString()));
-        if (layout.handseedValueOffset >= 0 && modern) {
+        if (layout.handseedValueOffset >= 0 && (modern || layout.handles)) {
             splices.add(new Splice(layout.handseedValueOffset, layout.handseedValueLength,
                     Long.toHexString(e.handle).toUpperCase(Locale.ROOT)));
         }
@@ -124,6 +143,15 @@ public final class DxfMarkupWriter {
         double diag = min[0] > max[0] ? 0 : new Vec3(max[0] - min[0], max[1] - min[1], max[2] - min[2]).norm();
         double fallback = 0.01 * r.drawing().unit().metres();
         return diag > 0 ? MARKER_SHARE * diag : fallback;
+    }
+
+    /** {@code value} right-aligned to the width of {@code original} when that was padded with spaces. */
+    private static String padLike(String original, int value) {
+        String v = Integer.toString(value);
+        if (original.startsWith(" ") && original.length() > v.length()) {
+            return " ".repeat(original.length() - v.length()) + v;
+        }
+        return v;
     }
 
     private static String ascii(String s) {

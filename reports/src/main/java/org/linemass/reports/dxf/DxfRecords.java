@@ -7,17 +7,20 @@ import org.linemass.geometry.Vec3;
 /**
  * Formats the records the markup adds (LAYER, CIRCLE, LINE, TEXT) as group-code/value lines with
  * the file's own line end; R13 and later get handles (counting up from the first free one), owner
- * and subclass markers, R12 gets the plain form. Mutable: hands out handles; one per write.
+ * and subclass markers; R12 gets the plain form, with handles only when the file uses them.
+ * Mutable: hands out handles; one per write.
  */
 final class DxfRecords {
     private final String eol;
     private final boolean modern;
+    private final boolean handles;
     private final String owner;
     long handle;
 
-    DxfRecords(String eol, boolean modern, long firstHandle, String owner) {
+    DxfRecords(String eol, boolean modern, boolean handles, long firstHandle, String owner) {
         this.eol = eol;
         this.modern = modern;
+        this.handles = modern || handles;
         this.handle = firstHandle;
         this.owner = owner;
     }
@@ -25,8 +28,10 @@ final class DxfRecords {
     String layer(String name, String tableHandle, int colour) {
         StringBuilder b = new StringBuilder();
         pair(b, 0, "LAYER");
-        if (modern) {
+        if (handles) {
             pair(b, 5, nextHandle());
+        }
+        if (modern) {
             pair(b, 330, tableHandle);
             pair(b, 100, "AcDbSymbolTableRecord");
             pair(b, 100, "AcDbLayerTableRecord");
@@ -66,8 +71,10 @@ final class DxfRecords {
     private StringBuilder head(String type, String layer, int colour, String subclass) {
         StringBuilder b = new StringBuilder();
         pair(b, 0, type);
-        if (modern) {
+        if (handles) {
             pair(b, 5, nextHandle());
+        }
+        if (modern) {
             if (!owner.isEmpty()) {
                 pair(b, 330, owner);
             }

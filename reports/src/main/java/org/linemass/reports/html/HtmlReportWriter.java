@@ -66,7 +66,7 @@ public final class HtmlReportWriter {
             }
             s.append("</section>\n");
         }
-        s.append("<section class=\"caution\">\n<h2>Caution</h2>\n<p>").append(Html.escape(Caution.TEXT))
+        s.append("<section class=\"caution\" id=\"caution\">\n<h2>Caution</h2>\n<p>").append(Html.escape(Caution.TEXT))
                 .append("</p>\n</section>\n<script>\n").append(SCRIPT).append("</script>\n</body>\n</html>\n");
         out.write(s.toString());
     }
@@ -87,6 +87,9 @@ public final class HtmlReportWriter {
             s.append("</ul></div>\n");
         }
         tables.totals(s, r.totals());
+        s.append("<p class=\"caution-short\"><strong>Estimates only:</strong> worked out from the drawn centre-lines "
+                + "and the section data; not for lifting or structural decisions on their own. "
+                + "<a href=\"#caution\">Read the caution</a>.</p>\n");
 
         Map<String, Integer> markIndex = new LinkedHashMap<>();
         for (MarkResult m : r.groups()) {
@@ -95,15 +98,27 @@ public final class HtmlReportWriter {
         for (PieceResult p : r.pieces()) {
             markIndex.putIfAbsent(p.mark() == null ? "" : p.mark(), markIndex.size());
         }
-        List<View> views = View.choose(extent(report));
+        List<List<Vec3>> lines = new ArrayList<>();
+        List<PieceResult> owners = new ArrayList<>();
+        for (PieceResult p : r.pieces()) {
+            List<Vec3> shape = report.shape(p.id());
+            if (shape.size() < 2 && p.startM() != null && p.endM() != null) {
+                shape = List.of(p.startM(), p.endM());
+            }
+            if (shape.size() >= 2) {
+                lines.add(shape);
+                owners.add(p);
+            }
+        }
+        legend(s, markIndex, r);
+        List<View> views = View.choose(extent(report), lines);
         boolean primary = true;
         for (View v : views) {
             s.append("<figure>\n<figcaption>").append(Html.escape(v.title))
                     .append(" &mdash; scroll to zoom, drag to pan, double-click to reset</figcaption>\n")
-                    .append(SvgView.render(report, v, units, ids, markIndex, primary)).append("</figure>\n");
+                    .append(SvgView.render(r, lines, owners, v, units, ids, markIndex, primary)).append("</figure>\n");
             primary = false;
         }
-        legend(s, markIndex, r);
         tables.bom(s, r);
         tables.layers(s, r);
         tables.findings(s, r, ids);
@@ -171,8 +186,16 @@ public final class HtmlReportWriter {
             }
             s.append("</li>\n");
         }
-        s.append("<li><svg width=\"18\" height=\"18\" aria-hidden=\"true\"><g class=\"cog\"><circle cx=\"9\" cy=\"9\" "
-                + "r=\"7\"/></g></svg> centre of gravity</li>\n</ul>\n");
+        s.append("<li><svg width=\"18\" height=\"18\" aria-hidden=\"true\"><g class=\"cog\" transform=\"translate(9,9)\">"
+                + "<circle r=\"7\"/><path d=\"M0,0 h7 a7,7 0 0,0 -7,-7 z M0,0 h-7 a7,7 0 0,0 7,7 z\"/></g></svg> "
+                + (r.totals().centroidM() != null ? "centre of gravity (CG)" : "length centroid (CG; no mass known)")
+                + "</li>\n");
+        for (String sev : r.findings().isEmpty() ? new String[0] : new String[] {"error", "warning", "info"}) {
+            s.append("<li><svg width=\"22\" height=\"22\" aria-hidden=\"true\"><g class=\"marker ").append(sev)
+                    .append("\"><circle class=\"balloon\" cx=\"11\" cy=\"11\" r=\"9\"/><text x=\"11\" y=\"15\">n</text>"
+                            + "</g></svg> finding n: ").append(sev.equals("info") ? "note" : sev).append("</li>\n");
+        }
+        s.append("</ul>\n");
     }
 
 

@@ -24,20 +24,29 @@ final class HtmlTables {
 
     void totals(StringBuilder s, Totals t) {
         s.append("<table class=\"totals\">\n");
-        row(s, "Length [" + units.longUnit() + "]", units.longLength(t.lengthM())
-                + (t.drawnLengthM() != t.lengthM() ? " (drawn " + units.longLength(t.drawnLengthM())
-                        + "; material drawn twice counted once)" : ""));
+        String length = units.longLengthReadable(t.lengthM());
+        String drawn = units.longLengthReadable(t.drawnLengthM());
+        // only when the difference shows at the printed precision
+        row(s, "Length [" + units.longUnit() + "]", length
+                + (!drawn.equals(length) ? " (drawn " + drawn + "; material drawn twice counted once)" : ""));
         row(s, "Mass [" + units.massUnit() + "]", t.massKg() == null ? "unknown: no layer has a section"
-                : units.mass(t.massKg()) + (t.massComplete() ? "" : " (only the layers that have a section)"));
+                : units.massReadable(t.massKg()) + (t.massComplete() ? "" : " (only the layers that have a section)"));
         Vec3 g = t.centroidM();
-        row(s, "Centre of gravity [" + units.longUnit() + "]", g == null ? "unknown" : point(g));
+        int extra = units.extraDecimalsFor(t.lengthM());
+        row(s, "Centre of gravity [" + units.longUnit() + "]", g == null ? "unknown" : point(g, extra));
         Vec3 lc = t.lengthCentroidM();
-        row(s, "Length centroid [" + units.longUnit() + "]", lc == null ? "none" : point(lc));
+        row(s, "Length centroid [" + units.longUnit() + "]", lc == null ? "none" : point(lc, extra));
         s.append("</table>\n");
     }
 
     String point(Vec3 g) {
-        return "x " + units.longLength(g.x()) + ", y " + units.longLength(g.y()) + ", z " + units.longLength(g.z());
+        return point(g, 0);
+    }
+
+    /** "x .., y .., z .." in the long unit with {@code extra} more decimals than usual. */
+    String point(Vec3 g, int extra) {
+        return "x " + units.longLength(g.x(), extra) + ", y " + units.longLength(g.y(), extra) + ", z "
+                + units.longLength(g.z(), extra);
     }
 
     static void row(StringBuilder s, String name, String value) {
@@ -66,7 +75,7 @@ final class HtmlTables {
             cell(s, m.material(), false);
             cell(s, units.shortLength(m.lengthEachM()), true);
             cell(s, Integer.toString(m.bendsEach()), true);
-            cell(s, units.mass(m.massEachKg()), true);
+            cell(s, units.massReadable(m.massEachKg()), true);
             cell(s, units.mass(m.massTotalKg()), true);
             cell(s, m.layer(), false);
             s.append("</tr>\n");
@@ -114,8 +123,8 @@ final class HtmlTables {
             return;
         }
         String lu = units.longUnit();
-        s.append("<table class=\"data\">\n<tr><th>#</th><th>severity</th><th>kind</th><th>where [").append(lu)
-                .append("]</th><th>size [").append(units.shortUnit()).append("]</th><th>layer</th><th>entities (line:handle)</th>")
+        s.append("<table class=\"data\">\n<tr><th>#</th><th>severity</th><th>kind</th><th>x [").append(lu)
+                .append("]</th><th>y [").append(lu).append("]</th><th>z [").append(lu).append("]</th><th>size [").append(units.shortUnit()).append("]</th><th>layer</th><th>entities (line:handle)</th>")
                 .append("<th>message</th></tr>\n");
         int n = 0;
         for (Finding f : r.findings()) {
@@ -123,14 +132,18 @@ final class HtmlTables {
             s.append("<tr id=\"").append(ids).append("finding-").append(n).append("\" class=\"")
                     .append(f.severity().jsonName()).append("\"><td>");
             if (f.atM() != null && f.atM().isFinite()) {
-                s.append("<a href=\"#").append(ids).append("marker-").append(n).append("\">").append(n).append("</a>");
+                s.append("<a href=\"#").append(ids).append("marker-").append(n).append("\" title=\"show in the picture\">")
+                        .append(n).append("</a>");
             } else {
                 s.append(n);
             }
             s.append("</td>");
             cell(s, f.severity().jsonName(), false);
             cell(s, f.kind(), false);
-            cell(s, f.atM() == null ? "" : point(f.atM()), false);
+            Vec3 at = f.atM();
+            cell(s, at == null ? "" : units.longLength(at.x()), true);
+            cell(s, at == null ? "" : units.longLength(at.y()), true);
+            cell(s, at == null ? "" : units.longLength(at.z()), true);
             cell(s, units.defectSize(f.sizeM()), true);
             cell(s, f.layer(), false);
             StringBuilder refs = new StringBuilder();

@@ -2,54 +2,58 @@ package org.linemass.reports.html;
 
 import java.math.BigDecimal;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.PieceResult;
+import org.linemass.engine.result.Severity;
 import org.linemass.geometry.Vec3;
-import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
 
 /**
  * One SVG picture of a drawing in one {@link View}: every piece as a polyline coloured by its
- * mark (its sampled shape when the report has one, else the straight line from start to end), a
- * numbered marker at each finding linking to its row of the findings table, the centre of gravity
- * (or, without mass, the length centroid) as a quartered circle, and a scale bar. Picture units
- * are pixels of the initial view; strokes keep their width when zoomed.
+ * mark, a marker at each finding (a ring exactly at the place, a leader line and a numbered
+ * balloon placed by {@link MarkerLayout}) linking to its row of the findings table, the centre
+ * of gravity (or, without mass, the length centroid) as a quartered circle whose tooltip gives
+ * its coordinates, and a scale bar. Picture units are pixels of the initial view. When the page
+ * is zoomed, strokes keep their width, and markers, the centre of gravity and the scale bar keep
+ * their size on screen: their groups carry {@code data-x}/{@code data-y} anchors that the page's
+ * script re-scales, and the scale bar is redrawn with a fitting length.
  */
 final class SvgView {
 
     /** Width and height of the area the drawing is fitted into, pixels. */
     private static final double FIT_W = 960;
     private static final double FIT_H = 560;
-    private static final double PAD = 30;
+    private static final double PAD = 40;
+    /** Room below the drawing for the scale bar, pixels. */
+    private static final double SCALE_ROOM = 40;
     /** Smallest extent fitted, metres: a drawing of one point still gets a finite scale. */
     private static final double MIN_EXTENT_M = 1e-3;
+    /** Balloon radius, px: two digits fit; three or more get {@link #WIDE_BALLOON_R}. */
+    private static final double BALLOON_R = 10;
+    private static final double WIDE_BALLOON_R = 13;
+    /** Notes (welds, junctions) get smaller balloons so errors and warnings stand out. */
+    private static final double NOTE_BALLOON_R = 8;
+    /** Ring drawn exactly at the finding's place, px. */
+    private static final double RING_R = 5;
+    /** Room kept between a balloon and the picture's edge, px. */
+    private static final double EDGE_MARGIN_PX = 4;
 
     private SvgView() {
     }
 
     /**
+     * @param lines the pieces to draw as polylines (world metres), one per entry of {@code owners}
      * @param ids prefix that makes element ids unique in a page with several drawings
      * @param markIndex colour index per mark
+     * @param primary whether this is the first view (its markers carry the ids the table links to)
      */
-    static String render(Report report, View view, UnitSystem units, String ids, Map<String, Integer> markIndex,
-            boolean primary) {
-        DrawingResult r = report.result();
-        List<List<Vec3>> lines = new ArrayList<>();
-        List<PieceResult> owners = new ArrayList<>();
-        for (PieceResult p : r.pieces()) {
-            List<Vec3> shape = report.shape(p.id());
-            if (shape.size() < 2 && p.startM() != null && p.endM() != null) {
-                shape = List.of(p.startM(), p.endM());
-            }
-            if (shape.size() >= 2) {
-                lines.add(shape);
-                owners.add(p);
-            }
-        }
+    static String render(DrawingResult r, List<List<Vec3>> lines, List<PieceResult> owners, View view,
+            UnitSystem units, String ids, Map<String, Integer> markIndex, boolean primary) {
         Vec3 cog = r.totals().centroidM() != null ? r.totals().centroidM() : r.totals().lengthCentroidM();
         double minU = Double.POSITIVE_INFINITY;
         double minV = Double.POSITIVE_INFINITY;
@@ -79,16 +83,40 @@ final class SvgView {
         double du = Math.max(maxU - minU, MIN_EXTENT_M);
         double dv = Math.max(maxV - minV, MIN_EXTENT_M);
         double k = Math.min(FIT_W / du, FIT_H / dv);
-        double w = (maxU - minU) * k + 2 * PAD;
-        double h = (maxV - minV) * k + 2 * PAD + 40;
-        Frame f = new Frame(view, minU, maxV, k);
+        // a drawing narrower than the fit box is centred in it
+        double w = Math.max((maxU - minU) * k, FIT_W / 2) + 2 * PAD;
+        double h = (maxV - minV) * k + 2 * PAD + SCALE_ROOM;
+        double left = PAD + (w - 2 * PAD - (maxU - minU) * k) / 2;
+        Frame f = new Frame(view, minU, maxV, k, left);
+
+        StringBuilder body = new StringBuilder();
+        pieces(body, lines, owners, f, units, markIndex);
+        if (cog != null && cog.isFinite()) {
+            cog(body, r, cog, f, units, ids, view);
+        }
+        // balloons near the edge may reach past the padding: the picture grows to show them whole
+        double[] reach = {0, 0, w, h};
+        markers(body, r, f, ids, view, primary, reach);
+        double x0 = reach[0];
+        double y0 = reach[1];
+        double vw = reach[2] - x0;
+        double vh = reach[3] - y0;
 
         StringBuilder s = new StringBuilder();
-        s.append("<svg class=\"view\" xmlns=\"http://www.w3.org/2000/svg\" viewBox=\"0 0 ")
-                .append(num(w)).append(' ').append(num(h)).append("\" width=\"").append(num(w))
-                .append("\" height=\"").append(num(h)).append("\" role=\"img\" aria-label=\"")
-                .append(Html.escape(view.title)).append("\">\n");
+        s.append("<svg class=\"view\" xmlns=\"http://www.w3.org/2000/svg\" viewBox=\"").append(num(x0)).append(' ')
+                .append(num(y0)).append(' ').append(num(vw)).append(' ').append(num(vh)).append("\" width=\"")
+                .append(num(vw)).append("\" height=\"").append(num(vh)).append("\" role=\"img\" aria-label=\"")
+                .append(Html.escape(view.title)).append("\" data-px-per-m=\"").append(num(k))
+                .append("\" data-units=\"").append(units.name().toLowerCase(Locale.ROOT)).append("\">\n");
         s.append("<rect class=\"paper\" x=\"-100000\" y=\"-100000\" width=\"200000\" height=\"200000\"/>\n");
+        s.append(body);
+        scaleBar(s, units, k, x0, reach[3]);
+        s.append("</svg>\n");
+        return s.toString();
+    }
+
+    private static void pieces(StringBuilder s, List<List<Vec3>> lines, List<PieceResult> owners, Frame f,
+            UnitSystem units, Map<String, Integer> markIndex) {
         for (int i = 0; i < lines.size(); i++) {
             PieceResult p = owners.get(i);
             int idx = markIndex.getOrDefault(p.mark() == null ? "" : p.mark(), 0);
@@ -106,44 +134,95 @@ final class SvgView {
                     .append(units.shortLength(p.lengthM())).append(' ').append(units.shortUnit())
                     .append("</title></polyline>\n");
         }
-        if (cog != null && cog.isFinite()) {
-            double x = f.x(cog);
-            double y = f.y(cog);
-            s.append("<g class=\"cog\" id=\"").append(ids).append("cog-").append(view.name().toLowerCase(Locale.ROOT))
-                    .append("\"><title>").append(r.totals().centroidM() != null ? "centre of gravity" : "length centroid")
-                    .append("</title><circle cx=\"").append(num(x)).append("\" cy=\"").append(num(y))
-                    .append("\" r=\"8\"/><path d=\"M").append(num(x)).append(',').append(num(y)).append(" h8 a8,8 0 0,0 -8,-8 z M")
-                    .append(num(x)).append(',').append(num(y)).append(" h-8 a8,8 0 0,0 8,8 z\"/></g>\n");
-        }
+    }
+
+    private static void cog(StringBuilder s, DrawingResult r, Vec3 cog, Frame f, UnitSystem units, String ids,
+            View view) {
+        String what = r.totals().centroidM() != null ? "centre of gravity" : "length centroid (no mass known)";
+        int extra = units.extraDecimalsFor(r.totals().lengthM());
+        String at = "x " + units.longLength(cog.x(), extra) + ", y " + units.longLength(cog.y(), extra) + ", z "
+                + units.longLength(cog.z(), extra) + " " + units.longUnit();
+        s.append("<g class=\"cog fixed\" id=\"").append(ids).append("cog-").append(view.name().toLowerCase(Locale.ROOT))
+                .append('"');
+        anchor(s, f.x(cog), f.y(cog));
+        s.append("><title>").append(Html.escape(what + ": " + at)).append("</title>")
+                .append("<circle r=\"8\"/><path d=\"M0,0 h8 a8,8 0 0,0 -8,-8 z M0,0 h-8 a8,8 0 0,0 8,8 z\"/>")
+                .append("<text class=\"cog-label\" x=\"11\" y=\"16\">CG</text></g>\n");
+    }
+
+    /**
+     * Writes the markers; widens {@code reach} (min x, min y, max x, max y, picture px) to take in
+     * every balloon with a margin.
+     */
+    private static void markers(StringBuilder s, DrawingResult r, Frame f, String ids, View view, boolean primary,
+            double[] reach) {
+        List<Integer> numbers = new ArrayList<>();
+        List<Finding> placed = new ArrayList<>();
         int n = 0;
         for (Finding fd : r.findings()) {
             n++;
-            if (fd.atM() == null || !fd.atM().isFinite()) {
-                continue;
+            if (fd.atM() != null && fd.atM().isFinite()) {
+                numbers.add(n);
+                placed.add(fd);
             }
-            String marker = ids + "marker-" + n + (primary ? "" : "-" + view.name().toLowerCase(Locale.ROOT));
-            s.append("<a class=\"marker ").append(fd.severity().jsonName()).append("\" id=\"").append(marker)
-                    .append("\" href=\"#").append(ids).append("finding-").append(n).append("\"><title>")
-                    .append(n).append(": ").append(Html.escape(fd.message())).append("</title><circle cx=\"")
-                    .append(num(f.x(fd.atM()))).append("\" cy=\"").append(num(f.y(fd.atM())))
-                    .append("\" r=\"10\"/><text x=\"").append(num(f.x(fd.atM()))).append("\" y=\"")
-                    .append(num(f.y(fd.atM()) + 4)).append("\">").append(n).append("</text></a>\n");
         }
-        scaleBar(s, units, k, h);
-        s.append("</svg>\n");
-        return s.toString();
+        double[] xs = new double[placed.size()];
+        double[] ys = new double[placed.size()];
+        for (int i = 0; i < placed.size(); i++) {
+            xs[i] = f.x(placed.get(i).atM());
+            ys[i] = f.y(placed.get(i).atM());
+        }
+        List<MarkerLayout.Offset> offsets = MarkerLayout.place(xs, ys);
+        // notes first, errors last: later elements are drawn on top, so an error is never hidden by a note
+        List<Integer> order = new ArrayList<>();
+        for (int i = 0; i < placed.size(); i++) {
+            order.add(i);
+        }
+        order.sort(Comparator.comparingInt((Integer i) -> placed.get(i).severity().ordinal()));
+        for (int i : order) {
+            Finding fd = placed.get(i);
+            int num = numbers.get(i);
+            MarkerLayout.Offset o = offsets.get(i);
+            String marker = ids + "marker-" + num + (primary ? "" : "-" + view.name().toLowerCase(Locale.ROOT));
+            boolean wide = Integer.toString(num).length() > 2;
+            double br = fd.severity() == Severity.INFO ? (wide ? BALLOON_R : NOTE_BALLOON_R)
+                    : wide ? WIDE_BALLOON_R : BALLOON_R;
+            double margin = br + EDGE_MARGIN_PX;
+            reach[0] = Math.min(reach[0], xs[i] + o.dx() - margin);
+            reach[1] = Math.min(reach[1], ys[i] + o.dy() - margin);
+            reach[2] = Math.max(reach[2], xs[i] + o.dx() + margin);
+            reach[3] = Math.max(reach[3], ys[i] + o.dy() + margin);
+            double len = Math.hypot(o.dx(), o.dy());
+            double lead = Math.max(0, len - br) / Math.max(len, 1);
+            s.append("<a class=\"marker fixed ").append(fd.severity().jsonName()).append("\" id=\"").append(marker)
+                    .append("\" href=\"#").append(ids).append("finding-").append(num).append('"');
+            anchor(s, xs[i], ys[i]);
+            s.append("><title>").append(num).append(" (").append(fd.severity().jsonName()).append(", ")
+                    .append(Html.escape(fd.kind())).append("): ").append(Html.escape(fd.message()))
+                    .append("</title><circle class=\"ring\" r=\"").append(num(RING_R)).append("\"/>")
+                    .append("<line x1=\"0\" y1=\"0\" x2=\"").append(num(o.dx() * lead)).append("\" y2=\"")
+                    .append(num(o.dy() * lead)).append("\"/><circle class=\"balloon\" cx=\"").append(num(o.dx()))
+                    .append("\" cy=\"").append(num(o.dy())).append("\" r=\"").append(num(br))
+                    .append("\"/><text x=\"").append(num(o.dx())).append("\" y=\"")
+                    .append(num(o.dy() + (fd.severity() == Severity.INFO ? 3 : 4)))
+                    .append("\">").append(num).append("</text></a>\n");
+        }
     }
 
-    private static void scaleBar(StringBuilder s, UnitSystem units, double pxPerM, double h) {
-        double unitM = units == UnitSystem.IMPERIAL ? 0.3048 : 1.0;
-        double target = (FIT_W / 5) / pxPerM / unitM;
-        double length = niceBelow(target);
-        double px = length * unitM * pxPerM;
-        double y = h - 18;
-        s.append("<g class=\"scale\"><path d=\"M").append(num(PAD)).append(',').append(num(y - 5)).append(" v5 h")
-                .append(num(px)).append(" v-5\"/><text x=\"").append(num(PAD + px + 6)).append("\" y=\"")
-                .append(num(y)).append("\">").append(new BigDecimal(Double.toString(length)).stripTrailingZeros()
-                        .toPlainString()).append(' ').append(units.longUnit()).append("</text></g>\n");
+    /** transform and data attributes of a group drawn at screen size around picture point (x, y). */
+    private static void anchor(StringBuilder s, double x, double y) {
+        s.append(" data-x=\"").append(num(x)).append("\" data-y=\"").append(num(y)).append("\" transform=\"translate(")
+                .append(num(x)).append(',').append(num(y)).append(")\"");
+    }
+
+    /** The scale bar at the bottom left of a picture whose view box starts at x0 and ends at bottom. */
+    private static void scaleBar(StringBuilder s, UnitSystem units, double pxPerM, double x0, double bottom) {
+        ScaleBar bar = ScaleBar.fitting(units, FIT_W / 5 / pxPerM);
+        double px = bar.metres() * pxPerM;
+        double y = bottom - 18;
+        s.append("<g class=\"scale\"><path d=\"M").append(num(x0 + PAD)).append(',').append(num(y - 5))
+                .append(" v5 h").append(num(px)).append(" v-5\"/><text x=\"").append(num(x0 + PAD + px + 6))
+                .append("\" y=\"").append(num(y)).append("\">").append(bar.label()).append("</text></g>\n");
     }
 
     /** The largest of 1, 2, 5 times a power of ten not above {@code x} (x > 0). */
@@ -158,10 +237,32 @@ final class SvgView {
         return UnitSystem.fixed(v, 2);
     }
 
+    /**
+     * A scale bar's length: the largest 1-2-5 value not above the wanted length, in the long unit
+     * (m, ft) from one long unit up, else in the short unit (mm, in), so a small part reads
+     * "20 mm", not "0.02 m". The page's script repeats this rule when the picture is zoomed.
+     */
+    record ScaleBar(double metres, String label) {
+        static ScaleBar fitting(UnitSystem units, double wantedM) {
+            double longM = units == UnitSystem.IMPERIAL ? 0.3048 : 1.0;
+            double shortM = units == UnitSystem.IMPERIAL ? 0.0254 : 0.001;
+            if (wantedM >= longM) {
+                double n = niceBelow(wantedM / longM);
+                return new ScaleBar(n * longM, plain(n) + " " + units.longUnit());
+            }
+            double n = niceBelow(wantedM / shortM);
+            return new ScaleBar(n * shortM, plain(n) + " " + units.shortUnit());
+        }
+
+        private static String plain(double v) {
+            return new BigDecimal(Double.toString(v)).stripTrailingZeros().toPlainString();
+        }
+    }
+
     /** World to picture: u grows right, v grows up (picture y grows down). */
-    private record Frame(View view, double minU, double maxV, double k) {
+    private record Frame(View view, double minU, double maxV, double k, double left) {
         double x(Vec3 p) {
-            return PAD + (view.u(p) - minU) * k;
+            return left + (view.u(p) - minU) * k;
         }
 
         double y(Vec3 p) {

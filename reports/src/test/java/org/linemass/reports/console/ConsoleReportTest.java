@@ -6,8 +6,14 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.PrintWriter;
 import java.io.StringWriter;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.linemass.engine.result.DrawingResult;
+import org.linemass.engine.result.Finding;
+import org.linemass.engine.result.FindingKind;
+import org.linemass.engine.result.Severity;
+import org.linemass.geometry.Vec3;
 import org.linemass.reports.Fixtures;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
@@ -132,5 +138,32 @@ class ConsoleReportTest {
         String s = print(List.of(Report.of(Fixtures.frame("a.dxf", 0, true))), UnitSystem.METRIC, false, false);
         assertTrue(s.contains("incomplete: SPLINE at line 400 skipped"), s);
         assertTrue(s.contains("NO: some of the drawing was not counted"));
+    }
+
+    @Test
+    void print_manyNotes_summedUpAfterErrorsAndWarnings() {
+        DrawingResult base = Fixtures.flatFrame("weld.dxf");
+        List<Finding> findings = new ArrayList<>();
+        for (int i = 0; i < ConsoleReport.NOTES_LISTED + 2; i++) {
+            findings.add(new Finding(FindingKind.CROSSING, Severity.INFO, new Vec3(0.1 * i, 0, 0), null, "BARS",
+                    List.of(), null, "weld note " + i));
+        }
+        findings.addAll(base.findings().subList(0, 2));
+        DrawingResult r = new DrawingResult(base.drawing(), base.entities(), base.layers(), base.pieces(), base.groups(),
+                findings, base.totals(), base.sections(), base.incompleteReasons());
+        String s = print(List.of(Report.of(r)), UnitSystem.METRIC, false, false);
+        String table = s.substring(s.indexOf("Findings"));
+        assertFalse(table.contains("weld note"), "notes are not listed one by one");
+        assertTrue(table.contains("12 notes not listed here (12 " + FindingKind.CROSSING + ")"), table);
+        // the error keeps its number 13 (the order of every report) and comes first
+        assertTrue(table.matches("(?s).*\\n\\s+13\\s+error.*\\n\\s+14\\s+warning.*"), table);
+    }
+
+    @Test
+    void print_fewNotes_listedAfterErrorsAndWarnings() {
+        String s = print(List.of(Report.of(Fixtures.flatFrame("a.dxf"))), UnitSystem.METRIC, false, false);
+        String table = s.substring(s.indexOf("Findings"));
+        assertTrue(table.indexOf("error") < table.indexOf("warning") && table.indexOf("warning") < table.indexOf("info"),
+                table);
     }
 }

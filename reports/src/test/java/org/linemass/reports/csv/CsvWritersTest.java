@@ -73,7 +73,8 @@ class CsvWritersTest {
         assertEquals("piece", rows.get(0).get(0));
         assertTrue(rows.get(0).contains("length [mm]"));
         assertEquals("1", rows.get(1).get(0));
-        assertEquals("120:2A", rows.get(1).get(rows.get(1).size() - 1));
+        // spelled out: a spreadsheet would read "120:2A"-like "1911:32" as a time of day
+        assertEquals("line 120 handle 2A", rows.get(1).get(rows.get(1).size() - 1));
         assertEquals(Fixtures.SCRIPT_LAYER, rows.get(3).get(2));
         assertEquals("'" + Fixtures.FORMULA_MARK, rows.get(3).get(1));
         // cog x of bar 1 is its midpoint 0.5 m (closed form)
@@ -89,10 +90,49 @@ class CsvWritersTest {
                 "entities", "message"), rows.get(0));
         // 1.0005 m shown with 3 decimals rounds half up (java.util.Formatter)
         // defect sizes get 3 decimals in mm so that a 0.05 mm gap does not read as 0.0
-        assertEquals(List.of("1", "gap", "error", "1.001", "0.000", "0.000", "1.000", "BARS", "", "120:2A",
+        assertEquals(List.of("1", "gap", "error", "1.001", "0.000", "0.000", "1.000", "BARS", "", "line 120 handle 2A",
                 "ends 1 mm apart on layer BARS were not joined"), rows.get(1));
-        assertEquals("134:2B 120:2A", rows.get(2).get(9));
+        assertEquals("line 134 handle 2B; line 120 handle 2A", rows.get(2).get(9));
         assertEquals("'-1+1 message starting with a minus", rows.get(3).get(10));
         assertEquals("", rows.get(3).get(3));
+    }
+
+    /**
+     * What a spreadsheet needs to open the files as tables: every row as wide as the header, and
+     * every cell under a header with a unit in brackets (and the counts) either empty or a plain
+     * number with a dot, so it lands in the cell as a number in any locale setting of the import.
+     * The files were also opened with a spreadsheet program (UTF-8 import): all numeric columns came
+     * in as numbers, entity lists as text.
+     */
+    @Test
+    void allCsvs_rectangularAndNumericColumnsParse() throws IOException {
+        List<Report> reports = List.of(Report.of(Fixtures.flatFrame("a.dxf")), Report.of(Fixtures.frame("b.dxf", 0.3, true)));
+        for (UnitSystem u : UnitSystem.values()) {
+            StringWriter bom = new StringWriter();
+            BomCsvWriter.write(reports, u, bom);
+            StringWriter pieces = new StringWriter();
+            PiecesCsvWriter.write(reports, u, pieces);
+            StringWriter findings = new StringWriter();
+            FindingsCsvWriter.write(reports, u, findings);
+            for (String csv : List.of(bom.toString(), pieces.toString(), findings.toString())) {
+                List<List<String>> rows = CsvParse.parse(csv);
+                List<String> head = rows.get(0);
+                for (List<String> row : rows) {
+                    assertEquals(head.size(), row.size(), "row " + row + " under " + head);
+                    if (row.get(0).equals("NOTE") || row.size() > 1 && row.get(1).equals("NOTE")) {
+                        continue;
+                    }
+                    for (int c = 0; c < head.size(); c++) {
+                        String h = head.get(c);
+                        boolean numeric = h.contains("[") || h.equals("quantity") || h.equals("bends each")
+                                || h.equals("piece") || h.equals("number") || h.equals("segments") || h.equals("bends");
+                        String cell = row.get(c);
+                        if (numeric && row != head && !cell.isEmpty()) {
+                            assertTrue(cell.matches("-?[0-9]+(\\.[0-9]+)?"), h + " = '" + cell + "' is not a plain number");
+                        }
+                    }
+                }
+            }
+        }
     }
 }

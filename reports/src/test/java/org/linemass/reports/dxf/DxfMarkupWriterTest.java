@@ -16,6 +16,10 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import org.linemass.engine.result.DrawingResult;
+import org.linemass.engine.result.Finding;
+import org.linemass.engine.result.FindingKind;
+import org.linemass.engine.result.Severity;
+import org.linemass.geometry.Vec3;
 import org.linemass.importer.DxfImporter;
 import org.linemass.importer.DxfInputException;
 import org.linemass.importer.ImportOptions;
@@ -61,8 +65,9 @@ class DxfMarkupWriterTest {
         String out = markup(R12.getBytes(StandardCharsets.ISO_8859_1), r);
         assertFalse(out.replace("\r\n", "").contains("\n"), "line ends stay CR LF");
         List<Pair> pairs = DxfPairScanner.scan(out);
-        assertEquals(DxfPairScanner.scan(R12).stream().map(DxfMarkupWriterTest::key).toList(),
-                withoutMarkup(pairs).stream().map(DxfMarkupWriterTest::key).toList(), "original pairs untouched");
+        assertEquals(withoutRaisedValues(DxfPairScanner.scan(R12)), withoutRaisedValues(withoutMarkup(pairs)),
+                "original pairs untouched apart from the LAYER table's entry count");
+        assertLayerCountMatchesRecords(pairs);
         // two findings have a place, plus the centre-of-gravity circle
         assertEquals(3, countEntities(pairs, "CIRCLE"));
         assertEquals(3, countEntities(pairs, "TEXT"));
@@ -82,31 +87,137 @@ class DxfMarkupWriterTest {
         byte[] original = Files.readAllBytes(demo);
         String out = markup(original, Fixtures.frame("garden-planter.dxf", 0.3, false));
         List<Pair> pairs = DxfPairScanner.scan(out);
-        List<String> before = withoutHandseed(DxfPairScanner.scan(new String(original, StandardCharsets.ISO_8859_1)));
-        List<String> after = withoutHandseed(withoutMarkup(pairs));
-        assertTrue(before.equals(after), "original pairs untouched apart from $HANDSEED");
-        Set<String> handles = new HashSet<>();
-        long max = 0;
-        boolean inHeader = true;
-        String seed = null;
-        for (int i = 0; i < pairs.size(); i++) {
-            Pair p = pairs.get(i);
-            if (p.code() == 0 && p.value().equals("ENDSEC")) {
-                inHeader = false;
-            }
-            if (inHeader && p.code() == 9 && p.value().equals("$HANDSEED")) {
-                seed = pairs.get(i + 1).value();
-            } else if (!inHeader && p.code() == 5) {
-                assertTrue(handles.add(p.value()), "handle " + p.value() + " used twice");
-                max = Math.max(max, Long.parseLong(p.value(), 16));
-            }
-        }
-        assertTrue(seed != null && Long.parseLong(seed, 16) > max, "$HANDSEED above every handle");
+        List<String> before = withoutRaisedValues(DxfPairScanner.scan(new String(original, StandardCharsets.ISO_8859_1)));
+        List<String> after = withoutRaisedValues(withoutMarkup(pairs));
+        assertTrue(before.equals(after), "original pairs untouched apart from $HANDSEED and the LAYER count");
+        assertLayerCountMatchesRecords(pairs);
+        assertHandlesUniqueBelowSeed(pairs);
         assertTrue(out.contains("AcDbCircle"));
         // the markup entities come after the last original entity and before ENDSEC of ENTITIES
         int text = out.indexOf("GARDEN PLANTER FRAME - DEMO");
         int firstMarkup = out.indexOf("\n" + DxfMarkupWriter.LAYER + "\n", out.indexOf("ENTITIES"));
         assertTrue(text < firstMarkup && firstMarkup < out.indexOf("OBJECTS"));
+    }
+
+    /**
+     * Every corpus drawing (R12 with handles, R2000, R2018): the marked-up copy keeps every original
+     * pair, its LAYER table count (group 70) equals its LAYER records, and its handles are unique and
+     * below $HANDSEED. The same copies were also opened with an independent DXF library (see
+     * docs/markup-dxf-checks.md): it read every one, its audit found no new error, and it listed the
+     * added layer in the LAYER table; this test pins the properties that check depended on.
+     */
+    @Test
+    void write_corpusDrawings_structureStaysValid() throws IOException {
+        Path corpus = repo() == null ? null : repo().resolve("../shared/corpus").normalize();
+        assumeTrue(corpus != null && Files.isDirectory(corpus),
+                "../shared/corpus not present beside the checkout; corpus checks skipped");
+        List<Path> files;
+        try (var list = Files.list(corpus)) {
+            files = list.filter(f -> f.getFileName().toString().endsWith(".dxf")).sorted().toList();
+        }
+        assumeTrue(!files.isEmpty(), "../shared/corpus has no drawings; corpus checks skipped");
+        for (Path f : files) {
+            byte[] original = Files.readAllBytes(f);
+            String out = markup(original, Fixtures.frame(f.getFileName().toString(), 0.3, false));
+            List<Pair> pairs = DxfPairScanner.scan(out);
+            assertEquals(withoutRaisedValues(DxfPairScanner.scan(new String(original, StandardCharsets.ISO_8859_1))),
+                    withoutRaisedValues(withoutMarkup(pairs)), f + ": original pairs untouched");
+            assertLayerCountMatchesRecords(pairs);
+            assertHandlesUniqueBelowSeed(pairs);
+            assertTrue(indexOf(pairs, 2, DxfMarkupWriter.LAYER) > 0, f + ": layer record added");
+        }
+    }
+
+    @Test
+    void write_r12WithHandles_newRecordsGetHandles() throws IOException {
+        String withHandles = R12.replace("AC1009\r\n0\r\nENDSEC",
+                "AC1009\r\n9\r\n$HANDLING\r\n70\r\n1\r\n9\r\n$HANDSEED\r\n5\r\n30\r\n0\r\nENDSEC")
+                .replaceFirst("0\r\nLINE\r\n8", "0\r\nLINE\r\n5\r\n2A\r\n8")
+                .replaceFirst("0\r\nLINE\r\n8", "0\r\nLINE\r\n5\r\n2B\r\n8");
+        assertTrue(withHandles.contains("$HANDLING") && withHandles.contains("5\r\n2A"), "fixture edited");
+        List<Pair> pairs = DxfPairScanner.scan(markup(withHandles.getBytes(StandardCharsets.ISO_8859_1),
+                Fixtures.flatFrame("bars.dxf")));
+        assertHandlesUniqueBelowSeed(pairs);
+        int circle = indexOf(pairs, 0, "CIRCLE");
+        assertEquals(5, pairs.get(circle + 1).code(), "R12 entity handle right after its type");
+        // the first free handle follows $HANDSEED 30 (the seed is the next handle to use)
+        Pair layerHandle = pairs.get(indexOf(pairs, 2, DxfMarkupWriter.LAYER) - 1);
+        assertEquals("5|30", key(layerHandle), "the added layer takes the first free handle");
+    }
+
+    private static void assertLayerCountMatchesRecords(List<Pair> pairs) {
+        int table = -1;
+        for (int i = 0; i + 1 < pairs.size(); i++) {
+            if (pairs.get(i).code() == 0 && pairs.get(i).value().equals("TABLE") && pairs.get(i + 1).value().equals("LAYER")) {
+                table = i;
+                break;
+            }
+        }
+        assertTrue(table >= 0, "LAYER table present");
+        Integer count = null;
+        int records = 0;
+        for (int i = table + 1; i < pairs.size(); i++) {
+            Pair p = pairs.get(i);
+            if (p.code() == 0 && p.value().equals("ENDTAB")) {
+                break;
+            }
+            if (p.code() == 0 && p.value().equals("LAYER")) {
+                records++;
+            } else if (p.code() == 70 && records == 0 && count == null) {
+                count = Integer.parseInt(p.value());
+            }
+        }
+        assertEquals(records, count, "LAYER table count (group 70) equals its records");
+    }
+
+    private static void assertHandlesUniqueBelowSeed(List<Pair> pairs) {
+        Set<String> handles = new HashSet<>();
+        long max = 0;
+        boolean inHeader = true;
+        String seed = null;
+        String record = "";
+        for (int i = 0; i < pairs.size(); i++) {
+            Pair p = pairs.get(i);
+            if (p.code() == 0) {
+                record = p.value();
+            }
+            if (p.code() == 0 && p.value().equals("ENDSEC")) {
+                inHeader = false;
+            }
+            // group 5 of a DIMSTYLE is a block name, not a handle (DXF reference, DIMSTYLE group codes)
+            if (inHeader && p.code() == 9 && p.value().equals("$HANDSEED")) {
+                seed = pairs.get(i + 1).value();
+            } else if (!inHeader && (p.code() == 105 || p.code() == 5 && !record.equals("DIMSTYLE"))) {
+                assertTrue(handles.add(p.value()), "handle " + p.value() + " used twice");
+                max = Math.max(max, Long.parseLong(p.value(), 16));
+            }
+        }
+        assertTrue(seed != null && Long.parseLong(seed, 16) > max, "$HANDSEED above every handle");
+    }
+
+    @Test
+    void write_findingsAtOnePlace_labelsStacked() throws IOException {
+        DrawingResult base = Fixtures.flatFrame("bars.dxf");
+        List<Finding> findings = new ArrayList<>();
+        for (int i = 0; i < 3; i++) {
+            findings.add(new Finding(FindingKind.CROSSING, Severity.INFO, new Vec3(0.5, 0, 0), null, "BARS", List.of(),
+                    null, "weld " + i));
+        }
+        DrawingResult r = new DrawingResult(base.drawing(), base.entities(), base.layers(), base.pieces(), base.groups(),
+                findings, base.totals(), base.sections(), base.incompleteReasons());
+        List<Pair> pairs = DxfPairScanner.scan(markup(R12.getBytes(StandardCharsets.ISO_8859_1), r));
+        Set<String> labelYs = new HashSet<>();
+        for (int i = 0; i < pairs.size(); i++) {
+            if (pairs.get(i).code() == 0 && pairs.get(i).value().equals("TEXT")) {
+                for (int j = i + 1; j < pairs.size() && pairs.get(j).code() != 0; j++) {
+                    if (pairs.get(j).code() == 20) {
+                        labelYs.add(pairs.get(j).value());
+                    }
+                }
+            }
+        }
+        // three finding labels on three lines, plus the CG label
+        assertEquals(4, labelYs.size(), labelYs.toString());
     }
 
     @Test
@@ -154,13 +265,23 @@ class DxfMarkupWriterTest {
         }
     }
 
-    /** Pair keys with the value of $HANDSEED dropped (the writer raises it on purpose). */
-    private static List<String> withoutHandseed(List<Pair> pairs) {
+    /**
+     * Pair keys with the value of $HANDSEED and the LAYER table's entry count dropped (the writer
+     * raises both on purpose).
+     */
+    private static List<String> withoutRaisedValues(List<Pair> pairs) {
         List<String> keys = new ArrayList<>();
+        boolean layerTableHead = false;
         for (int i = 0; i < pairs.size(); i++) {
+            Pair p = pairs.get(i);
+            if (p.code() == 0) {
+                layerTableHead = p.value().equals("TABLE") && i + 1 < pairs.size()
+                        && pairs.get(i + 1).value().equals("LAYER");
+            }
             boolean seedValue = i > 0 && pairs.get(i - 1).code() == 9 && pairs.get(i - 1).value().equals("$HANDSEED");
-            if (!seedValue) {
-                keys.add(key(pairs.get(i)));
+            boolean layerCount = layerTableHead && p.code() == 70;
+            if (!seedValue && !layerCount) {
+                keys.add(key(p));
             }
         }
         return keys;

@@ -6,9 +6,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.io.StringWriter;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import org.linemass.engine.result.DrawingResult;
+import org.linemass.engine.result.Finding;
+import org.linemass.engine.result.FindingKind;
+import org.linemass.engine.result.Severity;
+import org.linemass.geometry.Vec3;
 import org.linemass.reports.Fixtures;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
@@ -47,7 +53,8 @@ class HtmlReportWriterTest {
         for (int n = 1; n <= 2; n++) {
             assertTrue(s.contains("id=\"marker-" + n + "\" href=\"#finding-" + n + "\""), "marker " + n);
             assertTrue(s.contains("<tr id=\"finding-" + n + "\""), "row " + n);
-            assertTrue(s.contains("<a href=\"#marker-" + n + "\">" + n + "</a>"), "row link " + n);
+            assertTrue(s.contains("<a href=\"#marker-" + n + "\" title=\"show in the picture\">" + n + "</a>"),
+                    "row link " + n);
         }
         // finding 3 has no place: a row but no marker
         assertTrue(s.contains("<tr id=\"finding-3\""));
@@ -64,8 +71,13 @@ class HtmlReportWriterTest {
         assertEquals(1, count(html(List.of(Report.of(Fixtures.flatFrame("a.dxf")))), "<svg class=\"view\""));
         // ring lifted 0.3 m above bars spanning 1 m: z extent 30 % of the horizontal one
         String s = html(List.of(Report.of(Fixtures.frame("a.dxf", 0.3, false))));
-        assertEquals(2, count(s, "<svg class=\"view\""));
-        assertTrue(s.contains("Front elevation"));
+        // extents 1 x 0.5 x 0.3 m: every extent at least 20 % of the largest, so an isometric view too;
+        // plan and front elevation both show 2 m of bar, the tie keeps the plan first
+        assertEquals(3, count(s, "<svg class=\"view\""));
+        int plan = s.indexOf("Plan view");
+        int front = s.indexOf("Front elevation");
+        int iso = s.indexOf("Isometric view");
+        assertTrue(plan >= 0 && plan < front && front < iso, "plan, front elevation, isometric in that order");
     }
 
     @Test
@@ -73,7 +85,10 @@ class HtmlReportWriterTest {
         String s = html(List.of(Report.of(Fixtures.flatFrame("a.dxf"))));
         assertTrue(s.contains("class=\"legend\""));
         assertTrue(s.contains("A <span class=\"note\">2 &times; B10, BARS</span>"), "legend names quantity, section, layer");
-        assertTrue(s.contains("<g class=\"cog\" id=\"cog-plan\""));
+        assertTrue(s.contains("<g class=\"cog fixed\" id=\"cog-plan\""));
+        // the centre of gravity's tooltip gives its coordinates in the report's units
+        assertTrue(Pattern.compile("<title>centre of gravity: x [0-9.]+, y [0-9.]+, z [0-9.]+ m</title>").matcher(s).find());
+        assertTrue(s.contains("href=\"#caution\""), "a short caution beside the totals links to the full one");
         assertTrue(s.contains("<g class=\"scale\">"));
         assertTrue(s.contains("BS 4449 nominal mass &lt;table 1&gt;"), "section source shown, escaped");
         assertTrue(s.contains("Caution"));
@@ -104,12 +119,48 @@ class HtmlReportWriterTest {
         double x0 = Double.parseDouble(bar.group(1));
         double x1 = Double.parseDouble(bar.group(3));
         double y1 = Double.parseDouble(bar.group(4));
-        Matcher marker = Pattern.compile("id=\"marker-1\".*?<circle cx=\"([0-9.]+)\" cy=\"([0-9.]+)\"").matcher(s);
+        Matcher marker = Pattern.compile("id=\"marker-1\" href=\"#finding-1\" data-x=\"([0-9.]+)\" data-y=\"([0-9.]+)\"")
+                .matcher(s);
         assertTrue(marker.find());
         double pxPerM = (x1 - x0) / 1.0;
         // positions are printed with 2 decimals: 0.01 px
         assertEquals(x1 + 0.0005 * pxPerM, Double.parseDouble(marker.group(1)), 0.011);
         assertEquals(y1, Double.parseDouble(marker.group(2)), 0.011);
+    }
+
+    @Test
+    void write_balloonsStayInsideThePicture() throws IOException {
+        // 30 notes at the drawing's corner (0, 0): their fan (radius 30 * 24 px / 2 pi = 115 px) is far
+        // wider than the 40 px padding, so the picture must grow to show it
+        DrawingResult base = Fixtures.flatFrame("a.dxf");
+        List<Finding> findings = new ArrayList<>(base.findings());
+        for (int i = 0; i < 30; i++) {
+            findings.add(new Finding(FindingKind.T_JUNCTION, Severity.INFO, Vec3.ZERO, null, "BARS", List.of(), null,
+                    "weld " + i));
+        }
+        DrawingResult r = new DrawingResult(base.drawing(), base.entities(), base.layers(), base.pieces(), base.groups(),
+                findings, base.totals(), base.sections(), base.incompleteReasons());
+        String s = html(List.of(Report.of(r)));
+        Matcher vb = Pattern.compile("viewBox=\"(-?[0-9.]+) (-?[0-9.]+) ([0-9.]+) ([0-9.]+)\"").matcher(s);
+        assertTrue(vb.find());
+        double x0 = Double.parseDouble(vb.group(1));
+        double y0 = Double.parseDouble(vb.group(2));
+        double x1 = x0 + Double.parseDouble(vb.group(3));
+        double y1 = y0 + Double.parseDouble(vb.group(4));
+        Matcher m = Pattern.compile("id=\"marker-[0-9]+\" href=\"#finding-[0-9]+\" data-x=\"(-?[0-9.]+)\" "
+                + "data-y=\"(-?[0-9.]+)\".*?<circle class=\"balloon\" cx=\"(-?[0-9.]+)\" cy=\"(-?[0-9.]+)\" "
+                + "r=\"([0-9.]+)\"").matcher(s);
+        int n = 0;
+        while (m.find()) {
+            n++;
+            double x = Double.parseDouble(m.group(1)) + Double.parseDouble(m.group(3));
+            double y = Double.parseDouble(m.group(2)) + Double.parseDouble(m.group(4));
+            double radius = Double.parseDouble(m.group(5));
+            assertTrue(x - radius >= x0 && x + radius <= x1 && y - radius >= y0 && y + radius <= y1,
+                    "balloon at " + x + "," + y + " outside " + vb.group());
+        }
+        assertEquals(32, n);
+        assertTrue(x0 < 0 && y1 > 0, "the view box grew past the origin");
     }
 
     @Test
