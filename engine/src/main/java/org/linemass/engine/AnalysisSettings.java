@@ -28,7 +28,7 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
         List<String> excludeLayers, boolean includeHiddenLayers, SectionTable sections,
         List<LayerAssignment> assignments, Map<String, String> densityExpressions, long maxExpandedSegments) {
 
-    public static final long DEFAULT_MAX_EXPANDED_SEGMENTS = 5_000_000L;
+    public static final long DEFAULT_MAX_EXPANDED_SEGMENTS = 2_000_000L;
 
     public AnalysisSettings {
         includeLayers = List.copyOf(includeLayers);

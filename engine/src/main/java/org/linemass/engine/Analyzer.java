@@ -121,6 +121,10 @@ public final class Analyzer {
                     pieces.piecesPerLayer(), pieces.fieldMassPerLayer(), world.isPresent(), plan);
             findings.addAll(layers.findings());
             findings.addAll(stageFindings);
+            if (stageFindings.stream().anyMatch(f -> FindingKind.LIMIT_REACHED.equals(f.kind()))) {
+                reasons.add("the drawing checks hit a resource limit (see the limit_reached findings); material"
+                        + " drawn twice may be counted twice");
+            }
             // most serious first, so finding 1 is the one to fix first; the sort is stable, so the
             // order within a severity (import notes, layers, then the piece stage's order) stays
             findings.sort(java.util.Comparator.comparing(Finding::severity).reversed());

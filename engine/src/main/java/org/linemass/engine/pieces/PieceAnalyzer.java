@@ -19,6 +19,8 @@ import org.linemass.engine.pieces.checks.TeeGapCheck;
 import org.linemass.engine.pieces.dedup.DedupResult;
 import org.linemass.engine.pieces.dedup.Deduplicator;
 import org.linemass.engine.pieces.geom.CandidatePairs;
+import org.linemass.engine.result.Severity;
+import org.linemass.engine.result.FindingKind;
 import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.engine.pieces.geom.DerivedIndex;
 import org.linemass.engine.pieces.geom.SegmentIndex;
@@ -68,6 +70,12 @@ public final class PieceAnalyzer {
         CandidatePairs pairs = CandidatePairs.of(index, world.size(), (i, j) -> true);
         DedupResult dedup = Deduplicator.run(world, pairs, tol.joinM(), cache);
         List<Finding> findings = new ArrayList<>(dedup.findings());
+        if (pairs.truncated()) {
+            findings.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
+                    "more than " + CandidatePairs.MAX_PAIRS + " pairs of segments lie on or against each other (many"
+                            + " copies drawn in one place?): duplicates, overlaps, T-junctions and crossings were"
+                            + " looked for among the first ones only, so material drawn twice may be counted twice"));
+        }
 
         List<Segment> joinable = new ArrayList<>(dedup.kept().size());
         int[] origin = new int[dedup.kept().size()];

@@ -85,6 +85,17 @@ final class BlockInstancer {
         return List.copyOf(reasons);
     }
 
+    /**
+     * False when block {@code block} placed with inherited layer {@code inherited} is known to hold
+     * no counted segment anywhere below it (so expanding its copies one by one would only burn time:
+     * an array of 10^10 copies of an empty block); true when it holds some or was never reached.
+     * Call after {@link #modelSpace}.
+     */
+    boolean placesSegments(String block, String inherited) {
+        LayerTotals t = memo.get(new Key(block, inherited));
+        return t == null || t.totalSegments() > 0;
+    }
+
     /** Moments of the model space content under {@code world}, a similarity of scale {@code scale}. */
     LayerTotals modelSpace(Affine world, double scale) {
         Block model = drawing.modelSpace();

@@ -39,7 +39,8 @@ public final class Resolver {
         double extent;
         if (expanded <= settings.maxExpandedSegments()) {
             List<Segment> list = WorldExpander.expand(drawing, new LayerRules(drawing, settings.includeLayers(),
-                    settings.excludeLayers(), settings.includeHiddenLayers()), world, settings.maxExpandedSegments());
+                    settings.excludeLayers(), settings.includeHiddenLayers()), world, settings.maxExpandedSegments(),
+                    instancer::placesSegments);
             segments = Optional.of(list);
             Box3 box = Box3.EMPTY;
             for (Segment s : list) {

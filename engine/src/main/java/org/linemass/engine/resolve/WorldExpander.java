@@ -59,7 +59,17 @@ final class WorldExpander {
     private record PathNode(String name, PathNode parent) {
     }
 
-    static List<Segment> expand(Drawing drawing, LayerRules rules, Affine world, long limit) {
+    /** Whether a block placed under an inherited layer holds any counted segment (see BlockInstancer). */
+    @FunctionalInterface
+    interface Occupancy {
+        boolean placesSegments(String block, String inherited);
+    }
+
+    /**
+     * @param occupied lets the walk skip inserts of blocks that place nothing, so an array or nest of
+     *        10^12 empty copies costs nothing
+     */
+    static List<Segment> expand(Drawing drawing, LayerRules rules, Affine world, long limit, Occupancy occupied) {
         List<Segment> out = new ArrayList<>();
         Block model = drawing.modelSpace();
         if (model == null) {
@@ -82,7 +92,7 @@ final class WorldExpander {
             String inherited = LayerRules.effective(ins.source().layer(), f.inherited);
             Block child = drawing.blocks().get(ins.blockName());
             if (f.copy >= ins.copies() || !rules.insertShown(inherited) || child == null
-                    || active.getOrDefault(child.name(), 0) > 0) {
+                    || active.getOrDefault(child.name(), 0) > 0 || !occupied.placesSegments(child.name(), inherited)) {
                 f.nextInsert++;
                 f.copy = 0;
                 continue;

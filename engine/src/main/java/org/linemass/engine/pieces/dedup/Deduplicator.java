@@ -75,7 +75,7 @@ public final class Deduplicator {
         }
         List<List<Segment>> replacement = new ArrayList<>(java.util.Collections.nCopies(n, null));
         List<Segment> removed = new ArrayList<>();
-        List<Finding> findings = new ArrayList<>();
+        CappedFindings findings = new CappedFindings(CappedFindings.CAP);
         for (List<Integer> cluster : clusters.values()) {
             List<List<Segment>> kept = new ArrayList<>(java.util.Collections.nCopies(cluster.size(), null));
             Segment first = segments.get(cluster.get(0));
@@ -107,7 +107,9 @@ public final class Deduplicator {
                 out.add(s);
             }
         }
-        return new DedupResult(out, java.util.Arrays.copyOf(origin, out.size()), removed, findings);
+        List<Finding> all = new ArrayList<>(findings);
+        all.addAll(findings.overflow());
+        return new DedupResult(out, java.util.Arrays.copyOf(origin, out.size()), removed, all);
     }
 
     static boolean sameCarrier(Segment a, Segment b, double tol) {

@@ -5,7 +5,10 @@ import java.util.Arrays;
 /**
  * Every pair {@code i < j} of indexed segments whose grown boxes meet and which pass a cheap
  * filter (e.g. same layer), found with one query per segment and kept as packed longs, so later
- * stages can walk the pairs without querying the tree again. Memory: 8 bytes per pair.
+ * stages can walk the pairs without querying the tree again. Memory: 8 bytes per pair. At most
+ * {@link #MAX_PAIRS} pairs are kept: a drawing where millions of segments lie on top of each other
+ * (an array of copies with no spacing) would otherwise need quadratic time and memory; then
+ * {@link #truncated()} is true and the checks that use the pairs are incomplete.
  */
 public final class CandidatePairs {
 
@@ -21,27 +24,48 @@ public final class CandidatePairs {
         void pair(int i, int j);
     }
 
-    private final long[] pairs;
+    /** Most pairs kept (160 MB); real drawings of a million segments have a few million. */
+    public static final int MAX_PAIRS = 20_000_000;
 
-    private CandidatePairs(long[] pairs) {
+    private final long[] pairs;
+    private final boolean truncated;
+
+    private CandidatePairs(long[] pairs, boolean truncated) {
         this.pairs = pairs;
+        this.truncated = truncated;
     }
 
     public static CandidatePairs of(BoxIndex index, int count, Filter filter) {
-        long[][] buf = {new long[Math.max(16, count)]};
+        return of(index, count, filter, MAX_PAIRS);
+    }
+
+    /** As {@link #of(BoxIndex, int, Filter)} keeping at most {@code maxPairs} pairs. */
+    public static CandidatePairs of(BoxIndex index, int count, Filter filter, int maxPairs) {
+        long[][] buf = {new long[Math.max(16, Math.min(count, maxPairs))]};
         int[] size = {0};
-        for (int i = 0; i < count; i++) {
+        boolean[] full = {false};
+        for (int i = 0; i < count && !full[0]; i++) {
             final int ii = i;
             index.query(index.box(i), j -> {
-                if (j > ii && filter.keep(ii, j)) {
-                    if (size[0] == buf[0].length) {
-                        buf[0] = Arrays.copyOf(buf[0], 2 * buf[0].length);
-                    }
-                    buf[0][size[0]++] = ((long) ii << 32) | j;
+                if (full[0] || j <= ii || !filter.keep(ii, j)) {
+                    return;
                 }
+                if (size[0] == maxPairs) {
+                    full[0] = true;
+                    return;
+                }
+                if (size[0] == buf[0].length) {
+                    buf[0] = Arrays.copyOf(buf[0], (int) Math.min(maxPairs, 2L * buf[0].length));
+                }
+                buf[0][size[0]++] = ((long) ii << 32) | j;
             });
         }
-        return new CandidatePairs(Arrays.copyOf(buf[0], size[0]));
+        return new CandidatePairs(Arrays.copyOf(buf[0], size[0]), full[0]);
+    }
+
+    /** True when the pair limit was reached and some pairs were not collected. */
+    public boolean truncated() {
+        return truncated;
     }
 
     public int size() {

@@ -47,22 +47,64 @@ final class EndNodes {
             group[2 * i] = layerOf[i];
             group[2 * i + 1] = layerOf[i];
         }
+        // Ends at exactly the same place (copies drawn on top of each other, an array with no spacing)
+        // share one grid entry, so a million coincident ends cost a hash lookup each, not a million
+        // neighbours each.
+        int[] uniqueOf = new int[m];
+        int u = 0;
+        java.util.Map<Vec3, int[]> seenAt = new java.util.HashMap<>();
         for (int e = 0; e < m; e++) {
-            xyz[3 * e] = point[e].x();
-            xyz[3 * e + 1] = point[e].y();
-            xyz[3 * e + 2] = point[e].z();
+            int[] prev = seenAt.get(point[e]);
+            int found = -1;
+            if (prev != null) {
+                for (int k : prev) {
+                    if (group[k] == group[e]) {
+                        found = uniqueOf[k];
+                        break;
+                    }
+                }
+            }
+            if (found >= 0) {
+                uniqueOf[e] = found;
+                continue;
+            }
+            uniqueOf[e] = u;
+            xyz[3 * u] = point[e].x();
+            xyz[3 * u + 1] = point[e].y();
+            xyz[3 * u + 2] = point[e].z();
+            int[] grown = prev == null ? new int[] {e} : java.util.Arrays.copyOf(prev, prev.length + 1);
+            grown[grown.length - 1] = e;
+            seenAt.put(point[e], grown);
+            u++;
         }
-        PointGrid grid = new PointGrid(xyz, group, joinM);
-        UnionFind uf = new UnionFind(m);
-        double tol2 = joinM * joinM;
+        int[] uniqueGroup = new int[u];
         for (int e = 0; e < m; e++) {
-            final int ee = e;
-            Vec3 p = point[e];
-            grid.near(p.x(), p.y(), p.z(), group[e], f -> {
-                if (f > ee && grid.distanceSq(f, p.x(), p.y(), p.z()) <= tol2) {
-                    uf.union(ee, f);
+            uniqueGroup[uniqueOf[e]] = group[e];
+        }
+        PointGrid grid = new PointGrid(java.util.Arrays.copyOf(xyz, 3 * u), uniqueGroup, joinM);
+        UnionFind unique = new UnionFind(u);
+        double tol2 = joinM * joinM;
+        for (int a = 0; a < u; a++) {
+            final int aa = a;
+            double x = xyz[3 * a];
+            double y = xyz[3 * a + 1];
+            double z = xyz[3 * a + 2];
+            grid.near(x, y, z, uniqueGroup[a], f -> {
+                if (f > aa && grid.distanceSq(f, x, y, z) <= tol2) {
+                    unique.union(aa, f);
                 }
             });
+        }
+        UnionFind uf = new UnionFind(m);
+        int[] firstEnd = new int[u];
+        java.util.Arrays.fill(firstEnd, -1);
+        for (int e = 0; e < m; e++) {
+            int r = unique.find(uniqueOf[e]);
+            if (firstEnd[r] < 0) {
+                firstEnd[r] = e;
+            } else {
+                uf.union(firstEnd[r], e);
+            }
         }
         int[] rootToNode = new int[m];
         java.util.Arrays.fill(rootToNode, -1);
