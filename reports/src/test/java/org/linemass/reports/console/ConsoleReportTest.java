@@ -28,17 +28,26 @@ class ConsoleReportTest {
     }
 
     @Test
-    void print_notesCountedUnlessListed_numbersStayThoseOfTheFileReports() {
-        List<Report> reports = List.of(Report.of(Fixtures.flatFrame("a.dxf")));
+    void print_manyNotesCountedUnlessListed() {
+        org.linemass.engine.result.DrawingResult r = Fixtures.flatFrame("a.dxf");
+        List<org.linemass.engine.result.Finding> findings = new java.util.ArrayList<>(r.findings());
+        org.linemass.engine.result.Finding note = findings.stream()
+                .filter(f -> f.severity() == org.linemass.engine.result.Severity.INFO).findFirst().orElseThrow();
+        for (int i = 0; i < ConsoleReport.NOTES_LISTED; i++) {
+            findings.add(note);
+        }
+        List<Report> reports = List.of(Report.of(new org.linemass.engine.result.DrawingResult(r.drawing(),
+                r.entities(), r.layers(), r.pieces(), r.groups(), findings, r.totals(), r.sections(),
+                r.incompleteReasons())));
+        String counted = print(reports, UnitSystem.METRIC, false, false);
         StringWriter w = new StringWriter();
-        new ConsoleReport(UnitSystem.METRIC, false, false, false).print(reports, new PrintWriter(w));
-        String counted = w.toString();
-        String listed = print(reports, UnitSystem.METRIC, false, false);
-        // the fixture has one error, one warning and one note (see the summary line)
-        assertTrue(counted.contains("1 note not listed ("), counted);
+        new ConsoleReport(UnitSystem.METRIC, false, false, true).print(reports, new PrintWriter(w));
+        String listed = w.toString();
+        // 1 + NOTES_LISTED notes: over the limit, so counted unless --list-notes asks for every row
+        assertTrue(counted.contains((ConsoleReport.NOTES_LISTED + 1) + " notes not listed here ("), counted);
         assertTrue(counted.contains("or add --list-notes"), counted);
         assertFalse(listed.contains("not listed"), listed);
-        assertTrue(counted.length() < listed.length() + 200, "the note's row is replaced by one line");
+        assertTrue(listed.length() > counted.length(), "every note gets its own row when listed");
     }
 
     @Test
