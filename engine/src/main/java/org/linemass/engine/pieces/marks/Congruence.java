@@ -57,7 +57,7 @@ final class Congruence {
      * drawing in plan gets +z).
      */
     static double[] planeNormal(double[][] p, double tol) {
-        double[] c = centroid(p);
+        double[] c = RigidFit.centroid(p);
         double[][] m = new double[3][3];
         for (double[] q : p) {
             for (int r = 0; r < 3; r++) {
@@ -106,22 +106,9 @@ final class Congruence {
         return a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
     }
 
-    private static double[] centroid(double[][] p) {
-        double[] c = new double[3];
-        for (double[] q : p) {
-            c[0] += q[0];
-            c[1] += q[1];
-            c[2] += q[2];
-        }
-        for (int k = 0; k < 3; k++) {
-            c[k] /= p.length;
-        }
-        return c;
-    }
-
     /** The samples plus one point {@code h} along {@code normal} from their centroid. */
     private static double[][] lifted(double[][] p, double[] normal, double h) {
-        double[] c = centroid(p);
+        double[] c = RigidFit.centroid(p);
         double[][] out = java.util.Arrays.copyOf(p, p.length + 1);
         out[p.length] = new double[] {c[0] + h * normal[0], c[1] + h * normal[1], c[2] + h * normal[2]};
         return out;

@@ -56,7 +56,8 @@ final class RigidFit {
         return Math.sqrt(worst);
     }
 
-    private static double[] centroid(double[][] p) {
+    /** The mean of the points (each {x, y, z}). */
+    static double[] centroid(double[][] p) {
         double[] c = new double[3];
         for (double[] q : p) {
             c[0] += q[0];
