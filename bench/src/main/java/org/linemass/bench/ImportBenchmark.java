@@ -38,7 +38,7 @@ import org.openjdk.jmh.annotations.Warmup;
 @OutputTimeUnit(TimeUnit.SECONDS)
 @Warmup(iterations = 2, time = 5)
 @Measurement(iterations = 3, time = 5)
-@Fork(value = 1, jvmArgs = {"-Xmx4g"})
+@Fork(value = 1, jvmArgs = {"-Xmx4g", "-XX:+UseParallelGC"})
 public class ImportBenchmark {
 
     @Param({"80"})

@@ -40,7 +40,7 @@ import org.openjdk.jmh.annotations.Warmup;
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 1)
 @Measurement(iterations = 3)
-@Fork(value = 1, jvmArgs = {"-Xms2g", "-Xmx6g"})
+@Fork(value = 1, jvmArgs = {"-Xms2g", "-Xmx6g", "-XX:+UseParallelGC"})
 public class JoinBenchmark {
 
     /** Wires in each direction. */
