@@ -60,9 +60,35 @@ public final class DrawingOptions {
     @Option(names = "--mirror-alike", description = "Count mirror images as identical pieces (same mark).")
     boolean mirrorAlike;
 
-    /** Import options with the unit override, if any. */
-    ImportOptions importOptions() {
-        return units == null ? ImportOptions.DEFAULTS : ImportOptions.DEFAULTS.withUnit(units);
+    @Option(names = "--limit-block-depth", paramLabel = "N", description = "Deepest nesting of block inserts read "
+            + "(default ${DEFAULT-VALUE}); deeper inserts are skipped with an error finding.")
+    int maxBlockDepth = ImportOptions.DEFAULTS.maxBlockDepth();
+
+    @Option(names = "--limit-line-bytes", paramLabel = "N", description = "Longest text line (ASCII) or string "
+            + "(binary) accepted, in bytes (default ${DEFAULT-VALUE}).")
+    int maxLineBytes = ImportOptions.DEFAULTS.maxLineBytes();
+
+    @Option(names = "--limit-spline-points", paramLabel = "N", description = "Most control points, knots or fit "
+            + "points of one SPLINE (default ${DEFAULT-VALUE}).")
+    int maxControlPoints = ImportOptions.DEFAULTS.maxControlPoints();
+
+    @Option(names = "--limit-vertices", paramLabel = "N", description = "Most vertices of one polyline "
+            + "(default ${DEFAULT-VALUE}).")
+    int maxVertices = ImportOptions.DEFAULTS.maxVertices();
+
+    @Option(names = "--limit-expanded", paramLabel = "N", description = "Most world segments expanded from blocks "
+            + "for joining and checks (default ${DEFAULT-VALUE}); beyond it totals still come from block "
+            + "instancing, pieces and checks are skipped and the reports say so.")
+    long maxExpandedSegments = AnalysisSettings.DEFAULT_MAX_EXPANDED_SEGMENTS;
+
+    /** Import options with the unit override, if any, and the resource limits. */
+    ImportOptions importOptions() throws InputProblem {
+        try {
+            return new ImportOptions(java.util.Optional.ofNullable(units), maxBlockDepth, maxLineBytes,
+                    maxControlPoints, maxVertices);
+        } catch (IllegalArgumentException e) {
+            throw new InputProblem(e.getMessage());
+        }
     }
 
     /**
@@ -87,7 +113,14 @@ public final class DrawingOptions {
         }
         return new AnalysisSettings(Optional.ofNullable(joinM), Optional.ofNullable(gapLimitM), Optional.empty(),
                 AnalysisSettings.defaults(table).integrationRelative(), mirrorAlike, onlyLayers, skipped(),
-                hiddenLayers, table, rules, java.util.Map.of(), AnalysisSettings.DEFAULT_MAX_EXPANDED_SEGMENTS);
+                hiddenLayers, table, rules, java.util.Map.of(), checkedExpansionLimit());
+    }
+
+    private long checkedExpansionLimit() throws InputProblem {
+        if (maxExpandedSegments < 0) {
+            throw new InputProblem("--limit-expanded must be 0 or more, got " + maxExpandedSegments);
+        }
+        return maxExpandedSegments;
     }
 
     /**

@@ -101,7 +101,10 @@ class EndToEndTest {
         Files.writeString(dxf, String.join("\n", "0", "SECTION", "2", "HEADER", "9", "$INSUNITS", "70", "4",
                 "0", "ENDSEC", "0", "SECTION", "2", "ENTITIES", "0", "CIRCLE", "5", "2A", "8", "RING", "10", "0",
                 "20", "0", "30", "0", "40", "100", "0", "ENDSEC", "0", "EOF", ""), StandardCharsets.US_ASCII);
-        JsonNode t = run(0, 0, "check", "--json", "-", "-a", "RING=RB10", dxf.toString()).get("totals");
+        JsonNode report = run(0, 0, "check", "--json", "-", "-a", "RING=RB10", dxf.toString());
+        JsonNode t = report.get("totals");
+        // the one layer is the whole drawing: its principal moments are the same numbers
+        assertEquals(t.get("principal_moments_kg_m2"), report.get("layers").get(0).get("principal_moments_kg_m2"));
         double r = 0.1;
         double m = 0.616 * 2 * Math.PI * r;
         // closed form L = 2 pi r; the engine's arcs are closed forms too, so 1e-12 relative is rounding only
@@ -155,6 +158,31 @@ class EndToEndTest {
         // asked for on purpose, the layer is read
         JsonNode only = run(0, 1, "check", "--json", "-", "--only-layer", "LINEMASS_FINDINGS*", marked.toString());
         assertTrue(only.get("totals").get("length_m").asDouble() > 0, only.get("totals").toString());
+    }
+
+    @Test
+    void check_resourceLimitOptions_skipWhatIsOverTheLimitAndSaySo(@TempDir Path dir) throws Exception {
+        Path demo = dir.resolve("garden-planter.dxf");
+        try (var in = EndToEndTest.class.getResourceAsStream("/org/linemass/app/demo/garden-planter.dxf")) {
+            assumeTrue(in != null, "demo drawing not packaged");
+            Files.copy(in, demo);
+        }
+        // the demo's two rims are LWPOLYLINEs of 8 vertices (testdata/demo/README.md): a limit of 2 skips both
+        JsonNode r = run(1, 1, "check", "--json", "-", "--limit-vertices", "2", demo.toString());
+        assertEquals(false, r.get("complete").asBoolean());
+        long skipped = 0;
+        for (JsonNode f : r.get("findings")) {
+            skipped += f.get("kind").asText().equals("skipped_entity") ? 1 : 0;
+        }
+        assertEquals(2, skipped);
+        // no expansion allowed: totals still come from instancing, pieces are skipped, and it says so
+        JsonNode e = run(0, 1, "check", "--json", "-", "--limit-expanded", "0", demo.toString());
+        assertEquals(false, e.get("complete").asBoolean());
+        assertEquals(0, e.get("pieces").size());
+        // drawn length: 7.283 m by the demo's hand calculation (duplicate not removed without the checks)
+        assertEquals(7.2828, e.get("totals").get("length_m").asDouble(), 1e-4);
+        // a limit below its minimum is a usage error
+        exec(2, 2, new StringWriter(), "check", "--limit-block-depth", "-1", demo.toString());
     }
 
     /** Kind, layer, handle and exact points at five parameters of every segment (markup layer left out if asked). */

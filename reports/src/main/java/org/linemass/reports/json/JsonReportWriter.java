@@ -147,6 +147,7 @@ public final class JsonReportWriter {
         tensor(g, "inertia_kg_m2", l.inertiaKgM2());
         g.writeNumberField("pieces", l.pieces());
         num(g, "error_bound_m", l.errorBoundM());
+        principal(g, l.massKg(), l.inertiaKgM2());
         g.writeEndObject();
     }
 
