@@ -23,14 +23,9 @@ public final class BomCsvWriter {
 
     public static void write(List<Report> reports, UnitSystem units, Writer out) throws IOException {
         boolean multi = reports.size() > 1;
-        List<String> header = new ArrayList<>();
-        if (multi) {
-            header.add("drawing");
-        }
-        header.addAll(List.of("mark", "quantity", "section", "material",
+        CsvTable table = CsvTable.withDrawingColumn(out, multi, List.of("mark", "quantity", "section", "material",
                 "cut length each [" + units.shortUnit() + "]", "bends each",
                 "mass each [" + units.massUnit() + "]", "mass total [" + units.massUnit() + "]", "layer"));
-        CsvTable table = new CsvTable(out, header);
         long quantity = 0;
         double mass = 0;
         List<String> notes = new ArrayList<>();

@@ -10,6 +10,19 @@ final class CsvTable {
     private final Writer out;
     private final int columns;
 
+    /**
+     * A table whose header is {@code columns}, preceded by a {@code drawing} column when the run
+     * covers several drawings (the combined files name each row's drawing).
+     */
+    static CsvTable withDrawingColumn(Writer out, boolean severalDrawings, List<String> columns) throws IOException {
+        List<String> header = new java.util.ArrayList<>(columns.size() + 1);
+        if (severalDrawings) {
+            header.add("drawing");
+        }
+        header.addAll(columns);
+        return new CsvTable(out, header);
+    }
+
     CsvTable(Writer out, List<String> header) throws IOException {
         this.out = out;
         this.columns = header.size();

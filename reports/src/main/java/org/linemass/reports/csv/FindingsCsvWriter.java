@@ -22,14 +22,9 @@ public final class FindingsCsvWriter {
     public static void write(List<Report> reports, UnitSystem units, Writer out) throws IOException {
         boolean multi = reports.size() > 1;
         String lu = units.longUnit();
-        List<String> header = new ArrayList<>();
-        if (multi) {
-            header.add("drawing");
-        }
-        header.addAll(List.of("number", "kind", "severity", "x [" + lu + "]", "y [" + lu + "]", "z [" + lu + "]",
+        CsvTable table = CsvTable.withDrawingColumn(out, multi, List.of("number", "kind", "severity", "x [" + lu + "]", "y [" + lu + "]", "z [" + lu + "]",
                 "size [" + units.shortUnit() + "]", "layer", "mass [" + units.massUnit() + "]", "entities",
                 "message"));
-        CsvTable table = new CsvTable(out, header);
         for (Report report : reports) {
             DrawingResult r = report.result();
             int n = 0;

@@ -25,16 +25,11 @@ public final class PiecesCsvWriter {
     public static void write(List<Report> reports, UnitSystem units, Writer out) throws IOException {
         boolean multi = reports.size() > 1;
         String lu = units.longUnit();
-        List<String> header = new ArrayList<>();
-        if (multi) {
-            header.add("drawing");
-        }
-        header.addAll(List.of("piece", "mark", "layer", "section", "length [" + units.shortUnit() + "]",
+        CsvTable table = CsvTable.withDrawingColumn(out, multi, List.of("piece", "mark", "layer", "section", "length [" + units.shortUnit() + "]",
                 "mass [" + units.massUnit() + "]", "closed", "segments", "bends",
                 "cog x [" + lu + "]", "cog y [" + lu + "]", "cog z [" + lu + "]",
                 "start x [" + lu + "]", "start y [" + lu + "]", "start z [" + lu + "]",
                 "end x [" + lu + "]", "end y [" + lu + "]", "end z [" + lu + "]", "entities"));
-        CsvTable table = new CsvTable(out, header);
         for (Report report : reports) {
             DrawingResult r = report.result();
             for (PieceResult p : r.pieces()) {
