@@ -71,6 +71,18 @@ public final class CircularArc implements Segment {
         return new Vec3(cx, cy, cz);
     }
 
+    double cx() {
+        return cx;
+    }
+
+    double cy() {
+        return cy;
+    }
+
+    double cz() {
+        return cz;
+    }
+
     public double radius() {
         return radius;
     }

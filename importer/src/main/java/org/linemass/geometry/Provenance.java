@@ -31,7 +31,7 @@ public final class Provenance {
     private static final Scope[] SCOPES = new Scope[SCOPE_SLOTS];
 
     /** The components many provenances have in common. */
-    private record Scope(String file, String layer, String entityType, List<String> blockPath) {
+    record Scope(String file, String layer, String entityType, List<String> blockPath) {
     }
 
     private final Scope scope;
@@ -50,7 +50,8 @@ public final class Provenance {
         this.handleText = h.isEmpty() ? "" : bits < 0 && !isAllF(h) ? h : null;
     }
 
-    private Provenance(Scope scope, int line, String handleText, long handleBits) {
+    /** From stored components (see {@link ProvenanceColumns}); {@code handleText} null means canonical. */
+    Provenance(Scope scope, int line, String handleText, long handleBits) {
         this.scope = scope;
         this.line = line;
         this.handleText = handleText;
@@ -82,6 +83,20 @@ public final class Provenance {
      */
     public static Provenance ofHandleValue(String file, String layer, int line, long handle, String entityType) {
         return new Provenance(scope(file, layer, entityType, List.of()), line, null, handle);
+    }
+
+    Scope scope() {
+        return scope;
+    }
+
+    /** The handle text when it is not canonical hexadecimal ("" for no handle), else null. */
+    String handleText() {
+        return handleText;
+    }
+
+    /** The canonical handle's value (meaningful when {@link #handleText()} is null). */
+    long handleBits() {
+        return handleBits;
     }
 
     public String file() {

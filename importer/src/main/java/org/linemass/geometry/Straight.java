@@ -34,6 +34,30 @@ public final class Straight implements Segment {
         this.source = source;
     }
 
+    double ax() {
+        return ax;
+    }
+
+    double ay() {
+        return ay;
+    }
+
+    double az() {
+        return az;
+    }
+
+    double bx() {
+        return bx;
+    }
+
+    double by() {
+        return by;
+    }
+
+    double bz() {
+        return bz;
+    }
+
     public Vec3 a() {
         return new Vec3(ax, ay, az);
     }

@@ -7,7 +7,7 @@ import java.util.Map;
 import java.util.TreeMap;
 import org.linemass.drawing.Block;
 import org.linemass.drawing.Insert;
-import org.linemass.geometry.Segment;
+import org.linemass.geometry.PackedSegments;
 import org.linemass.geometry.Vec3;
 import org.linemass.importer.entity.InsertSpec;
 
@@ -16,8 +16,8 @@ final class BlockBuilder {
 
     final String name;
     Vec3 basePoint;
-    /** Chunked: no growth copies however many segments a block collects. */
-    final List<Segment> segments = new ChunkedList<>();
+    /** Packed as they arrive: the model of a large block never exists as one object per segment. */
+    final PackedSegments.Builder segments = new PackedSegments.Builder();
     final List<InsertSpec> insertSpecs = new ArrayList<>();
     final List<Insert> inserts = new ArrayList<>();
     private final Map<String, int[]> curveCounts = new HashMap<>();
@@ -37,7 +37,7 @@ final class BlockBuilder {
     }
 
     Block build() {
-        return new Block(name, basePoint, segments, inserts, frozen(curveCounts), frozen(otherCounts));
+        return new Block(name, basePoint, segments.build(), inserts, frozen(curveCounts), frozen(otherCounts));
     }
 
     private static Map<String, Integer> frozen(Map<String, int[]> counts) {
