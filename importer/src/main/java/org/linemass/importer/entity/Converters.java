@@ -1,5 +1,6 @@
 package org.linemass.importer.entity;
 
+import java.util.ArrayList;
 import java.util.List;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
@@ -8,7 +9,9 @@ import org.linemass.importer.read.Record;
 /**
  * Entry point of the package: converts one single-record curve entity (LINE, ARC, CIRCLE,
  * ELLIPSE, LWPOLYLINE, SPLINE, HELIX) to segments. POLYLINE uses {@link PolylineBuilder} and
- * INSERT {@link InsertSpec}. On failure nothing is appended and {@link EntitySkip} says why.
+ * INSERT {@link InsertSpec}. On failure nothing is appended and {@link EntitySkip} says why. A
+ * conversion that succeeds after guessing something (a SPLINE without knots) also appends a
+ * one-line message to the caller's warning list.
  */
 public final class Converters {
 
@@ -23,9 +26,24 @@ public final class Converters {
         };
     }
 
+    /**
+     * As {@link #convert(Record, Provenance, int, int, List, List)}, dropping any warning; for callers
+     * that have nowhere to report one.
+     */
     public static void convert(Record r, Provenance p, int maxVertices, int maxControlPoints, List<Segment> out)
             throws EntitySkip {
+        convert(r, p, maxVertices, maxControlPoints, out, new ArrayList<>());
+    }
+
+    /**
+     * Converts {@code r}, appending its segments to {@code out} and one message per guess to
+     * {@code warnings} (messages without the entity's location, which the caller adds). On
+     * {@link EntitySkip} neither list is changed.
+     */
+    public static void convert(Record r, Provenance p, int maxVertices, int maxControlPoints, List<Segment> out,
+            List<String> warnings) throws EntitySkip {
         int before = out.size();
+        int warningsBefore = warnings.size();
         try {
             switch (r.type()) {
                 case "LINE" -> LineConverter.convert(r, p, out);
@@ -33,14 +51,16 @@ public final class Converters {
                 case "CIRCLE" -> CircleConverter.convert(r, p, false, out);
                 case "ELLIPSE" -> EllipseConverter.convert(r, p, out);
                 case "LWPOLYLINE" -> LwPolylineConverter.convert(r, p, maxVertices, out);
-                case "SPLINE", "HELIX" -> SplineConverter.convert(r, p, maxControlPoints, out);
+                case "SPLINE", "HELIX" -> SplineConverter.convert(r, p, maxControlPoints, out, warnings);
                 default -> throw new IllegalArgumentException("not a curve entity type: " + r.type());
             }
         } catch (EntitySkip e) {
             out.subList(before, out.size()).clear();
+            warnings.subList(warningsBefore, warnings.size()).clear();
             throw e;
         } catch (IllegalArgumentException e) {
             out.subList(before, out.size()).clear();
+            warnings.subList(warningsBefore, warnings.size()).clear();
             throw new EntitySkip(e.getMessage());
         }
     }

@@ -15,6 +15,14 @@ import org.linemass.importer.read.Record;
  * degree + 1; the curve is the exact (rational) B-spline on [knot[degree], knot[n]], which covers
  * closed and periodic splines. A spline with fit points only becomes the interpolating cubic of
  * {@link FitSplineInterpolator}.
+ *
+ * <p>Some writers leave the knots out. A spline with control points, no 40 groups and a knot count
+ * 72 of 0 (or no 72 at all) gets the clamped uniform knot vector of its degree and control-point
+ * count (see {@link #clampedUniformKnots}) and a warning in {@code warnings}: the curve then starts
+ * at the first and ends at the last control point. The closed / periodic bits of group 70 do not
+ * change this, just as they do not change a spline whose knots are given (the knots alone define
+ * the curve); the warning says when such a bit is set. A declared knot count that the 40 groups do
+ * not match, or knots that do not fit the control points, remain errors.
  */
 final class SplineConverter {
 
@@ -30,7 +38,15 @@ final class SplineConverter {
     private SplineConverter() {
     }
 
-    static void convert(Record r, Provenance p, int maxPoints, List<Segment> out) throws EntitySkip {
+    /** Group 70 bits: 1 closed, 2 periodic. */
+    private static final int CLOSED_OR_PERIODIC = 1 | 2;
+
+    /**
+     * Converts {@code r}; appends one segment to {@code out} and, when the knots had to be assumed,
+     * one message to {@code warnings} (a one-line text without the entity's location).
+     */
+    static void convert(Record r, Provenance p, int maxPoints, List<Segment> out, List<String> warnings)
+            throws EntitySkip {
         int end = r.size();
         for (int i = 0; i < r.size(); i++) {
             if (r.code(i) == 100 && "AcDbHelix".equals(r.str(i))) {
@@ -143,6 +159,11 @@ final class SplineConverter {
             throw new EntitySkip("has " + nCtrl + " control points; degree " + degree + " needs at least "
                     + (degree + 1));
         }
+        if (nKnots == 0) {
+            knots = clampedUniformKnots(degree, nCtrl);
+            nKnots = knots.length;
+            warnings.add(missingKnotsMessage(degree, nCtrl, (int) r.num(70, 0)));
+        }
         if (nKnots != nCtrl + degree + 1) {
             throw new EntitySkip("has " + nKnots + " knots; " + nCtrl + " control points of degree " + degree
                     + " need " + (nCtrl + degree + 1));
@@ -168,6 +189,34 @@ final class SplineConverter {
             }
         }
         out.add(Nurbs.of(degree, knots, ctrl, nw == 0 ? null : weights, p));
+    }
+
+    /**
+     * The clamped (open) uniform knot vector of a B-spline with {@code n} control points: degree + 1
+     * zeros, n - degree - 1 interior knots i / (n - degree), degree + 1 ones (n + degree + 1 knots).
+     * The curve starts at the first and ends at the last control point; with n = degree + 1 it is the
+     * Bezier curve of the control points.
+     */
+    static double[] clampedUniformKnots(int degree, int n) {
+        if (degree < 1 || n < degree + 1) {
+            throw new IllegalArgumentException("clamped knots need degree >= 1 and at least degree + 1 control points,"
+                    + " got degree " + degree + " and " + n);
+        }
+        double[] k = new double[n + degree + 1];
+        int spans = n - degree;
+        for (int i = 0; i < k.length; i++) {
+            k[i] = i <= degree ? 0 : i >= n ? 1 : (double) (i - degree) / spans;
+        }
+        return k;
+    }
+
+    private static String missingKnotsMessage(int degree, int nCtrl, int flags) {
+        String m = "has " + nCtrl + " control points but no knots (group codes 72 and 40); assumed the clamped"
+                + " uniform knot vector of degree " + degree + " (" + (degree + 1) + " zeros, " + (nCtrl - degree - 1)
+                + " evenly spaced interior knots, " + (degree + 1) + " ones): the curve runs from the first to"
+                + " the last control point";
+        return (flags & CLOSED_OR_PERIODIC) != 0
+                ? m + "; the closed/periodic flag (group code 70 = " + flags + ") is not applied" : m;
     }
 
     private static String what(int code) {

@@ -20,11 +20,16 @@ import org.linemass.importer.read.Record;
  */
 final class EntityHandler {
 
+    /** Note kind of a SPLINE whose missing knots were replaced by a clamped uniform knot vector. */
+    static final String KNOTS_ASSUMED = "knots_assumed";
+
     private final String file;
     private final ImportOptions options;
     private final List<ImportNote> notes;
     private final boolean binary;
     long paperSpaceEntities;
+    /** Warnings of one curve conversion; reused (cleared before each entity). */
+    private final List<String> converterWarnings = new java.util.ArrayList<>();
     /** Layer names used by entities read into blocks (pooled strings, so lookups are cheap). */
     final java.util.Set<String> usedLayers = new java.util.HashSet<>();
 
@@ -79,9 +84,14 @@ final class EntityHandler {
             skip(p, badValue(r));
             return;
         }
+        converterWarnings.clear();
         try {
-            Converters.convert(r, p, options.maxVertices(), options.maxControlPoints(), target.segments);
+            Converters.convert(r, p, options.maxVertices(), options.maxControlPoints(), target.segments,
+                    converterWarnings);
             target.countCurve(type);
+            for (String w : converterWarnings) {
+                notes.add(Notes.of("warning", KNOTS_ASSUMED, file, line, type, r.handle(), layer, w));
+            }
         } catch (EntitySkip e) {
             notes.add(Notes.of("error", "skipped_entity", file, line, type, r.handle(), layer, e.getMessage()));
         }

@@ -1,17 +1,38 @@
 package org.linemass.importer.read;
 
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
 import java.nio.charset.Charset;
+import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.util.Arrays;
 
 /**
  * Decodes DXF string values: ASCII fast path, the file's code page otherwise (malformed bytes
- * become U+FFFD, never an exception), and the {@code \U+XXXX} escapes older files use for
- * characters outside their code page. A small pool returns the same String for repeated names.
+ * become U+FFFD, never an exception), and the two escapes older files use for characters outside
+ * their code page: {@code \U+XXXX} (a UTF-16 code unit) and {@code \M+nXXXX}, a double-byte
+ * character XXXX of the East Asian code page that the digit n names (1 Japanese cp932, 2
+ * Traditional Chinese cp950, 3 Korean Wansung cp949, 4 Korean Johab cp1361, 5 Simplified Chinese
+ * cp936). An escape that is malformed (short or non-hex digits, another digit), whose code page
+ * the JVM lacks, or whose two bytes do not decode to exactly one character stays as literal text.
+ * Values without a backslash skip the escape scan. A small pool returns the same String for
+ * repeated names.
  */
 final class TextDecoder {
 
     private static final int POOL_SIZE = 1024;
+
+    /** Length of {@code \U+XXXX}. */
+    private static final int UNICODE_ESCAPE = 7;
+    /** Length of {@code \M+nXXXX}. */
+    private static final int MULTIBYTE_ESCAPE = 8;
+
+    /**
+     * Java charsets of the {@code \M+n} code pages, index n; null where n is unused or the JVM
+     * does not have the charset (the escape is then kept as text).
+     */
+    private static final Charset[] MULTIBYTE_PAGES = {null, available("MS932"), available("x-windows-950"),
+        available("x-windows-949"), available("x-Johab"), available("GBK")};
     private static final int POOL_MAX_BYTES = 64;
 
     private Charset charset = Charset.forName("windows-1252");
@@ -36,7 +57,7 @@ final class TextDecoder {
         }
         String s = ascii ? new String(b, from, to - from, StandardCharsets.ISO_8859_1)
                 : new String(b, from, to - from, charset);
-        return s.indexOf("\\U+") >= 0 ? unescape(s) : s;
+        return s.indexOf('\\') >= 0 ? unescape(s) : s;
     }
 
     String pooled(byte[] b, int from, int to) {
@@ -72,18 +93,54 @@ final class TextDecoder {
         return true;
     }
 
-    private static String unescape(String s) {
+    /** Replaces the well-formed escapes of {@code s}; package-private for tests. */
+    static String unescape(String s) {
         StringBuilder sb = new StringBuilder(s.length());
         int i = 0;
         while (i < s.length()) {
-            if (i + 7 <= s.length() && s.startsWith("\\U+", i) && isHex(s, i + 3, i + 7)) {
-                sb.append((char) Integer.parseInt(s.substring(i + 3, i + 7), 16));
-                i += 7;
-            } else {
-                sb.append(s.charAt(i++));
+            if (i + UNICODE_ESCAPE <= s.length() && s.startsWith("\\U+", i) && isHex(s, i + 3, i + UNICODE_ESCAPE)) {
+                sb.append((char) Integer.parseInt(s.substring(i + 3, i + UNICODE_ESCAPE), 16));
+                i += UNICODE_ESCAPE;
+                continue;
             }
+            if (i + MULTIBYTE_ESCAPE <= s.length() && s.startsWith("\\M+", i)) {
+                String c = multibyte(s, i);
+                if (c != null) {
+                    sb.append(c);
+                    i += MULTIBYTE_ESCAPE;
+                    continue;
+                }
+            }
+            sb.append(s.charAt(i++));
         }
         return sb.toString();
+    }
+
+    /** The character of the {@code \M+nXXXX} escape at {@code at}, or null to keep it as text. */
+    private static String multibyte(String s, int at) {
+        int page = s.charAt(at + 3) - '0';
+        if (page < 1 || page >= MULTIBYTE_PAGES.length || MULTIBYTE_PAGES[page] == null
+                || !isHex(s, at + 4, at + MULTIBYTE_ESCAPE)) {
+            return null;
+        }
+        int code = Integer.parseInt(s.substring(at + 4, at + MULTIBYTE_ESCAPE), 16);
+        byte[] pair = {(byte) (code >>> 8), (byte) code};
+        try {
+            String c = MULTIBYTE_PAGES[page].newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT).decode(ByteBuffer.wrap(pair)).toString();
+            // two single-byte characters (a lead byte below 0x80) are not one double-byte character
+            return c.codePointCount(0, c.length()) == 1 ? c : null;
+        } catch (CharacterCodingException e) {
+            return null;
+        }
+    }
+
+    private static Charset available(String name) {
+        try {
+            return Charset.isSupported(name) ? Charset.forName(name) : null;
+        } catch (IllegalArgumentException e) {
+            return null;
+        }
     }
 
     private static boolean isHex(String s, int from, int to) {
