@@ -19,6 +19,8 @@ public final class FindingKind {
     public static final String UNITS_ASSUMED = "units_assumed";
     public static final String SKIPPED_ENTITY = "skipped_entity";
     public static final String IGNORED_ENTITY = "ignored_entity";
+    /** A spline without knots read with the clamped uniform knot vector (a warning; the curve is used). */
+    public static final String KNOTS_ASSUMED = "knots_assumed";
     public static final String LIMIT_REACHED = "limit_reached";
 
     private FindingKind() {

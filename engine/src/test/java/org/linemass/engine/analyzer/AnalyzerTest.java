@@ -218,13 +218,19 @@ class AnalyzerTest {
     void importNotesAndAssumedUnits_becomeFindings() throws AnalysisException {
         Drawings d = Drawings.create().unit(LengthUnit.MILLIMETRE, UnitSource.ASSUMED)
                 .note(new ImportNote("error", "bad_spline", "test.dxf", 321, "SPLINE", "2F", "W", "knots decrease"))
-                .note(new ImportNote("info", "ignored_entity", "test.dxf", 400, "TEXT", "30", "W", "text has no wire"));
+                .note(new ImportNote("info", "ignored_entity", "test.dxf", 400, "TEXT", "30", "W", "text has no wire"))
+                .note(new ImportNote("warning", "knots_assumed", "test.dxf", 500, "SPLINE", "31", "W",
+                        "no knots; clamped uniform knots assumed"));
         d.model().line("W", Vec3.ZERO, new Vec3(10, 0, 0));
         DrawingResult r = Analyzer.analyze(d.build(), settings(), SimpleStages.CHAIN);
         List<String> kinds = r.findings().stream().map(Finding::kind).toList();
         assertTrue(kinds.contains(FindingKind.SKIPPED_ENTITY));
         assertTrue(kinds.contains(FindingKind.IGNORED_ENTITY));
         assertTrue(kinds.contains(FindingKind.UNITS_ASSUMED));
+        Finding knots = r.findings().stream().filter(f -> f.kind().equals(FindingKind.KNOTS_ASSUMED)).findFirst()
+                .orElseThrow();
+        assertEquals(500, knots.entities().get(0).line());
+        assertEquals("31", knots.entities().get(0).handle());
         assertFalse(r.complete());
         assertTrue(r.incompleteReasons().get(0).contains("1 entity was skipped"));
         Finding skipped = r.findings().stream().filter(f -> f.kind().equals(FindingKind.SKIPPED_ENTITY)).findFirst()
