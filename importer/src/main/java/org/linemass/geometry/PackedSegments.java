@@ -2,6 +2,7 @@ package org.linemass.geometry;
 
 import java.util.AbstractList;
 import java.util.Collection;
+import java.util.Objects;
 import java.util.RandomAccess;
 
 /**
@@ -53,17 +54,31 @@ public final class PackedSegments extends AbstractList<Segment> implements Rando
      * {@code List<Segment>} can fill it directly: it supports {@link #add}, {@link #get},
      * {@link #size} and removal of a tail range ({@code subList(from, size()).clear()}, used to roll
      * back an entity that failed half way); other changes are unsupported. Nulls are refused. Not
-     * thread-safe.
+     * thread-safe. After {@link #build()} it can only be read.
      */
     public static final class Builder extends AbstractList<Segment> implements RandomAccess {
 
         private final SegmentColumns columns = new SegmentColumns();
+        private boolean built;
 
         @Override
         public boolean add(Segment s) {
-            columns.add(java.util.Objects.requireNonNull(s, "segment"));
+            Objects.requireNonNull(s, "segment");
+            requireOpen();
+            columns.add(s);
             modCount++;
             return true;
+        }
+
+        /**
+         * Adds the straight from (ax, ay, az) to (bx, by, bz): the same as adding that
+         * {@link Straight}, without building the object (the importer's bulk path).
+         */
+        public void addStraight(double ax, double ay, double az, double bx, double by, double bz, Provenance p) {
+            Objects.requireNonNull(p, "provenance");
+            requireOpen();
+            columns.addStraight(ax, ay, az, bx, by, bz, p);
+            modCount++;
         }
 
         @Override
@@ -83,13 +98,22 @@ public final class PackedSegments extends AbstractList<Segment> implements Rando
                 throw new UnsupportedOperationException("only a tail range can be removed, not " + fromIndex + ".."
                         + toIndex + " of " + size());
             }
+            requireOpen();
             columns.truncate(fromIndex);
             modCount++;
         }
 
-        /** The segments added so far, packed; the builder may go on collecting afterwards. */
+        /** The segments added, packed. Call once: the list shares storage with the builder, which is then closed. */
         public PackedSegments build() {
+            requireOpen();
+            built = true;
             return new PackedSegments(columns.trimmed());
+        }
+
+        private void requireOpen() {
+            if (built) {
+                throw new IllegalStateException("this builder has already built its list");
+            }
         }
     }
 }

@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * The storage behind {@link PackedSegments}: segments as records of doubles in one value array, a
+ * The storage behind {@link PackedSegments}: segments as records of doubles in chunked columns, a
  * 32-bit descriptor per segment (record kind and where its values start) and provenance rows per
  * entity, so a large drawing is held in about half the bytes of its text.
  *
@@ -41,19 +41,18 @@ final class SegmentColumns {
     private static final int OBJECT = 6;
     private static final int KIND_BITS = 3;
     private static final int KIND_MASK = (1 << KIND_BITS) - 1;
-    /** Largest value offset or object index a descriptor holds; past it segments are kept as objects. */
+    /** Largest object index a descriptor holds (value offsets are limited by {@link DoubleChunks}). */
     private static final int MAX_PAYLOAD = Integer.MAX_VALUE >>> KIND_BITS;
     /** At most this many distinct (u, v) pairs are tabled; arcs in further planes are kept as objects. */
     private static final int MAX_AXES = 1 << 16;
     private static final long POSITIVE_ZERO = 0L;
+    private static final int RECENT = 4;
 
     private record Axes(Vec3 u, Vec3 v) {
     }
 
-    private int size;
-    private int[] descriptors;
-    private double[] values;
-    private int valueCount;
+    private final IntChunks descriptors;
+    private final DoubleChunks values;
     private final List<Segment> objects;
     private final List<Axes> axes;
     private final Map<Axes, Integer> axesIndex;
@@ -65,23 +64,24 @@ final class SegmentColumns {
     /** Kind of the last record written to {@link #values}, or -1: tells whether the next may follow it. */
     private int lastValueKind = -1;
     private Provenance lastSource;
-    /** The last arc's axis objects and their table index: arcs of one plane share them. */
-    private Vec3 lastU;
-    private Vec3 lastV;
-    private int lastAxes;
+    /**
+     * The axis objects of recent arcs and their table indexes, by identity: the arcs of one frame
+     * share their axis objects, and a polyline's arcs alternate between two pairs.
+     */
+    private final Vec3[] recentU = new Vec3[RECENT];
+    private final Vec3[] recentV = new Vec3[RECENT];
+    private final int[] recentIndex = new int[RECENT];
+    private int recentNext;
 
     SegmentColumns() {
-        this(0, new int[16], new double[64], 0, new ArrayList<>(), new ArrayList<>(), new HashMap<>(), new long[1],
+        this(new IntChunks(), new DoubleChunks(), new ArrayList<>(), new ArrayList<>(), new HashMap<>(), new long[1],
                 new int[1], new ProvenanceColumns());
     }
 
-    private SegmentColumns(int size, int[] descriptors, double[] values, int valueCount, List<Segment> objects,
-            List<Axes> axes, Map<Axes, Integer> axesIndex, long[] rowStarts, int[] rowsBefore,
-            ProvenanceColumns rows) {
-        this.size = size;
+    private SegmentColumns(IntChunks descriptors, DoubleChunks values, List<Segment> objects, List<Axes> axes,
+            Map<Axes, Integer> axesIndex, long[] rowStarts, int[] rowsBefore, ProvenanceColumns rows) {
         this.descriptors = descriptors;
         this.values = values;
-        this.valueCount = valueCount;
         this.objects = objects;
         this.axes = axes;
         this.axesIndex = axesIndex;
@@ -91,22 +91,35 @@ final class SegmentColumns {
     }
 
     /** An array length after growing one of {@code length} by half, within the largest array Java allows. */
-    static int grownLength(int length) {
-        long n = Math.max(16L, length + (long) (length >> 1));
+    private static int grownLength(int length) {
         if (length >= Integer.MAX_VALUE - 8) {
             throw new IllegalStateException("more than " + length + " entries in one packed column");
         }
-        return (int) Math.min(n, Integer.MAX_VALUE - 8);
+        return (int) Math.min(Math.max(16L, length + (long) (length >> 1)), Integer.MAX_VALUE - 8);
     }
 
     int size() {
-        return size;
+        return descriptors.size();
     }
 
     void add(Segment s) {
-        if (size == descriptors.length) {
-            descriptors = Arrays.copyOf(descriptors, grownLength(size));
-        }
+        source(s.source());
+        int d = s instanceof Straight line
+                ? straight(line.ax(), line.ay(), line.az(), line.bx(), line.by(), line.bz())
+                : s instanceof CircularArc arc ? arc(arc) : -1;
+        descriptors.add(d >= 0 ? d : object(s));
+    }
+
+    /** Adds the straight from a to b, as {@link #add} would add that {@link Straight}, without building it. */
+    void addStraight(double ax, double ay, double az, double bx, double by, double bz, Provenance p) {
+        source(p);
+        int d = straight(ax, ay, az, bx, by, bz);
+        descriptors.add(d >= 0 ? d : object(new Straight(ax, ay, az, bx, by, bz, p)));
+    }
+
+    /** Records the provenance of the segment about to be added: a new row unless it equals the last. */
+    private void source(Provenance p) {
+        int size = size();
         int word = size >>> 6;
         if (word == rowStarts.length) {
             int n = grownLength(rowStarts.length);
@@ -116,123 +129,105 @@ final class SegmentColumns {
         if ((size & 63) == 0) {
             rowsBefore[word] = rows.size();
         }
-        Provenance p = s.source();
         if (size == 0 || p != lastSource && !p.equals(lastSource)) {
             rowStarts[word] |= 1L << (size & 63);
             rows.add(p);
         }
         lastSource = p;
-        int d = s instanceof Straight line ? straight(line) : s instanceof CircularArc arc ? arc(arc) : -1;
-        descriptors[size] = d >= 0 ? d : object(s);
-        size++;
     }
 
-    /** The descriptor of a straight's record, or -1 when the value array is full. */
-    private int straight(Straight line) {
-        double ax = line.ax();
-        double ay = line.ay();
-        double az = line.az();
-        double bx = line.bx();
-        double by = line.by();
-        double bz = line.bz();
+    /** The descriptor of a straight's record, or -1 when no more values can be addressed. */
+    private int straight(double ax, double ay, double az, double bx, double by, double bz) {
         boolean flat = bits(az) == POSITIVE_ZERO && bits(bz) == POSITIVE_ZERO;
-        double[] v = values;
-        int n = valueCount;
-        if (flat && (lastValueKind == STRAIGHT_Z0 || lastValueKind == FOLLOW_Z0)
-                && bits(v[n - 2]) == bits(ax) && bits(v[n - 1]) == bits(ay)) {
-            int at = reserve(2, FOLLOW_Z0);
-            if (at >= 0) {
-                values[at] = bx;
-                values[at + 1] = by;
-            }
-            return descriptor(at, FOLLOW_Z0);
+        DoubleChunks v = values;
+        int n = v.end();
+        if (flat && (lastValueKind == STRAIGHT_Z0 || lastValueKind == FOLLOW_Z0) && v.fitsHere(2)
+                && bits(v.get(n - 2)) == bits(ax) && bits(v.get(n - 1)) == bits(ay)) {
+            return write(FOLLOW_Z0, bx, by, 0, 0, 0, 0, 2);
         }
-        if ((lastValueKind == STRAIGHT || lastValueKind == FOLLOW) && bits(v[n - 3]) == bits(ax)
-                && bits(v[n - 2]) == bits(ay) && bits(v[n - 1]) == bits(az)) {
-            int at = reserve(3, FOLLOW);
-            if (at >= 0) {
-                values[at] = bx;
-                values[at + 1] = by;
-                values[at + 2] = bz;
-            }
-            return descriptor(at, FOLLOW);
+        if ((lastValueKind == STRAIGHT || lastValueKind == FOLLOW) && v.fitsHere(3) && bits(v.get(n - 3)) == bits(ax)
+                && bits(v.get(n - 2)) == bits(ay) && bits(v.get(n - 1)) == bits(az)) {
+            return write(FOLLOW, bx, by, bz, 0, 0, 0, 3);
         }
         if (flat) {
-            int at = reserve(4, STRAIGHT_Z0);
-            if (at >= 0) {
-                values[at] = ax;
-                values[at + 1] = ay;
-                values[at + 2] = bx;
-                values[at + 3] = by;
-            }
-            return descriptor(at, STRAIGHT_Z0);
+            return write(STRAIGHT_Z0, ax, ay, bx, by, 0, 0, 4);
         }
-        int at = reserve(6, STRAIGHT);
-        if (at >= 0) {
-            values[at] = ax;
-            values[at + 1] = ay;
-            values[at + 2] = az;
-            values[at + 3] = bx;
-            values[at + 4] = by;
-            values[at + 5] = bz;
-        }
-        return descriptor(at, STRAIGHT);
+        return write(STRAIGHT, ax, ay, az, bx, by, bz, 6);
     }
 
-    /** The descriptor of an arc's record, or -1 when the value array or the axes table is full. */
-    private int arc(CircularArc arc) {
-        int k;
-        if (arc.u() == lastU && arc.v() == lastV) {
-            k = lastAxes;
-        } else {
-            Axes key = new Axes(arc.u(), arc.v());
-            Integer known = axesIndex.get(key);
-            if (known == null) {
-                if (axes.size() >= MAX_AXES) {
-                    return -1;
-                }
-                known = axes.size();
-                axes.add(key);
-                axesIndex.put(key, known);
-            }
-            k = known;
-            lastU = arc.u();
-            lastV = arc.v();
-            lastAxes = k;
-        }
-        boolean flat = bits(arc.cz()) == POSITIVE_ZERO;
-        int at = reserve(flat ? 6 : 7, flat ? ARC_Z0 : ARC);
-        if (at >= 0) {
-            int i = at;
-            values[i++] = arc.cx();
-            values[i++] = arc.cy();
-            if (!flat) {
-                values[i++] = arc.cz();
-            }
-            values[i++] = arc.radius();
-            values[i++] = arc.t0();
-            values[i++] = arc.t1();
-            values[i] = k;
-        }
-        return descriptor(at, flat ? ARC_Z0 : ARC);
-    }
-
-    /** Room for a record of {@code n} values: its offset, or -1 when descriptors cannot address it. */
-    private int reserve(int n, int kind) {
-        int at = valueCount;
-        if (at > MAX_PAYLOAD - n) {
+    /** Writes the first {@code n} of six values as a record of {@code kind}: its descriptor, or -1. */
+    private int write(int kind, double v0, double v1, double v2, double v3, double v4, double v5, int n) {
+        int at = values.reserve(n);
+        if (at < 0) {
             return -1;
         }
-        if (at + n > values.length) {
-            values = Arrays.copyOf(values, Math.max(grownLength(values.length), at + n));
+        double[] c = values.chunk(at);
+        int k = DoubleChunks.position(at);
+        c[k] = v0;
+        c[k + 1] = v1;
+        if (n > 2) {
+            c[k + 2] = v2;
         }
-        valueCount = at + n;
+        if (n > 3) {
+            c[k + 3] = v3;
+        }
+        if (n > 4) {
+            c[k + 4] = v4;
+            c[k + 5] = v5;
+        }
         lastValueKind = kind;
-        return at;
+        return at << KIND_BITS | kind;
     }
 
-    private static int descriptor(int at, int kind) {
-        return at < 0 ? -1 : at << KIND_BITS | kind;
+    /** The descriptor of an arc's record, or -1 when no more values or axis pairs can be addressed. */
+    private int arc(CircularArc arc) {
+        int k = axesIndex(arc.u(), arc.v());
+        if (k < 0) {
+            return -1;
+        }
+        boolean flat = bits(arc.cz()) == POSITIVE_ZERO;
+        int kind = flat ? ARC_Z0 : ARC;
+        int at = values.reserve(flat ? 6 : 7);
+        if (at < 0) {
+            return -1;
+        }
+        double[] c = values.chunk(at);
+        int i = DoubleChunks.position(at);
+        c[i++] = arc.cx();
+        c[i++] = arc.cy();
+        if (!flat) {
+            c[i++] = arc.cz();
+        }
+        c[i++] = arc.radius();
+        c[i++] = arc.t0();
+        c[i++] = arc.t1();
+        c[i] = k;
+        lastValueKind = kind;
+        return at << KIND_BITS | kind;
+    }
+
+    /** The table index of the pair (u, v), added when new; -1 when the table is full. */
+    private int axesIndex(Vec3 u, Vec3 v) {
+        for (int r = 0; r < RECENT; r++) {
+            if (recentU[r] == u && recentV[r] == v) {
+                return recentIndex[r];
+            }
+        }
+        Axes key = new Axes(u, v);
+        Integer known = axesIndex.get(key);
+        if (known == null) {
+            if (axes.size() >= MAX_AXES) {
+                return -1;
+            }
+            known = axes.size();
+            axes.add(key);
+            axesIndex.put(key, known);
+        }
+        recentU[recentNext] = u;
+        recentV[recentNext] = v;
+        recentIndex[recentNext] = known;
+        recentNext = (recentNext + 1) % RECENT;
+        return known;
     }
 
     private int object(Segment s) {
@@ -244,62 +239,68 @@ final class SegmentColumns {
     }
 
     Segment segment(int i) {
-        if (i < 0 || i >= size) {
-            throw new IndexOutOfBoundsException("index " + i + " of size " + size);
+        if (i < 0 || i >= size()) {
+            throw new IndexOutOfBoundsException("index " + i + " of size " + size());
         }
-        int d = descriptors[i];
+        int d = descriptors.get(i);
         int at = d >>> KIND_BITS;
-        double[] v = values;
+        DoubleChunks v = values;
         Provenance p = source(i);
         return switch (d & KIND_MASK) {
-            case STRAIGHT -> new Straight(v[at], v[at + 1], v[at + 2], v[at + 3], v[at + 4], v[at + 5], p);
-            case STRAIGHT_Z0 -> new Straight(v[at], v[at + 1], 0.0, v[at + 2], v[at + 3], 0.0, p);
-            case FOLLOW -> new Straight(v[at - 3], v[at - 2], v[at - 1], v[at], v[at + 1], v[at + 2], p);
-            case FOLLOW_Z0 -> new Straight(v[at - 2], v[at - 1], 0.0, v[at], v[at + 1], 0.0, p);
-            case ARC -> arc(new Vec3(v[at], v[at + 1], v[at + 2]), at + 3, p);
-            case ARC_Z0 -> arc(new Vec3(v[at], v[at + 1], 0.0), at + 2, p);
+            case STRAIGHT -> new Straight(v.get(at), v.get(at + 1), v.get(at + 2), v.get(at + 3), v.get(at + 4),
+                    v.get(at + 5), p);
+            case STRAIGHT_Z0 -> new Straight(v.get(at), v.get(at + 1), 0.0, v.get(at + 2), v.get(at + 3), 0.0, p);
+            case FOLLOW -> new Straight(v.get(at - 3), v.get(at - 2), v.get(at - 1), v.get(at), v.get(at + 1),
+                    v.get(at + 2), p);
+            case FOLLOW_Z0 -> new Straight(v.get(at - 2), v.get(at - 1), 0.0, v.get(at), v.get(at + 1), 0.0, p);
+            case ARC -> arc(new Vec3(v.get(at), v.get(at + 1), v.get(at + 2)), at + 3, p);
+            case ARC_Z0 -> arc(new Vec3(v.get(at), v.get(at + 1), 0.0), at + 2, p);
             default -> objects.get(at);
         };
     }
 
     private CircularArc arc(Vec3 centre, int at, Provenance p) {
-        double[] v = values;
-        Axes a = axes.get((int) v[at + 3]);
-        return new CircularArc(centre, v[at], a.u(), a.v(), v[at + 1], v[at + 2], p);
+        DoubleChunks v = values;
+        Axes a = axes.get((int) v.get(at + 3));
+        return new CircularArc(centre, v.get(at), a.u(), a.v(), v.get(at + 1), v.get(at + 2), p);
     }
 
     private Provenance source(int i) {
+        return rows.get(row(i));
+    }
+
+    /** The provenance row of segment {@code i}: rows started up to and including it, less one. */
+    private int row(int i) {
         int word = i >>> 6;
-        long upTo = rowStarts[word] & (-1L >>> (63 - (i & 63)));
-        return rows.get(rowsBefore[word] + Long.bitCount(upTo) - 1);
+        return rowsBefore[word] + Long.bitCount(rowStarts[word] & (-1L >>> (63 - (i & 63)))) - 1;
     }
 
     /** Drops the segments from {@code newSize} on (a converter rolling back a failed entity). */
     void truncate(int newSize) {
+        int size = size();
         if (newSize < 0 || newSize > size) {
             throw new IndexOutOfBoundsException("cannot truncate " + size + " segments to " + newSize);
         }
-        int newValueCount = valueCount;
+        int newValueEnd = values.end();
         int newObjectCount = objects.size();
         for (int i = size - 1; i >= newSize; i--) {
-            int d = descriptors[i];
+            int d = descriptors.get(i);
             if ((d & KIND_MASK) == OBJECT) {
                 newObjectCount = d >>> KIND_BITS;
             } else {
-                newValueCount = d >>> KIND_BITS;
+                newValueEnd = d >>> KIND_BITS;
             }
             rowStarts[i >>> 6] &= ~(1L << (i & 63));
         }
         objects.subList(newObjectCount, objects.size()).clear();
-        valueCount = newValueCount;
-        int rowCount = newSize == 0 ? 0 : rowsBefore[(newSize - 1) >>> 6]
-                + Long.bitCount(rowStarts[(newSize - 1) >>> 6] & (-1L >>> (63 - ((newSize - 1) & 63))));
-        rows.truncate(rowCount);
-        size = newSize;
-        lastSource = newSize == 0 ? null : source(newSize - 1);
+        values.truncate(newValueEnd);
+        descriptors.truncate(newSize);
+        int last = newSize - 1;
+        rows.truncate(newSize == 0 ? 0 : row(last) + 1);
+        lastSource = newSize == 0 ? null : source(last);
         lastValueKind = -1;
-        for (int i = newSize - 1; i >= 0; i--) {
-            int kind = descriptors[i] & KIND_MASK;
+        for (int i = last; i >= 0; i--) {
+            int kind = descriptors.get(i) & KIND_MASK;
             if (kind != OBJECT) {
                 lastValueKind = kind;
                 break;
@@ -307,12 +308,11 @@ final class SegmentColumns {
         }
     }
 
-    /** A copy with arrays of exactly the used length, for reading only. */
+    /** A copy that is never changed again, for reading only; this one must not be appended to afterwards. */
     SegmentColumns trimmed() {
-        int words = (size + 63) >>> 6;
-        return new SegmentColumns(size, Arrays.copyOf(descriptors, size), Arrays.copyOf(values, valueCount),
-                valueCount, List.copyOf(objects), List.copyOf(axes), Map.of(), Arrays.copyOf(rowStarts, words),
-                Arrays.copyOf(rowsBefore, words), rows.trimmed());
+        int words = (size() + 63) >>> 6;
+        return new SegmentColumns(descriptors.trimmed(), values.trimmed(), List.copyOf(objects), List.copyOf(axes),
+                Map.of(), Arrays.copyOf(rowStarts, words), Arrays.copyOf(rowsBefore, words), rows.trimmed());
     }
 
     private static long bits(double d) {

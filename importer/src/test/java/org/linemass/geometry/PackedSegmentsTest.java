@@ -85,7 +85,52 @@ class PackedSegmentsTest {
         b.addAll(packed);
         assertThrows(UnsupportedOperationException.class, () -> b.subList(0, 5).clear());
         assertThrows(NullPointerException.class, () -> b.add(null));
+        PackedSegments built = b.build();
+        assertEquals(packed, built);
+        assertThrows(IllegalStateException.class, () -> b.add(packed.get(0)));
+        assertThrows(IllegalStateException.class, b::build);
         assertEquals(0, PackedSegments.copyOf(List.of()).size());
+    }
+
+    @Test
+    void addStraight_equalsAddingTheStraightObject() {
+        Random rnd = new Random(19);
+        for (int round = 0; round < 50; round++) {
+            List<Segment> expected = randomSegments(rnd, rnd.nextInt(200));
+            PackedSegments.Builder b = new PackedSegments.Builder();
+            for (Segment s : expected) {
+                if (s instanceof Straight line) {
+                    b.addStraight(line.a().x(), line.a().y(), line.a().z(), line.b().x(), line.b().y(), line.b().z(),
+                            line.source());
+                } else {
+                    b.add(s);
+                }
+            }
+            assertEqualLists(expected, b.build());
+        }
+    }
+
+    @Test
+    void longPlanPolyline_crossesValueChunks() {
+        // more than one 65,536-value chunk of chained plan straights, with a 3D straight and an arc
+        // now and then so records of every size meet the chunk ends
+        Random rnd = new Random(5);
+        List<Segment> expected = new ArrayList<>();
+        Provenance p = Provenance.of("mesh.dxf", "MESH", 9, "5A", "LWPOLYLINE");
+        Vec3 last = Vec3.ZERO;
+        for (int i = 0; i < 200_000; i++) {
+            Vec3 next = new Vec3(last.x() + rnd.nextDouble(), rnd.nextDouble(), i % 97 == 0 ? 1 : 0);
+            if (i % 89 == 0) {
+                expected.add(new CircularArc(next, 1, Vec3.X, Vec3.Y, 0, 1, p));
+            }
+            expected.add(new Straight(last, next, p));
+            last = next;
+        }
+        PackedSegments.Builder b = new PackedSegments.Builder();
+        b.addAll(expected);
+        b.subList(150_000, b.size()).clear();
+        b.addAll(expected.subList(150_000, expected.size()));
+        assertEqualLists(expected, b.build());
     }
 
     @Test
