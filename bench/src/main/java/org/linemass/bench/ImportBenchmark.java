@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Random;
 import java.util.concurrent.TimeUnit;
+import java.util.function.DoubleFunction;
 import org.linemass.drawing.Drawing;
 import org.linemass.importer.DxfImporter;
 import org.linemass.importer.DxfInputException;
@@ -77,7 +78,16 @@ public class ImportBenchmark {
     }
 
     static void write(Path f, long targetBytes) throws IOException {
+        write(f, targetBytes, false);
+    }
+
+    /**
+     * Writes the rack drawing; coordinates with six decimals, or with {@code shortestText} in the
+     * shortest text that reads back to the same double, as writers that keep full precision do.
+     */
+    static void write(Path f, long targetBytes, boolean shortestText) throws IOException {
         Random rnd = new Random(42);
+        DoubleFunction<String> num = shortestText ? Double::toString : ImportBenchmark::num;
         String[] layers = {"RACK_WIRE_D4", "RACK_FRAME_D8", "RACK_HOOK_D5"};
         try (BufferedWriter w = Files.newBufferedWriter(f, StandardCharsets.US_ASCII)) {
             w.write("  0\nSECTION\n  2\nHEADER\n  9\n$ACADVER\n  1\nAC1015\n  9\n$INSUNITS\n 70\n4\n  0\nENDSEC\n");
@@ -93,25 +103,25 @@ public class ImportBenchmark {
                     if (kind < 6) {
                         sb.append("  0\nLINE\n  5\n").append(h).append("\n330\n1F\n100\nAcDbEntity\n  8\n")
                                 .append(layer).append("\n100\nAcDbLine\n");
-                        point(sb, 10, rnd);
-                        point(sb, 11, rnd);
+                        point(sb, 10, rnd, num);
+                        point(sb, 11, rnd, num);
                     } else if (kind < 8) {
                         sb.append("  0\nARC\n  5\n").append(h).append("\n330\n1F\n100\nAcDbEntity\n  8\n")
                                 .append(layer).append("\n100\nAcDbCircle\n");
-                        point(sb, 10, rnd);
-                        sb.append(" 40\n").append(num(5 + 50 * rnd.nextDouble())).append("\n100\nAcDbArc\n 50\n")
-                                .append(num(360 * rnd.nextDouble())).append("\n 51\n")
-                                .append(num(360 * rnd.nextDouble())).append('\n');
+                        point(sb, 10, rnd, num);
+                        sb.append(" 40\n").append(num.apply(5 + 50 * rnd.nextDouble())).append("\n100\nAcDbArc\n 50\n")
+                                .append(num.apply(360 * rnd.nextDouble())).append("\n 51\n")
+                                .append(num.apply(360 * rnd.nextDouble())).append('\n');
                     } else {
                         int n = 4 + rnd.nextInt(6);
                         sb.append("  0\nLWPOLYLINE\n  5\n").append(h).append("\n330\n1F\n100\nAcDbEntity\n  8\n")
                                 .append(layer).append("\n100\nAcDbPolyline\n 90\n").append(n).append("\n 70\n")
                                 .append(rnd.nextInt(2)).append("\n 43\n0.0\n");
                         for (int v = 0; v < n; v++) {
-                            sb.append(" 10\n").append(num(2000 * rnd.nextDouble())).append("\n 20\n")
-                                    .append(num(2000 * rnd.nextDouble())).append('\n');
+                            sb.append(" 10\n").append(num.apply(2000 * rnd.nextDouble())).append("\n 20\n")
+                                    .append(num.apply(2000 * rnd.nextDouble())).append('\n');
                             if (rnd.nextInt(3) == 0) {
-                                sb.append(" 42\n").append(num(rnd.nextDouble() - 0.5)).append('\n');
+                                sb.append(" 42\n").append(num.apply(rnd.nextDouble() - 0.5)).append('\n');
                             }
                         }
                     }
@@ -123,9 +133,9 @@ public class ImportBenchmark {
         }
     }
 
-    private static void point(StringBuilder sb, int code, Random rnd) {
-        sb.append(' ').append(code).append('\n').append(num(3000 * rnd.nextDouble())).append('\n')
-                .append(' ').append(code + 10).append('\n').append(num(3000 * rnd.nextDouble())).append('\n')
+    private static void point(StringBuilder sb, int code, Random rnd, DoubleFunction<String> num) {
+        sb.append(' ').append(code).append('\n').append(num.apply(3000 * rnd.nextDouble())).append('\n')
+                .append(' ').append(code + 10).append('\n').append(num.apply(3000 * rnd.nextDouble())).append('\n')
                 .append(' ').append(code + 20).append('\n').append("0.0").append('\n');
     }
 

@@ -1,10 +1,10 @@
 package org.linemass.importer.entity;
 
+import java.util.List;
 import org.linemass.geometry.Affine;
 import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
-import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
 
 /**
@@ -26,16 +26,19 @@ final class Bulge {
     private Bulge() {
     }
 
-    static Segment piece(double x1, double y1, double x2, double y2, double z, double b, Ocs.Frame ocs,
-            Provenance p) {
+    /** Appends the piece to {@code out}. */
+    static void append(double x1, double y1, double x2, double y2, double z, double b, Ocs.Frame ocs,
+            Provenance p, List<Segment> out) {
         if (Math.abs(b) < STRAIGHT_BULGE) {
-            return straight(x1, y1, x2, y2, z, ocs, p);
+            straight(x1, y1, x2, y2, z, ocs, p, out);
+            return;
         }
         double dx = x2 - x1;
         double dy = y2 - y1;
         double c = Math.hypot(dx, dy);
         if (!(c > 0)) {
-            return straight(x1, y1, x2, y2, z, ocs, p);
+            straight(x1, y1, x2, y2, z, ocs, p, out);
+            return;
         }
         double ux = dx / c;
         double uy = dy / c;
@@ -46,8 +49,8 @@ final class Bulge {
         double sweep = 4 * Math.atan(Math.abs(b));
         // u = OCS x and v = +-OCS y (shared axis objects); t0 is the start vertex's angle in that frame
         double t0 = b > 0 ? Math.atan2(y1 - cy, x1 - cx) : Math.atan2(cy - y1, x1 - cx);
-        return CircularArc.of(ocs.map().apply(new Vec3(cx, cy, z)), r, ocs.x(), b > 0 ? ocs.y() : ocs.minusY(), t0,
-                t0 + sweep, p);
+        out.add(CircularArc.of(ocs.map().apply(new Vec3(cx, cy, z)), r, ocs.x(), b > 0 ? ocs.y() : ocs.minusY(), t0,
+                t0 + sweep, p));
     }
 
     /**
@@ -55,12 +58,15 @@ final class Bulge {
      * OCS ones plus 0.0, exactly what applying the identity map gives (it turns -0.0 into +0.0),
      * without the intermediate vectors.
      */
-    private static Straight straight(double x1, double y1, double x2, double y2, double z, Ocs.Frame ocs,
-            Provenance p) {
+    private static void straight(double x1, double y1, double x2, double y2, double z, Ocs.Frame ocs,
+            Provenance p, List<Segment> out) {
         Affine m = ocs.map();
         if (m == Affine.IDENTITY) {
-            return new Straight(x1 + 0.0, y1 + 0.0, z + 0.0, x2 + 0.0, y2 + 0.0, z + 0.0, p);
+            Straights.add(out, x1 + 0.0, y1 + 0.0, z + 0.0, x2 + 0.0, y2 + 0.0, z + 0.0, p);
+            return;
         }
-        return new Straight(m.apply(new Vec3(x1, y1, z)), m.apply(new Vec3(x2, y2, z)), p);
+        Vec3 a = m.apply(new Vec3(x1, y1, z));
+        Vec3 b = m.apply(new Vec3(x2, y2, z));
+        Straights.add(out, a.x(), a.y(), a.z(), b.x(), b.y(), b.z(), p);
     }
 }

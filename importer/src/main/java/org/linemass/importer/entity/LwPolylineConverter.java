@@ -65,7 +65,7 @@ final class LwPolylineConverter {
                     x0 = x;
                     y0 = y;
                 } else if (k > 0) {
-                    out.add(Bulge.piece(px, py, x, y, elevation, pb, frame, p));
+                    Bulge.append(px, py, x, y, elevation, pb, frame, p, out);
                 }
                 px = x;
                 py = y;
@@ -83,7 +83,7 @@ final class LwPolylineConverter {
             }
         }
         if ((flags & 1) != 0) {
-            out.add(Bulge.piece(px, py, x0, y0, elevation, pb, frame, p));
+            Bulge.append(px, py, x0, y0, elevation, pb, frame, p, out);
         }
     }
 }

@@ -4,7 +4,6 @@ import java.util.Arrays;
 import java.util.List;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
-import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
 import org.linemass.importer.read.Record;
 
@@ -113,10 +112,14 @@ public final class PolylineBuilder {
         boolean closed = (flags & CLOSED) != 0 && m > 1;
         if ((flags & POLYLINE_3D) != 0) {
             for (int i = 0; i + 1 < m; i++) {
-                out.add(new Straight(at3(use[i]), at3(use[i + 1]), p));
+                int a = use[i];
+                int b = use[i + 1];
+                Straights.add(out, x[a], y[a], z[a], x[b], y[b], z[b], p);
             }
             if (closed) {
-                out.add(new Straight(at3(use[m - 1]), at3(use[0]), p));
+                int a = use[m - 1];
+                int b = use[0];
+                Straights.add(out, x[a], y[a], z[a], x[b], y[b], z[b], p);
             }
             return;
         }
@@ -125,17 +128,13 @@ public final class PolylineBuilder {
         for (int i = 0; i + 1 < m; i++) {
             int a = use[i];
             int b = use[i + 1];
-            out.add(Bulge.piece(x[a], y[a], x[b], y[b], elevation, splineFit ? 0 : bulge[a], ocs, p));
+            Bulge.append(x[a], y[a], x[b], y[b], elevation, splineFit ? 0 : bulge[a], ocs, p, out);
         }
         if (closed) {
             int a = use[m - 1];
             int b = use[0];
-            out.add(Bulge.piece(x[a], y[a], x[b], y[b], elevation, splineFit ? 0 : bulge[a], ocs, p));
+            Bulge.append(x[a], y[a], x[b], y[b], elevation, splineFit ? 0 : bulge[a], ocs, p, out);
         }
-    }
-
-    private Vec3 at3(int i) {
-        return new Vec3(x[i], y[i], z[i]);
     }
 
     private int[] selectVertices() {
