@@ -1,10 +1,8 @@
 package org.linemass.engine.pieces.checks;
 
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import org.linemass.engine.Tolerances;
 import org.linemass.engine.pieces.geom.ClosestPoints;
 import org.linemass.engine.pieces.geom.Contact;
@@ -38,6 +36,20 @@ import org.linemass.geometry.Vec3;
  */
 public final class ContactCheck {
 
+    /**
+     * Most T-junction and crossing notes listed one by one; beyond it they are counted (the weld
+     * count in every message stays exact) and one {@code limit_reached} note says how many were
+     * not listed. A drawing of thousands of long wires all crossing each other has millions.
+     */
+    public static final int MAX_LISTED = 100_000;
+
+    /**
+     * Most places of contact remembered for counting each pair of pieces and place once (about
+     * 50 bytes each, so at most about 1 GB); beyond it the search stops, the counts are lower
+     * bounds and a {@code limit_reached} warning says so.
+     */
+    public static final int MAX_COUNTED = 20_000_000;
+
     private ContactCheck() {
     }
 
@@ -50,44 +62,72 @@ public final class ContactCheck {
      */
     public static List<Finding> check(List<Segment> segments, DerivedIndex index, CandidatePairs pairs,
             int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol) {
+        return check(segments, index, pairs, layerOf, free, chainOf, tol, MAX_LISTED, MAX_COUNTED);
+    }
+
+    /**
+     * As {@link #check(List, DerivedIndex, CandidatePairs, int[], boolean[], int[], Tolerances)}
+     * listing at most {@code maxListed} T-junction and crossing notes and remembering at most
+     * {@code maxCounted} places of contact.
+     */
+    static List<Finding> check(List<Segment> segments, DerivedIndex index, CandidatePairs pairs,
+            int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol, int maxListed, int maxCounted) {
+        if (maxListed < 0 || maxCounted < 0) {
+            throw new IllegalArgumentException("limits must not be negative: listed " + maxListed + ", counted "
+                    + maxCounted);
+        }
         double j = tol.joinM();
         List<Hit> hits = new ArrayList<>();
+        // per kind: found, and of those not listed (notes beyond maxListed)
+        long[] tees = new long[2];
+        long[] crossings = new long[2];
         for (int e = 0; e < free.length; e++) {
             if (free[e]) {
                 Hit h = tJunction(segments, layerOf, index, e, j);
                 if (h != null) {
-                    hits.add(h);
+                    tees[0]++;
+                    if (tees[0] + crossings[0] <= maxListed) {
+                        hits.add(h);
+                    } else {
+                        tees[1]++;
+                    }
                 }
             }
         }
-        Map<Long, List<Vec3>> seen = new HashMap<>();
+        ContactPlaces seen = new ContactPlaces();
+        boolean[] stopped = {false};
         pairs.forEach((oi, oj) -> index.derivedOf(oi, ii -> index.derivedOf(oj, k -> {
-            if (ii == k || !index.box(ii).intersects(index.box(k))) {
+            if (stopped[0] || ii == k || !index.box(ii).intersects(index.box(k))) {
                 return;
             }
             for (Vec3 at : crossings(segments.get(ii), segments.get(k), 2 * ii, 2 * k, free, j)) {
+                if (seen.size() == maxCounted) {
+                    stopped[0] = true;
+                    return;
+                }
                 int ca = Math.min(chainOf[ii], chainOf[k]);
                 int cb = Math.max(chainOf[ii], chainOf[k]);
-                List<Vec3> places = seen.computeIfAbsent(pairKey(ca, cb), x -> new ArrayList<>());
-                boolean known = false;
-                for (Vec3 p : places) {
-                    if (p.distance(at) <= j) {
-                        known = true;
-                        break;
-                    }
+                if (!seen.addIfNew(ca, cb, at, j)) {
+                    continue;
                 }
-                if (!known) {
-                    places.add(at);
-                    hits.add(new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, at,
-                            Math.min(ii, k), Math.max(ii, k)));
+                Hit h = new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, at,
+                        Math.min(ii, k), Math.max(ii, k));
+                if (ca == cb) {
+                    hits.add(h);
+                } else {
+                    crossings[0]++;
+                    if (tees[0] + crossings[0] <= maxListed) {
+                        hits.add(h);
+                    } else {
+                        crossings[1]++;
+                    }
                 }
             }
         })));
-        long tees = hits.stream().filter(h -> h.kind().equals(FindingKind.T_JUNCTION)).count();
-        long crossings = hits.stream().filter(h -> h.kind().equals(FindingKind.CROSSING)).count();
-        String totals = String.format(Locale.ROOT, " Drawing total: %d T-junction%s and %d crossing%s.", tees,
-                tees == 1 ? "" : "s", crossings, crossings == 1 ? "" : "s");
-        List<Finding> out = new ArrayList<>(hits.size());
+        String totals = String.format(Locale.ROOT, " Drawing total: %s%d T-junction%s and %d crossing%s.",
+                stopped[0] ? "at least " : "", tees[0], tees[0] == 1 ? "" : "s", crossings[0],
+                crossings[0] == 1 ? "" : "s");
+        List<Finding> out = new ArrayList<>(hits.size() + 2);
         for (Hit h : hits) {
             Provenance pa = segments.get(h.a()).source();
             Provenance pb = segments.get(h.b()).source();
@@ -104,6 +144,20 @@ public final class ContactCheck {
                 }
             }
             out.add(Findings.of(h.kind(), sev, h.at(), null, pa.layer(), List.of(pa, pb), null, message));
+        }
+        if (tees[1] + crossings[1] > 0) {
+            // a note: only the list is shorter, every T-junction and crossing found is in the totals
+            out.add(new Finding(FindingKind.LIMIT_REACHED, Severity.INFO, null, null, null, List.of(), null,
+                    String.format(Locale.ROOT, "%d T-junction and crossing notes are not listed one by one (%d"
+                            + " T-junction%s, %d crossing%s; more than %d in the drawing); each is counted in the"
+                            + " drawing totals the listed ones give", tees[1] + crossings[1], tees[1], tees[1] == 1 ? "" : "s",
+                            crossings[1], crossings[1] == 1 ? "" : "s", maxListed)));
+        }
+        if (stopped[0]) {
+            out.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
+                    String.format(Locale.ROOT, "more than %d places where pieces touch or cross: the search for"
+                            + " crossings stopped there, so the T-junction and crossing totals are lower bounds and"
+                            + " some crossings and self-crossings are missing", maxCounted)));
         }
         return out;
     }
@@ -161,12 +215,6 @@ public final class ContactCheck {
             }
         }
         return out;
-    }
-
-    /** A well-mixed key of a pair of chain numbers (plain packing hashes badly in a HashMap). */
-    private static long pairKey(int a, int b) {
-        long h = (((long) a << 32) | (b & 0xFFFFFFFFL)) * 0x9E3779B97F4A7C15L;
-        return h ^ (h >>> 29);
     }
 
     private static boolean shareAnEnd(Straight a, Straight b, double tol) {
