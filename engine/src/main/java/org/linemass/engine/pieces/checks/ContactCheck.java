@@ -33,6 +33,11 @@ import org.linemass.geometry.Vec3;
  * In welded wire products each T-junction and crossing is a weld; every message carries the
  * drawing's totals. A curve meeting another at several places gives one crossing per place
  * ({@link ClosestPoints#within}).
+ *
+ * <p>Limits: at most {@link #MAX_LISTED} T-junction and crossing notes are listed, the rest only
+ * counted (one {@code limit_reached} note says how many); at most {@link #MAX_COUNTED} places of
+ * contact are remembered, beyond which the search stops with a {@code limit_reached} warning. When
+ * either that search or the candidate pairs were cut short, the totals read "at least".
  */
 public final class ContactCheck {
 
@@ -124,8 +129,9 @@ public final class ContactCheck {
                 }
             }
         })));
+        // pairs beyond the candidate-pair limit were never looked at: then the totals are lower bounds too
         String totals = String.format(Locale.ROOT, " Drawing total: %s%d T-junction%s and %d crossing%s.",
-                stopped[0] ? "at least " : "", tees[0], tees[0] == 1 ? "" : "s", crossings[0],
+                stopped[0] || pairs.truncated() ? "at least " : "", tees[0], tees[0] == 1 ? "" : "s", crossings[0],
                 crossings[0] == 1 ? "" : "s");
         List<Finding> out = new ArrayList<>(hits.size() + 2);
         for (Hit h : hits) {
@@ -150,8 +156,8 @@ public final class ContactCheck {
             out.add(new Finding(FindingKind.LIMIT_REACHED, Severity.INFO, null, null, null, List.of(), null,
                     String.format(Locale.ROOT, "%d T-junction and crossing notes are not listed one by one (%d"
                             + " T-junction%s, %d crossing%s; more than %d in the drawing); each is counted in the"
-                            + " drawing totals the listed ones give", tees[1] + crossings[1], tees[1], tees[1] == 1 ? "" : "s",
-                            crossings[1], crossings[1] == 1 ? "" : "s", maxListed)));
+                            + " drawing totals the listed ones give", tees[1] + crossings[1], tees[1],
+                            tees[1] == 1 ? "" : "s", crossings[1], crossings[1] == 1 ? "" : "s", maxListed)));
         }
         if (stopped[0]) {
             out.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
