@@ -34,10 +34,12 @@ import org.linemass.geometry.Vec3;
  * drawing's totals. A curve meeting another at several places gives one crossing per place
  * ({@link ClosestPoints#within}).
  *
- * <p>Limits: at most {@link #MAX_LISTED} T-junction and crossing notes are listed, the rest only
- * counted (one {@code limit_reached} note says how many); at most {@link #MAX_COUNTED} places of
- * contact are remembered, beyond which the search stops with a {@code limit_reached} warning. When
- * either that search or the candidate pairs were cut short, the totals read "at least".
+ * <p>Limits: T-junctions are looked for until a budget of candidate segments around free ends is
+ * spent (then a {@code limit_reached} warning); at most {@link #MAX_LISTED} T-junction and crossing
+ * notes are listed, the rest only counted (one {@code limit_reached} note says how many); at most
+ * {@link #MAX_COUNTED} places of contact are remembered, beyond which the search stops with a
+ * {@code limit_reached} warning. When any search or the candidate pairs were cut short, the totals
+ * read "at least".
  */
 public final class ContactCheck {
 
@@ -67,16 +69,19 @@ public final class ContactCheck {
      */
     public static List<Finding> check(List<Segment> segments, DerivedIndex index, CandidatePairs pairs,
             int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol) {
-        return check(segments, index, pairs, layerOf, free, chainOf, tol, MAX_LISTED, MAX_COUNTED);
+        return check(segments, index, pairs, layerOf, free, chainOf, tol, MAX_LISTED, MAX_COUNTED,
+                EndSearchBudget.MAX_CANDIDATES);
     }
 
     /**
      * As {@link #check(List, DerivedIndex, CandidatePairs, int[], boolean[], int[], Tolerances)}
      * listing at most {@code maxListed} T-junction and crossing notes and remembering at most
-     * {@code maxCounted} places of contact.
+     * {@code maxCounted} places of contact, looking at most at about {@code maxEndCandidates}
+     * candidate segments around free ends for T-junctions.
      */
     static List<Finding> check(List<Segment> segments, DerivedIndex index, CandidatePairs pairs,
-            int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol, int maxListed, int maxCounted) {
+            int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol, int maxListed, int maxCounted,
+            long maxEndCandidates) {
         if (maxListed < 0 || maxCounted < 0) {
             throw new IllegalArgumentException("limits must not be negative: listed " + maxListed + ", counted "
                     + maxCounted);
@@ -86,9 +91,17 @@ public final class ContactCheck {
         // per kind: found, and of those not listed (notes beyond maxListed)
         long[] tees = new long[2];
         long[] crossings = new long[2];
+        EndSearchBudget budget = new EndSearchBudget(maxEndCandidates);
+        long ends = 0;
+        long endsLeft = 0;
         for (int e = 0; e < free.length; e++) {
             if (free[e]) {
-                Hit h = tJunction(segments, layerOf, index, e, j);
+                ends++;
+                if (budget.exhausted()) {
+                    endsLeft++;
+                    continue;
+                }
+                Hit h = tJunction(segments, layerOf, index, e, j, budget);
                 if (h != null) {
                     tees[0]++;
                     if (tees[0] + crossings[0] <= maxListed) {
@@ -131,8 +144,8 @@ public final class ContactCheck {
         })));
         // pairs beyond the candidate-pair limit were never looked at: then the totals are lower bounds too
         String totals = String.format(Locale.ROOT, " Drawing total: %s%d T-junction%s and %d crossing%s.",
-                stopped[0] || pairs.truncated() ? "at least " : "", tees[0], tees[0] == 1 ? "" : "s", crossings[0],
-                crossings[0] == 1 ? "" : "s");
+                stopped[0] || pairs.truncated() || endsLeft > 0 ? "at least " : "", tees[0],
+                tees[0] == 1 ? "" : "s", crossings[0], crossings[0] == 1 ? "" : "s");
         List<Finding> out = new ArrayList<>(hits.size() + 2);
         for (Hit h : hits) {
             Provenance pa = segments.get(h.a()).source();
@@ -159,6 +172,7 @@ public final class ContactCheck {
                             + " drawing totals the listed ones give", tees[1] + crossings[1], tees[1],
                             tees[1] == 1 ? "" : "s", crossings[1], crossings[1] == 1 ? "" : "s", maxListed)));
         }
+        out.addAll(budget.finding("T-junctions", endsLeft, ends));
         if (stopped[0]) {
             out.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
                     String.format(Locale.ROOT, "more than %d places where pieces touch or cross: the search for"
@@ -168,7 +182,8 @@ public final class ContactCheck {
         return out;
     }
 
-    private static Hit tJunction(List<Segment> segments, int[] layerOf, BoxIndex index, int end, double tol) {
+    private static Hit tJunction(List<Segment> segments, int[] layerOf, BoxIndex index, int end, double tol,
+            EndSearchBudget budget) {
         int own = end >> 1;
         Segment s = segments.get(own);
         Vec3 p = (end & 1) == 0 ? s.start() : s.end();
@@ -177,6 +192,7 @@ public final class ContactCheck {
         int[] who = {-1};
         Vec3[] at = {null};
         index.query(box, k -> {
+            budget.spend();
             if (k == own) {
                 return;
             }

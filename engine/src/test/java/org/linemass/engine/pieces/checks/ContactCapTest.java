@@ -63,7 +63,8 @@ class ContactCapTest {
         boolean[] free = new boolean[2 * count];
         Arrays.fill(free, true);
         // every wire on one layer and a piece of its own
-        return ContactCheck.check(wires, derived, pairs, new int[count], free, identity, TOL, maxListed, maxCounted);
+        return ContactCheck.check(wires, derived, pairs, new int[count], free, identity, TOL, maxListed, maxCounted,
+                EndSearchBudget.MAX_CANDIDATES);
     }
 
     private static Provenance src(int handle) {
