@@ -7,10 +7,11 @@ import org.linemass.engine.result.FindingKind;
 import org.linemass.engine.result.Severity;
 
 /**
- * A budget of candidate segments looked at by a check that searches around every free end
- * ({@link TeeGapCheck}, the T-junctions of {@link ContactCheck}). Each end costs the segments
- * whose boxes contain it: a few in a real drawing, but thousands of long wires lying across the
- * whole drawing make every end meet most of them, so the work grows with the square of the
+ * A budget of candidates looked at by a check that searches around every free end
+ * ({@link GapCheck}, {@link TeeGapCheck}, the T-junctions of {@link ContactCheck}). Each end costs
+ * the segments whose boxes contain it (or the other ends within the gap limit): a few in a real
+ * drawing, but thousands of long wires lying across the whole drawing (or thousands of ends crowded
+ * into one spot) make every end meet most of them, so the work grows with the square of the
  * drawing. The check stops before the next end once the budget is spent and reports it with
  * {@link #finding}. Not thread-safe: one budget per check run.
  */
@@ -50,8 +51,8 @@ final class EndSearchBudget {
             return List.of();
         }
         return List.of(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
-                String.format(Locale.ROOT, "more than %d candidate segments looked at around wire ends (long wires"
-                        + " lying across the whole drawing?): %s were looked for at the first %d of %d free ends"
+                String.format(Locale.ROOT, "more than %d candidates looked at around wire ends (long wires lying"
+                        + " across the whole drawing?): %s were looked for at the first %d of %d free ends"
                         + " only, so some may be missing", limit, what, ends - left, ends)));
     }
 }

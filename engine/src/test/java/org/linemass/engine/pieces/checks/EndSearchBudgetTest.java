@@ -114,6 +114,38 @@ class EndSearchBudgetTest {
     }
 
     @Test
+    void endToEndGaps_allFoundWithAmpleBudget_andTheSearchStopsWhenSpent() {
+        // a handrail drawn as N lengths of 100 mm in a row, each 2 mm short of the next: N - 1 gaps
+        // (closed form from the construction; 2 mm is inside the 5 mm gap limit)
+        List<Segment> wires = new ArrayList<>();
+        for (int k = 0; k < N; k++) {
+            wires.add(new Straight(k * 0.102, 0, 0, k * 0.102 + 0.1, 0, 0, src(0x200 + k)));
+        }
+        boolean[] free = new boolean[2 * N];
+        Arrays.fill(free, true);
+        Vec3[] ends = new Vec3[2 * N];
+        int[] chain = new int[N];
+        double[] length = new double[N];
+        for (int i = 0; i < N; i++) {
+            ends[2 * i] = wires.get(i).start();
+            ends[2 * i + 1] = wires.get(i).end();
+            chain[i] = i;
+            length[i] = 0.1;
+        }
+        List<Finding> all = GapCheck.check(wires, new int[N], free, ends, chain, length, TOL, new boolean[2 * N],
+                EndSearchBudget.MAX_CANDIDATES);
+        assertEquals(N - 1, of(all, FindingKind.GAP).size());
+        assertEquals(0, of(all, FindingKind.LIMIT_REACHED).size());
+        List<Finding> cut = GapCheck.check(wires, new int[N], free, ends, chain, length, TOL, new boolean[2 * N], 0);
+        assertTrue(of(cut, FindingKind.GAP).size() <= 1);
+        List<Finding> limit = of(cut, FindingKind.LIMIT_REACHED);
+        assertEquals(1, limit.size());
+        assertEquals(Severity.WARNING, limit.get(0).severity());
+        assertTrue(limit.get(0).message().contains("gaps between wire ends were looked for at the first 1 of "
+                + 2 * N + " free ends only"), limit.get(0).message());
+    }
+
+    @Test
     void negativeBudget_isRejected() {
         assertThrows(IllegalArgumentException.class, () -> new EndSearchBudget(-1));
     }
