@@ -121,9 +121,12 @@ public final class Analyzer {
                     pieces.piecesPerLayer(), pieces.fieldMassPerLayer(), world.isPresent(), plan);
             findings.addAll(layers.findings());
             findings.addAll(stageFindings);
-            if (stageFindings.stream().anyMatch(f -> FindingKind.LIMIT_REACHED.equals(f.kind()))) {
+            // a limit_reached note (info) only shortened a list whose entries are still counted; a
+            // warning means a search stopped early and something may be missing
+            if (stageFindings.stream().anyMatch(f -> FindingKind.LIMIT_REACHED.equals(f.kind())
+                    && f.severity() != Severity.INFO)) {
                 reasons.add("the drawing checks hit a resource limit (see the limit_reached findings); material"
-                        + " drawn twice may be counted twice");
+                        + " drawn twice may be counted twice and welds may be missing from the counts");
             }
             // most serious first, so finding 1 is the one to fix first; the sort is stable, so the
             // order within a severity (import notes, layers, then the piece stage's order) stays

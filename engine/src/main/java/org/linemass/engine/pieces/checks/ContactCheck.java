@@ -1,10 +1,8 @@
 package org.linemass.engine.pieces.checks;
 
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import org.linemass.engine.Tolerances;
 import org.linemass.engine.pieces.geom.ClosestPoints;
 import org.linemass.engine.pieces.geom.Contact;
@@ -35,8 +33,29 @@ import org.linemass.geometry.Vec3;
  * In welded wire products each T-junction and crossing is a weld; every message carries the
  * drawing's totals. A curve meeting another at several places gives one crossing per place
  * ({@link ClosestPoints#within}).
+ *
+ * <p>Limits: T-junctions are looked for until a budget of candidate segments around free ends is
+ * spent (then a {@code limit_reached} warning); at most {@link #MAX_LISTED} T-junction and crossing
+ * notes are listed, the rest only counted (one {@code limit_reached} note says how many); at most
+ * {@link #MAX_COUNTED} places of contact are remembered, beyond which the search stops with a
+ * {@code limit_reached} warning. When any search or the candidate pairs were cut short, the totals
+ * read "at least".
  */
 public final class ContactCheck {
+
+    /**
+     * Most T-junction and crossing notes listed one by one; beyond it they are counted (the weld
+     * count in every message stays exact) and one {@code limit_reached} note says how many were
+     * not listed. A drawing of thousands of long wires all crossing each other has millions.
+     */
+    public static final int MAX_LISTED = 100_000;
+
+    /**
+     * Most places of contact remembered for counting each pair of pieces and place once (about
+     * 50 bytes each, so at most about 1 GB); beyond it the search stops, the counts are lower
+     * bounds and a {@code limit_reached} warning says so.
+     */
+    public static final int MAX_COUNTED = 20_000_000;
 
     private ContactCheck() {
     }
@@ -50,44 +69,84 @@ public final class ContactCheck {
      */
     public static List<Finding> check(List<Segment> segments, DerivedIndex index, CandidatePairs pairs,
             int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol) {
+        return check(segments, index, pairs, layerOf, free, chainOf, tol, MAX_LISTED, MAX_COUNTED,
+                EndSearchBudget.MAX_CANDIDATES);
+    }
+
+    /**
+     * As {@link #check(List, DerivedIndex, CandidatePairs, int[], boolean[], int[], Tolerances)}
+     * listing at most {@code maxListed} T-junction and crossing notes and remembering at most
+     * {@code maxCounted} places of contact, looking at most at about {@code maxEndCandidates}
+     * candidate segments around free ends for T-junctions.
+     */
+    static List<Finding> check(List<Segment> segments, DerivedIndex index, CandidatePairs pairs,
+            int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol, int maxListed, int maxCounted,
+            long maxEndCandidates) {
+        if (maxListed < 0 || maxCounted < 0) {
+            throw new IllegalArgumentException("limits must not be negative: listed " + maxListed + ", counted "
+                    + maxCounted);
+        }
         double j = tol.joinM();
         List<Hit> hits = new ArrayList<>();
+        // per kind: found, and of those not listed (notes beyond maxListed)
+        long[] tees = new long[2];
+        long[] crossings = new long[2];
+        EndSearchBudget budget = new EndSearchBudget(maxEndCandidates);
+        long ends = 0;
+        long endsLeft = 0;
         for (int e = 0; e < free.length; e++) {
             if (free[e]) {
-                Hit h = tJunction(segments, layerOf, index, e, j);
+                ends++;
+                if (budget.exhausted()) {
+                    endsLeft++;
+                    continue;
+                }
+                Hit h = tJunction(segments, layerOf, index, e, j, budget);
                 if (h != null) {
-                    hits.add(h);
+                    tees[0]++;
+                    if (tees[0] + crossings[0] <= maxListed) {
+                        hits.add(h);
+                    } else {
+                        tees[1]++;
+                    }
                 }
             }
         }
-        Map<Long, List<Vec3>> seen = new HashMap<>();
+        ContactPlaces seen = new ContactPlaces();
+        boolean[] stopped = {false};
         pairs.forEach((oi, oj) -> index.derivedOf(oi, ii -> index.derivedOf(oj, k -> {
-            if (ii == k || !index.box(ii).intersects(index.box(k))) {
+            if (stopped[0] || ii == k || !index.box(ii).intersects(index.box(k))) {
                 return;
             }
             for (Vec3 at : crossings(segments.get(ii), segments.get(k), 2 * ii, 2 * k, free, j)) {
+                if (seen.size() == maxCounted) {
+                    stopped[0] = true;
+                    return;
+                }
                 int ca = Math.min(chainOf[ii], chainOf[k]);
                 int cb = Math.max(chainOf[ii], chainOf[k]);
-                List<Vec3> places = seen.computeIfAbsent(pairKey(ca, cb), x -> new ArrayList<>());
-                boolean known = false;
-                for (Vec3 p : places) {
-                    if (p.distance(at) <= j) {
-                        known = true;
-                        break;
-                    }
+                if (!seen.addIfNew(ca, cb, at, j)) {
+                    continue;
                 }
-                if (!known) {
-                    places.add(at);
-                    hits.add(new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, at,
-                            Math.min(ii, k), Math.max(ii, k)));
+                Hit h = new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, at,
+                        Math.min(ii, k), Math.max(ii, k));
+                if (ca == cb) {
+                    hits.add(h);
+                } else {
+                    crossings[0]++;
+                    if (tees[0] + crossings[0] <= maxListed) {
+                        hits.add(h);
+                    } else {
+                        crossings[1]++;
+                    }
                 }
             }
         })));
-        long tees = hits.stream().filter(h -> h.kind().equals(FindingKind.T_JUNCTION)).count();
-        long crossings = hits.stream().filter(h -> h.kind().equals(FindingKind.CROSSING)).count();
-        String totals = String.format(Locale.ROOT, " Drawing total: %d T-junction%s and %d crossing%s.", tees,
-                tees == 1 ? "" : "s", crossings, crossings == 1 ? "" : "s");
-        List<Finding> out = new ArrayList<>(hits.size());
+        // pairs beyond the candidate-pair limit were never looked at: then the totals are lower bounds too
+        String totals = String.format(Locale.ROOT, " Drawing total: %s%d T-junction%s and %d crossing%s.",
+                stopped[0] || pairs.truncated() || endsLeft > 0 ? "at least " : "", tees[0],
+                tees[0] == 1 ? "" : "s", crossings[0], crossings[0] == 1 ? "" : "s");
+        List<Finding> out = new ArrayList<>(hits.size() + 2);
         for (Hit h : hits) {
             Provenance pa = segments.get(h.a()).source();
             Provenance pb = segments.get(h.b()).source();
@@ -105,10 +164,26 @@ public final class ContactCheck {
             }
             out.add(Findings.of(h.kind(), sev, h.at(), null, pa.layer(), List.of(pa, pb), null, message));
         }
+        if (tees[1] + crossings[1] > 0) {
+            // a note: only the list is shorter, every T-junction and crossing found is in the totals
+            out.add(new Finding(FindingKind.LIMIT_REACHED, Severity.INFO, null, null, null, List.of(), null,
+                    String.format(Locale.ROOT, "%d T-junction and crossing notes are not listed one by one (%d"
+                            + " T-junction%s, %d crossing%s; more than %d in the drawing); each is counted in the"
+                            + " drawing totals the listed ones give", tees[1] + crossings[1], tees[1],
+                            tees[1] == 1 ? "" : "s", crossings[1], crossings[1] == 1 ? "" : "s", maxListed)));
+        }
+        out.addAll(budget.finding("T-junctions", endsLeft, ends));
+        if (stopped[0]) {
+            out.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
+                    String.format(Locale.ROOT, "more than %d places where pieces touch or cross: the search for"
+                            + " crossings stopped there, so the T-junction and crossing totals are lower bounds and"
+                            + " some crossings and self-crossings are missing", maxCounted)));
+        }
         return out;
     }
 
-    private static Hit tJunction(List<Segment> segments, int[] layerOf, BoxIndex index, int end, double tol) {
+    private static Hit tJunction(List<Segment> segments, int[] layerOf, BoxIndex index, int end, double tol,
+            EndSearchBudget budget) {
         int own = end >> 1;
         Segment s = segments.get(own);
         Vec3 p = (end & 1) == 0 ? s.start() : s.end();
@@ -117,6 +192,7 @@ public final class ContactCheck {
         int[] who = {-1};
         Vec3[] at = {null};
         index.query(box, k -> {
+            budget.spend();
             if (k == own) {
                 return;
             }
@@ -161,12 +237,6 @@ public final class ContactCheck {
             }
         }
         return out;
-    }
-
-    /** A well-mixed key of a pair of chain numbers (plain packing hashes badly in a HashMap). */
-    private static long pairKey(int a, int b) {
-        long h = (((long) a << 32) | (b & 0xFFFFFFFFL)) * 0x9E3779B97F4A7C15L;
-        return h ^ (h >>> 29);
     }
 
     private static boolean shareAnEnd(Straight a, Straight b, double tol) {

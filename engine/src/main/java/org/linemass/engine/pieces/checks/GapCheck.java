@@ -46,6 +46,19 @@ public final class GapCheck {
      */
     public static List<Finding> check(List<Segment> segments, int[] layerOf, boolean[] free, Vec3[] endPoint,
             int[] chainOf, double[] chainLength, Tolerances tol, boolean[] reported) {
+        return check(segments, layerOf, free, endPoint, chainOf, chainLength, tol, reported,
+                EndSearchBudget.MAX_CANDIDATES);
+    }
+
+    /**
+     * As {@link #check(List, int[], boolean[], Vec3[], int[], double[], Tolerances, boolean[])},
+     * stopping with a {@code limit_reached} warning once about {@code maxCandidates} other ends were
+     * looked at (thousands of free ends crowded within the gap limit of each other).
+     */
+    static List<Finding> check(List<Segment> segments, int[] layerOf, boolean[] free, Vec3[] endPoint,
+            int[] chainOf, double[] chainLength, Tolerances tol, boolean[] reported, long maxCandidates) {
+        EndSearchBudget budget = new EndSearchBudget(maxCandidates);
+        int searched = 0;
         List<Integer> ends = new ArrayList<>();
         for (int e = 0; e < free.length; e++) {
             if (free[e]) {
@@ -66,12 +79,13 @@ public final class GapCheck {
         double limit2 = tol.gapLimitM() * tol.gapLimitM();
         Set<Long> pairsReported = new HashSet<>();
         List<Finding> out = new ArrayList<>();
-        for (int k = 0; k < m; k++) {
+        for (int k = 0; k < m && !budget.exhausted(); k++, searched++) {
             final int kk = k;
             Vec3 p = endPoint[ends.get(k)];
             int[] best = {-1};
             double[] bestD2 = {Double.POSITIVE_INFINITY};
             grid.near(p.x(), p.y(), p.z(), group[k], j -> {
+                budget.spend();
                 if (j == kk) {
                     return;
                 }
@@ -111,6 +125,7 @@ public final class GapCheck {
                             + " but within the gap limit " + Findings.mm(tol.gapLimitM())
                             + "; they were probably meant to join."));
         }
+        out.addAll(budget.finding("gaps between wire ends", m - searched, m));
         return out;
     }
 }

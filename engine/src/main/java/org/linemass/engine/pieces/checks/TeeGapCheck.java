@@ -53,11 +53,28 @@ public final class TeeGapCheck {
      */
     public static List<Finding> check(List<Segment> segments, BoxIndex index, boolean[] free, Vec3[] endPoint,
             boolean[] reported, Tolerances tol) {
+        return check(segments, index, free, endPoint, reported, tol, EndSearchBudget.MAX_CANDIDATES);
+    }
+
+    /**
+     * As {@link #check(List, BoxIndex, boolean[], Vec3[], boolean[], Tolerances)}, stopping with a
+     * {@code limit_reached} warning once about {@code maxCandidates} candidate segments were looked at.
+     */
+    static List<Finding> check(List<Segment> segments, BoxIndex index, boolean[] free, Vec3[] endPoint,
+            boolean[] reported, Tolerances tol, long maxCandidates) {
         List<Finding> out = new ArrayList<>();
+        EndSearchBudget budget = new EndSearchBudget(maxCandidates);
+        long ends = 0;
+        long endsLeft = 0;
         double join = tol.joinM();
         double limit = tol.gapLimitM();
         for (int e = 0; e < free.length; e++) {
             if (!free[e] || reported[e]) {
+                continue;
+            }
+            ends++;
+            if (budget.exhausted()) {
+                endsLeft++;
                 continue;
             }
             int own = e >> 1;
@@ -68,6 +85,7 @@ public final class TeeGapCheck {
             int[] best = {-1};
             Contact[] bestContact = {null};
             index.query(new Box3(p, p).expandedBy(limit), k -> {
+                budget.spend();
                 if (k == own || touching[0]) {
                     return;
                 }
@@ -107,6 +125,7 @@ public final class TeeGapCheck {
                             + Findings.mm(join) + " but within the gap limit " + Findings.mm(limit)
                             + "; it was probably meant to meet it (a T-junction)."));
         }
+        out.addAll(budget.finding("gaps to the middle of a wire", endsLeft, ends));
         return out;
     }
 }
