@@ -13,7 +13,8 @@ import picocli.CommandLine.ParseResult;
 /**
  * Builds the picocli command tree for an {@link AppContext} and runs it. Usage errors, bad input
  * ({@link DxfInputException}, {@link AnalysisException}, {@link InputProblem}, I/O failures) give
- * one line on stderr and exit 2; anything else is a bug: one line asking for a report, exit 3.
+ * one line on stderr and exit 2, as does running out of heap or stack on a drawing too large for
+ * the JVM's limits; anything else is a bug: one line asking for a report, exit 3.
  * With {@code --debug} the stack trace follows the line.
  */
 public final class Cli {
@@ -29,7 +30,14 @@ public final class Cli {
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setParameterExceptionHandler(usage(ctx));
         cl.setExecutionExceptionHandler(failure(ctx));
-        int code = cl.execute(args);
+        int code;
+        try {
+            code = cl.execute(args);
+        } catch (OutOfMemoryError | StackOverflowError e) {
+            // a command that did not catch it itself (writing reports, say): still one line
+            ctx.err().println("linemass: " + OutOfResources.what(e));
+            code = ExitCodes.BAD_INPUT;
+        }
         ctx.out().flush();
         ctx.err().flush();
         return code;

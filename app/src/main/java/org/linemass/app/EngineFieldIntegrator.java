@@ -16,8 +16,13 @@ public final class EngineFieldIntegrator implements FieldIntegrator {
     @Override
     public Result integrate(Path file, ImportOptions importOptions, AnalysisSettings settings, String expression)
             throws DxfInputException, AnalysisException {
-        Drawing drawing = DxfImporter.read(file, importOptions);
-        FieldIntegralResult r = Analyzer.integrateField(drawing, settings, expression);
+        FieldIntegralResult r;
+        try {
+            Drawing drawing = DxfImporter.read(file, importOptions);
+            r = Analyzer.integrateField(drawing, settings, expression);
+        } catch (OutOfMemoryError | StackOverflowError e) {
+            throw OutOfResources.of(file, e);
+        }
         return new Result(expression,
                 r.pieces().stream().map(p -> new Row(p.pieceId(), p.layer(), p.lengthM(), p.value(), p.errorBound()))
                         .toList(),

@@ -27,13 +27,17 @@ public final class EnginePipeline implements DrawingPipeline {
     @Override
     public Report analyse(Path file, ImportOptions importOptions, AnalysisSettings settings)
             throws DxfInputException, AnalysisException {
-        Drawing drawing = DxfImporter.read(file, importOptions);
-        List<Piece> kept = new ArrayList<>();
-        DrawingResult result = Analyzer.analyze(drawing, settings, (world, tol, lookup, mirror) -> {
-            PieceAnalysis pa = PieceAnalyzer.analyze(world, tol, lookup, mirror);
-            kept.addAll(pa.pieces());
-            return pa;
-        });
-        return new Report(result, PieceShapes.of(result, kept));
+        try {
+            Drawing drawing = DxfImporter.read(file, importOptions);
+            List<Piece> kept = new ArrayList<>();
+            DrawingResult result = Analyzer.analyze(drawing, settings, (world, tol, lookup, mirror) -> {
+                PieceAnalysis pa = PieceAnalyzer.analyze(world, tol, lookup, mirror);
+                kept.addAll(pa.pieces());
+                return pa;
+            });
+            return new Report(result, PieceShapes.of(result, kept));
+        } catch (OutOfMemoryError | StackOverflowError e) {
+            throw OutOfResources.of(file, e);
+        }
     }
 }

@@ -56,7 +56,8 @@ final class AppFixtures {
 
     /**
      * A pipeline keyed on file names: "bad*" fails with an input error, "warn*" has a warning,
-     * "gap*" an error finding, anything else is clean. Records the settings it was given.
+     * "gap*" an error finding, "crash*" a bug, "huge*" and "deep*" run out of heap and stack,
+     * anything else is clean. Records the settings it was given.
      */
     static final class FakePipeline implements DrawingPipeline {
         final List<org.linemass.engine.AnalysisSettings> seen = new ArrayList<>();
@@ -73,6 +74,12 @@ final class AppFixtures {
             }
             if (n.startsWith("crash")) {
                 throw new IllegalStateException("bug");
+            }
+            if (n.startsWith("huge")) {
+                throw new OutOfMemoryError("Java heap space");
+            }
+            if (n.startsWith("deep")) {
+                throw new StackOverflowError();
             }
             Severity[] s = n.startsWith("warn") ? new Severity[] {Severity.WARNING}
                     : n.startsWith("gap") ? new Severity[] {Severity.ERROR} : new Severity[0];

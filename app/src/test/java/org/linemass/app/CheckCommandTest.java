@@ -117,6 +117,26 @@ class CheckCommandTest {
     }
 
     @Test
+    void check_outOfHeapOrStack_oneLineExit2() throws IOException {
+        for (String name : new String[] {"huge.dxf", "deep.dxf"}) {
+            Run r = check(file(name).toString());
+            assertEquals(2, r.code(), r.err());
+            assertEquals(1, r.err().strip().lines().count(), r.err());
+            assertTrue(r.err().startsWith("linemass: "), r.err());
+            assertTrue(r.err().contains("LINEMASS_JAVA_OPTS"), r.err());
+            assertFalse(r.err().contains("\tat "));
+        }
+    }
+
+    @Test
+    void outOfResources_namesTheFile() {
+        String heap = OutOfResources.of(Path.of("bay-7.dxf"), new OutOfMemoryError()).getMessage();
+        assertTrue(heap.startsWith("bay-7.dxf: out of memory (Java heap limit "), heap);
+        String stack = OutOfResources.of(Path.of("bay-7.dxf"), new StackOverflowError()).getMessage();
+        assertTrue(stack.startsWith("bay-7.dxf: the drawing is nested too deeply"), stack);
+    }
+
+    @Test
     void check_folder_findsDxfRecursivelyAnyCase_andCombines() throws IOException {
         file("set/a.dxf");
         file("set/deeper/B.DXF");
