@@ -38,6 +38,10 @@ public final class DrawingOptions {
     @Option(names = "--count-hidden-layers", description = "Also count layers that are switched off or frozen.")
     boolean hiddenLayers;
 
+    @Option(names = "--paper-space", description = "Also read entities drawn in paper space (the sheet layouts) "
+            + "into model space; by default only model space counts and paper-space entities are only counted.")
+    boolean paperSpace;
+
     @Option(names = "--section-table", paramLabel = "CSV",
             description = "Extra section rows (CSV); they replace built-in rows with the same id.")
     Path sectionTable;
@@ -85,7 +89,7 @@ public final class DrawingOptions {
     ImportOptions importOptions() throws InputProblem {
         try {
             return new ImportOptions(java.util.Optional.ofNullable(units), maxBlockDepth, maxLineBytes,
-                    maxControlPoints, maxVertices);
+                    maxControlPoints, maxVertices, paperSpace);
         } catch (IllegalArgumentException e) {
             throw new InputProblem(e.getMessage());
         }

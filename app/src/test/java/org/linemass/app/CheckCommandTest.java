@@ -257,7 +257,7 @@ class CheckCommandTest {
     void check_optionsReachTheSettings() throws IOException {
         Run r = check("--join", "0.02mm", "--gap-limit", "0.1in", "-a", "FR*=B8", "--assign", "A=B=C", "--only-layer",
                 "F*", "--skip-layer", "TEXT*", "--count-hidden-layers", "--mirror-alike", "--units", "in",
-                file("ok.dxf").toString());
+                "--paper-space", file("ok.dxf").toString());
         assertEquals(0, r.code(), r.err());
         AnalysisSettings s = pipeline.seen.get(0);
         assertEquals(2e-5, s.joinM().orElseThrow(), 2e-5 * REL);
@@ -271,6 +271,7 @@ class CheckCommandTest {
         assertTrue(s.includeHiddenLayers());
         assertTrue(s.mirrorGrouping());
         assertEquals(Optional.of(LengthUnit.INCH), pipeline.imports.get(0).unitOverride());
+        assertTrue(pipeline.imports.get(0).paperSpace());
     }
 
     @Test
@@ -281,6 +282,7 @@ class CheckCommandTest {
         assertTrue(s.gapLimitM().isEmpty());
         assertFalse(s.includeHiddenLayers());
         assertTrue(pipeline.imports.get(0).unitOverride().isEmpty());
+        assertFalse(pipeline.imports.get(0).paperSpace());
     }
 
     @Test

@@ -13,13 +13,21 @@ import org.linemass.drawing.LengthUnit;
  * @param maxLineBytes longest allowed text line in an ASCII file
  * @param maxControlPoints largest allowed control-point or knot count of one SPLINE
  * @param maxVertices largest allowed vertex count of one polyline
+ * @param paperSpace read paper-space entities as well, into model space (by default only model
+ *     space counts and paper-space entities are only counted)
  * @throws IllegalArgumentException when a limit is below its minimum (depth 0, the others 1)
  */
 public record ImportOptions(Optional<LengthUnit> unitOverride, int maxBlockDepth, int maxLineBytes,
-        int maxControlPoints, int maxVertices) {
+        int maxControlPoints, int maxVertices, boolean paperSpace) {
 
     public static final ImportOptions DEFAULTS =
             new ImportOptions(Optional.empty(), 64, 1 << 20, 1_000_000, 10_000_000);
+
+    /** Model space only, with the given unit override and limits. */
+    public ImportOptions(Optional<LengthUnit> unitOverride, int maxBlockDepth, int maxLineBytes, int maxControlPoints,
+            int maxVertices) {
+        this(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, false);
+    }
 
     public ImportOptions {
         Objects.requireNonNull(unitOverride, "unitOverride");
@@ -32,6 +40,11 @@ public record ImportOptions(Optional<LengthUnit> unitOverride, int maxBlockDepth
 
     public ImportOptions withUnit(LengthUnit unit) {
         return new ImportOptions(Optional.ofNullable(unit), maxBlockDepth, maxLineBytes, maxControlPoints,
-                maxVertices);
+                maxVertices, paperSpace);
+    }
+
+    /** These options, reading paper space as well ({@code true}) or model space only. */
+    public ImportOptions withPaperSpace(boolean read) {
+        return new ImportOptions(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, read);
     }
 }

@@ -4,10 +4,13 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import org.junit.jupiter.api.Test;
 import org.linemass.drawing.Drawing;
+import org.linemass.drawing.ImportNote;
 import org.linemass.drawing.Insert;
 import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.EllipticalArc;
@@ -307,20 +310,54 @@ class EntityGeometryTest {
 
     @Test
     void paperSpaceAndOtherEntities_areCountedNotUsed() throws Exception {
-        Drawing d = Dxf.create().add(0, "SECTION", 2, "BLOCKS", 0, "BLOCK", 2, "*Paper_Space", 10, 0, 20, 0, 30, 0,
+        Drawing d = paperSpaceDrawing().read();
+        assertEquals(1, d.modelSpace().segments().size());
+        assertEquals(2, d.paperSpaceEntities());
+        Map<String, Integer> other = d.modelSpace().otherEntityCounts();
+        assertEquals(Map.of("TEXT", 2, "MTEXT", 1, "HATCH", 1, "DIMENSION", 1, "VIEWPORT", 1, "3DFACE", 1,
+                "SOLID", 1, "POINT", 1, "ATTRIB", 2), other);
+        assertTrue(d.notes().stream().anyMatch(n -> n.message().equals("block 'TAG' is not defined")), d.notes()
+                .toString());
+        ImportNote left = d.notes().stream().filter(n -> n.message().contains("paper space")).findFirst().orElseThrow();
+        assertEquals("info", left.severity());
+        assertEquals("2 entities in paper space were not read (only model space counts; --paper-space reads them "
+                + "too)", left.message());
+    }
+
+    @Test
+    void paperSpaceOption_readsLayoutEntitiesIntoModelSpace() throws Exception {
+        Dxf dxf = paperSpaceDrawing();
+        Drawing d = DxfImporter.read(Dxf.NAME, dxf.ascii(), ImportOptions.DEFAULTS.withPaperSpace(true));
+        assertEquals(0, d.paperSpaceEntities());
+        List<Segment> model = d.modelSpace().segments();
+        assertEquals(3, model.size());
+        // closed form: straights from the origin to (5,0,0) (block *Paper_Space) and (9,0,0) (67 = 1)
+        Set<Double> ends = new HashSet<>();
+        for (Segment s : model) {
+            if (s.source().blockPath().equals(List.of("*Paper_Space"))) {
+                ends.add(((Straight) s).b().x());
+            } else {
+                assertEquals(List.of(), s.source().blockPath());
+                assertEquals(1.0, ((Straight) s).b().x());
+            }
+        }
+        assertEquals(Set.of(5.0, 9.0), ends);
+        ImportNote read = d.notes().stream().filter(n -> n.kind().equals("paper_space_read")).findFirst()
+                .orElseThrow();
+        assertEquals("warning", read.severity());
+        assertTrue(read.message().startsWith("2 paper-space entities were read into model space"), read.message());
+    }
+
+    /** One LINE in the *Paper_Space block, one with 67 = 1 in ENTITIES, one in model space, and others. */
+    private static Dxf paperSpaceDrawing() {
+        return Dxf.create().add(0, "SECTION", 2, "BLOCKS", 0, "BLOCK", 2, "*Paper_Space", 10, 0, 20, 0, 30, 0,
                 0, "LINE", 11, 5, 0, "ENDBLK", 0, "BLOCK", 2, "*Model_Space", 0, "ENDBLK", 0, "ENDSEC").entities()
                 .add(0, "LINE", 67, 1, 11, 9)
                 .add(0, "INSERT", 66, 1, 2, "TAG", 0, "ATTRIB", 1, "A", 0, "ATTRIB", 1, "B", 0, "SEQEND")
                 .add(0, "LINE", 11, 1)
                 .add(0, "TEXT", 1, "shelf", 0, "MTEXT", 1, "x", 0, "HATCH", 0, "DIMENSION", 0, "TEXT", 1, "y",
                         0, "VIEWPORT", 0, "3DFACE", 0, "SOLID", 0, "POINT")
-                .end().read();
-        assertEquals(1, d.modelSpace().segments().size());
-        assertEquals(2, d.paperSpaceEntities());
-        Map<String, Integer> other = d.modelSpace().otherEntityCounts();
-        assertEquals(Map.of("TEXT", 2, "MTEXT", 1, "HATCH", 1, "DIMENSION", 1, "VIEWPORT", 1, "3DFACE", 1,
-                "SOLID", 1, "POINT", 1, "ATTRIB", 2), other);
-        assertEquals("block 'TAG' is not defined", d.notes().get(d.notes().size() - 1).message());
+                .end();
     }
 
     @Test

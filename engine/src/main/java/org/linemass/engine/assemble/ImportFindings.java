@@ -15,7 +15,7 @@ import org.linemass.engine.result.SourceRef;
 
 /**
  * Findings from the import: each {@link ImportNote} becomes a finding (its kind kept when it is
- * {@code skipped_entity}, {@code units_assumed}, {@code ignored_entity} or {@code knots_assumed}; otherwise
+ * {@code skipped_entity}, {@code units_assumed}, {@code ignored_entity}, {@code knots_assumed} or {@code paper_space_read}; otherwise
  * {@code skipped_entity} for notes that dropped geometry and {@code ignored_entity} for the rest),
  * plus one {@code units_assumed} warning when the units were guessed or are missing and no note said
  * so already. Stateless.
@@ -23,7 +23,7 @@ import org.linemass.engine.result.SourceRef;
 public final class ImportFindings {
 
     private static final Set<String> KEPT = Set.of(FindingKind.SKIPPED_ENTITY, FindingKind.UNITS_ASSUMED,
-            FindingKind.IGNORED_ENTITY, FindingKind.KNOTS_ASSUMED);
+            FindingKind.IGNORED_ENTITY, FindingKind.KNOTS_ASSUMED, FindingKind.PAPER_SPACE_READ);
 
     private ImportFindings() {
     }

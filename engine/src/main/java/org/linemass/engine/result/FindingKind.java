@@ -21,6 +21,8 @@ public final class FindingKind {
     public static final String IGNORED_ENTITY = "ignored_entity";
     /** A spline without knots read with the clamped uniform knot vector (a warning; the curve is used). */
     public static final String KNOTS_ASSUMED = "knots_assumed";
+    /** Paper-space entities read into model space on request (a warning: sheet scale may differ). */
+    public static final String PAPER_SPACE_READ = "paper_space_read";
     public static final String LIMIT_REACHED = "limit_reached";
 
     private FindingKind() {

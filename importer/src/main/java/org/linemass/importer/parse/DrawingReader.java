@@ -54,6 +54,9 @@ public final class DrawingReader {
                 (long) options.maxVertices() * GROUPS_PER_VERTEX + RECORD_GROUP_ALLOWANCE);
         this.in = new RecordStream(new RecordReader(src, (int) maxGroups));
         blocks.put(Drawing.MODEL_SPACE, new BlockBuilder(Drawing.MODEL_SPACE, Vec3.ZERO));
+        if (options.paperSpace()) {
+            handler.paperTarget = blocks.get(Drawing.MODEL_SPACE);
+        }
     }
 
     /** Reads the whole drawing from {@code src}. */
@@ -291,8 +294,24 @@ public final class DrawingReader {
         }
         UnitChoice u = UnitChoice.of(header, options, file);
         u.note().ifPresent(n -> notes.add(0, n));
+        paperSpaceNote().ifPresent(notes::add);
         return new Drawing(file, header.acadVer(), src.binary(), u.unit(), u.source(), allLayers, built,
                 handler.paperSpaceEntities, notes);
+    }
+
+    /** What happened to paper space: left out (with the option that reads it) or read into model space. */
+    private java.util.Optional<ImportNote> paperSpaceNote() {
+        if (handler.paperSpaceRead > 0) {
+            return java.util.Optional.of(Notes.of("warning", "paper_space_read", file, 0, "", "", "",
+                    handler.paperSpaceRead + " paper-space entities were read into model space as asked; paper space "
+                            + "is drawn at the sheet's scale, so check that their units match the model's"));
+        }
+        if (handler.paperSpaceEntities > 0) {
+            return java.util.Optional.of(Notes.of("info", "ignored_entity", file, 0, "", "", "",
+                    handler.paperSpaceEntities + " entities in paper space were not read (only model space counts; "
+                            + "--paper-space reads them too)"));
+        }
+        return java.util.Optional.empty();
     }
 
     /** The unit, where it came from, and the note that says it was guessed. */

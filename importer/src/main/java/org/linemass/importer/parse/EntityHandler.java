@@ -16,7 +16,9 @@ import org.linemass.importer.read.Record;
  * Handles one entity record of an ENTITIES or BLOCKS section, including the records that belong
  * to it (VERTEX...SEQEND after POLYLINE, ATTRIB...SEQEND after an INSERT with 66 = 1). Curve
  * entities become segments of the target block; an entity that cannot be used is skipped with an
- * error note; every other type is counted. Paper-space entities are only counted.
+ * error note; every other type is counted. Paper-space entities are only counted, unless the
+ * options ask for paper space: then they go to model space, marked as coming through
+ * {@link #PAPER_SPACE} in their provenance.
  */
 final class EntityHandler {
 
@@ -27,7 +29,15 @@ final class EntityHandler {
     private final ImportOptions options;
     private final List<ImportNote> notes;
     private final boolean binary;
+    /** Block name put in the provenance of paper-space entities read into model space. */
+    static final String PAPER_SPACE = "*Paper_Space";
+
+    /** Paper-space entities left out. */
     long paperSpaceEntities;
+    /** Paper-space entities read into model space (when the options ask for it). */
+    long paperSpaceRead;
+    /** Where paper-space entities go when the options ask for them; null otherwise. */
+    BlockBuilder paperTarget;
     /** Warnings of one curve conversion; reused (cleared before each entity). */
     private final List<String> converterWarnings = new java.util.ArrayList<>();
     /** Layer names used by entities read into blocks (pooled strings, so lookups are cheap). */
@@ -42,16 +52,21 @@ final class EntityHandler {
 
     /** Handles {@code r}; reads its follower records from {@code in}. Null target = paper space. */
     void handle(Record r, RecordStream in, BlockBuilder target) throws DxfInputException, IOException {
+        boolean fromPaper = target == null && paperTarget != null;
+        if (fromPaper) {
+            target = paperTarget;
+            paperSpaceRead++;
+        }
         String type = r.type();
         boolean paper = target == null;
         int line = lineOf(r.position());
         String layer = r.layer();
         if (type.equals("POLYLINE")) {
-            handlePolyline(r, in, paper ? null : target, provenance(r, layer, line, type));
+            handlePolyline(r, in, paper ? null : target, provenance(r, layer, line, type, fromPaper));
             return;
         }
         if (type.equals("INSERT")) {
-            Provenance p = provenance(r, layer, line, type);
+            Provenance p = provenance(r, layer, line, type, fromPaper);
             boolean attribs = r.num(66, 0) == 1;
             if (paper) {
                 paperSpaceEntities++;
@@ -79,7 +94,7 @@ final class EntityHandler {
             target.countOther(type.isEmpty() ? "(unnamed)" : type);
             return;
         }
-        Provenance p = provenance(r, layer, line, type);
+        Provenance p = provenance(r, layer, line, type, fromPaper);
         if (r.hasBadValue()) {
             skip(p, badValue(r));
             return;
@@ -97,10 +112,14 @@ final class EntityHandler {
         }
     }
 
-    /** The provenance of record {@code r}, without a handle string when the handle is a number. */
-    private Provenance provenance(Record r, String layer, int line, String type) {
-        return r.numericHandle() ? Provenance.ofHandleValue(file, layer, line, r.handleValue(), type)
+    /**
+     * The provenance of record {@code r}, without a handle string when the handle is a number;
+     * through {@link #PAPER_SPACE} when a paper-space entity is read into model space.
+     */
+    private Provenance provenance(Record r, String layer, int line, String type, boolean fromPaper) {
+        Provenance p = r.numericHandle() ? Provenance.ofHandleValue(file, layer, line, r.handleValue(), type)
                 : Provenance.of(file, layer, line, r.handle(), type);
+        return fromPaper ? p.throughBlock(PAPER_SPACE) : p;
     }
 
     private void handlePolyline(Record r, RecordStream in, BlockBuilder target, Provenance p)
