@@ -4,7 +4,7 @@ import java.util.Arrays;
 
 /**
  * The value column of {@link SegmentColumns}: doubles in chunks of 65,536, written as records that
- * never straddle two chunks, addressed by a 28-bit offset (chunk number and position). Growing it
+ * never straddle two chunks, addressed by a 27-bit offset (chunk number and position). Growing it
  * never copies what it holds; the first chunk starts small so small blocks stay small. Not
  * thread-safe while growing; a {@link #trimmed()} copy is never changed again.
  */
@@ -14,8 +14,10 @@ final class DoubleChunks {
     private static final int CHUNK = 1 << SHIFT;
     private static final int MASK = CHUNK - 1;
     private static final int FIRST = 32;
-    /** Offsets must fit in 28 bits: at most this many chunks. */
-    private static final int MAX_CHUNKS = 1 << (28 - SHIFT);
+    /** Bits of an offset (a descriptor keeps the other bits for the record kind). */
+    static final int OFFSET_BITS = 27;
+    /** Offsets must fit in {@link #OFFSET_BITS} bits: at most this many chunks. */
+    private static final int MAX_CHUNKS = 1 << (OFFSET_BITS - SHIFT);
 
     private double[][] chunks;
     /** Offset of the next record. */

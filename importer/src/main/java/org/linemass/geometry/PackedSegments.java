@@ -81,6 +81,20 @@ public final class PackedSegments extends AbstractList<Segment> implements Rando
             modCount++;
         }
 
+        /**
+         * Adds the arc {@link BulgeArc#of} gives for these arguments, the same as adding that arc;
+         * a plan polyline's arcs are then kept as their bulge and end vertex only.
+         *
+         * @throws IllegalArgumentException as {@link BulgeArc#of}, with nothing added
+         */
+        public void addBulgeArc(double x1, double y1, double x2, double y2, double z, double b, Affine map, Vec3 x,
+                Vec3 y, Vec3 minusY, Provenance p) {
+            Objects.requireNonNull(p, "provenance");
+            requireOpen();
+            columns.addBulgeArc(x1, y1, x2, y2, z, b, map, x, y, minusY, p);
+            modCount++;
+        }
+
         @Override
         public Segment get(int index) {
             return columns.segment(index);

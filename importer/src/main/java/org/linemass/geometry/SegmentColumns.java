@@ -20,6 +20,9 @@ import java.util.Map;
  *       in z = +0.0);</li>
  *   <li>circular arc: centre, radius, t0, t1 and the index of its (u, v) pair in a table of the
  *       distinct pairs, seven values (six when the centre's z is +0.0);</li>
+ *   <li>arc of a plan polyline piece (world frame, elevation +0.0): its vertices and bulge, five
+ *       values, or three (bulge and end vertex) when it starts where the previous record ended;
+ *       rebuilt with {@link BulgeArc}, which is deterministic;</li>
  *   <li>any other segment (elliptical arc, spline) is kept as the object itself.</li>
  * </ul>
  * Every value is stored as given and every segment is rebuilt from exactly those values, so
@@ -39,13 +42,19 @@ final class SegmentColumns {
     private static final int ARC = 4;
     private static final int ARC_Z0 = 5;
     private static final int OBJECT = 6;
-    private static final int KIND_BITS = 3;
+    private static final int BULGE_Z0 = 7;
+    private static final int BULGE_FOLLOW_Z0 = 8;
+    /** Kind bits of a descriptor; with {@link DoubleChunks#OFFSET_BITS} they fill 31 bits. */
+    private static final int KIND_BITS = 4;
     private static final int KIND_MASK = (1 << KIND_BITS) - 1;
+
     /** Largest object index a descriptor holds (value offsets are limited by {@link DoubleChunks}). */
     private static final int MAX_PAYLOAD = Integer.MAX_VALUE >>> KIND_BITS;
     /** At most this many distinct (u, v) pairs are tabled; arcs in further planes are kept as objects. */
     private static final int MAX_AXES = 1 << 16;
     private static final long POSITIVE_ZERO = 0L;
+    /** The axes of the world XY frame that plan polylines' arcs use (see {@link BulgeArc}). */
+    private static final Vec3 MINUS_Y = new Vec3(0, -1, 0);
     private static final int RECENT = 4;
 
     private record Axes(Vec3 u, Vec3 v) {
@@ -117,6 +126,38 @@ final class SegmentColumns {
         descriptors.add(d >= 0 ? d : object(new Straight(ax, ay, az, bx, by, bz, p)));
     }
 
+    /** Adds the arc {@link BulgeArc#of} gives, as {@link #add} would add it. */
+    void addBulgeArc(double x1, double y1, double x2, double y2, double z, double b, Affine map, Vec3 x, Vec3 y,
+            Vec3 minusY, Provenance p) {
+        CircularArc arc = BulgeArc.of(x1, y1, x2, y2, z, b, map, x, y, minusY, p);
+        source(p);
+        int d = -1;
+        if (map == Affine.IDENTITY && bits(z) == POSITIVE_ZERO && x.equals(Vec3.X) && y.equals(Vec3.Y)
+                && minusY.equals(MINUS_Y)) {
+            d = bulge(x1, y1, b, x2, y2);
+        }
+        if (d < 0) {
+            d = arc(arc);
+        }
+        descriptors.add(d >= 0 ? d : object(arc));
+    }
+
+    /** The descriptor of a plan bulge arc's record, or -1 when no more values can be addressed. */
+    private int bulge(double x1, double y1, double b, double x2, double y2) {
+        DoubleChunks v = values;
+        int n = v.end();
+        if (endsFlat(lastValueKind) && v.fitsHere(3) && bits(v.get(n - 2)) == bits(x1)
+                && bits(v.get(n - 1)) == bits(y1)) {
+            return write(BULGE_FOLLOW_Z0, b, x2, y2, 0, 0, 0, 3);
+        }
+        return write(BULGE_Z0, x1, y1, b, x2, y2, 0, 5);
+    }
+
+    /** True for records that end with a plan point (x, y) at z = +0.0 as their last two values. */
+    private static boolean endsFlat(int kind) {
+        return kind == STRAIGHT_Z0 || kind == FOLLOW_Z0 || kind == BULGE_Z0 || kind == BULGE_FOLLOW_Z0;
+    }
+
     /** Records the provenance of the segment about to be added: a new row unless it equals the last. */
     private void source(Provenance p) {
         int size = size();
@@ -141,7 +182,7 @@ final class SegmentColumns {
         boolean flat = bits(az) == POSITIVE_ZERO && bits(bz) == POSITIVE_ZERO;
         DoubleChunks v = values;
         int n = v.end();
-        if (flat && (lastValueKind == STRAIGHT_Z0 || lastValueKind == FOLLOW_Z0) && v.fitsHere(2)
+        if (flat && endsFlat(lastValueKind) && v.fitsHere(2)
                 && bits(v.get(n - 2)) == bits(ax) && bits(v.get(n - 1)) == bits(ay)) {
             return write(FOLLOW_Z0, bx, by, 0, 0, 0, 0, 2);
         }
@@ -173,6 +214,8 @@ final class SegmentColumns {
         }
         if (n > 4) {
             c[k + 4] = v4;
+        }
+        if (n > 5) {
             c[k + 5] = v5;
         }
         lastValueKind = kind;
@@ -255,7 +298,12 @@ final class SegmentColumns {
             case FOLLOW_Z0 -> new Straight(v.get(at - 2), v.get(at - 1), 0.0, v.get(at), v.get(at + 1), 0.0, p);
             case ARC -> arc(new Vec3(v.get(at), v.get(at + 1), v.get(at + 2)), at + 3, p);
             case ARC_Z0 -> arc(new Vec3(v.get(at), v.get(at + 1), 0.0), at + 2, p);
-            default -> objects.get(at);
+            case BULGE_Z0 -> BulgeArc.of(v.get(at), v.get(at + 1), v.get(at + 3), v.get(at + 4), 0.0, v.get(at + 2),
+                    Affine.IDENTITY, Vec3.X, Vec3.Y, MINUS_Y, p);
+            case BULGE_FOLLOW_Z0 -> BulgeArc.of(v.get(at - 2), v.get(at - 1), v.get(at + 1), v.get(at + 2), 0.0,
+                    v.get(at), Affine.IDENTITY, Vec3.X, Vec3.Y, MINUS_Y, p);
+            case OBJECT -> objects.get(at);
+            default -> throw new IllegalStateException("unknown record kind " + (d & KIND_MASK) + " of segment " + i);
         };
     }
 

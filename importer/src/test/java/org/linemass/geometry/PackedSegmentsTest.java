@@ -111,6 +111,53 @@ class PackedSegmentsTest {
     }
 
     @Test
+    void addBulgeArc_equalsAddingTheArc() {
+        // plan polylines with bulged pieces in the world frame (kept as vertices and bulge), and the
+        // same in a tilted frame and at an elevation (kept as arcs); -0.0 and tiny bulges included
+        Vec3 tiltX = new Vec3(0.6, 0.8, 0);
+        Vec3 tiltY = new Vec3(0, 0, 1);
+        Affine tilt = Affine.ofColumns(tiltX, tiltY, tiltX.cross(tiltY), Vec3.ZERO);
+        Random rnd = new Random(23);
+        for (int round = 0; round < 100; round++) {
+            List<Segment> expected = new ArrayList<>();
+            PackedSegments.Builder b = new PackedSegments.Builder();
+            Provenance p = Provenance.of("stirrups.dxf", "B12", 30 + round, "7" + round, "LWPOLYLINE");
+            boolean world = round % 3 != 0;
+            double z = round % 5 == 0 ? 150 : 0.0;
+            double x = rnd.nextDouble() * 100;
+            double y = round % 7 == 0 ? -0.0 : rnd.nextDouble() * 100;
+            for (int k = 0; k < 30; k++) {
+                double nx = x + 1 + rnd.nextDouble() * 50;
+                double ny = rnd.nextInt(9) == 0 ? -0.0 : y + rnd.nextDouble() * 50 - 25;
+                if (rnd.nextBoolean()) {
+                    double bulge = rnd.nextInt(8) == 0 ? 1e-9 : rnd.nextDouble() * 2 - 1;
+                    Affine map = world ? Affine.IDENTITY : tilt;
+                    Vec3 u = world ? Vec3.X : tiltX;
+                    Vec3 v = world ? Vec3.Y : tiltY;
+                    Vec3 minusV = world ? new Vec3(0, -1, 0) : tiltY.negate();
+                    expected.add(BulgeArc.of(x, y, nx, ny, z, bulge, map, u, v, minusV, p));
+                    b.addBulgeArc(x, y, nx, ny, z, bulge, map, u, v, minusV, p);
+                } else {
+                    expected.add(new Straight(x, y, z, nx, ny, z, p));
+                    b.addStraight(x, y, z, nx, ny, z, p);
+                }
+                x = nx;
+                y = ny;
+            }
+            assertEqualLists(expected, b.build());
+        }
+    }
+
+    @Test
+    void addBulgeArc_refusesCoincidentVertices_andAddsNothing() {
+        PackedSegments.Builder b = new PackedSegments.Builder();
+        Provenance p = Provenance.of("stirrups.dxf", "B12", 3, "A", "LWPOLYLINE");
+        assertThrows(IllegalArgumentException.class, () -> b.addBulgeArc(1, 1, 1, 1, 0.0, 0.5, Affine.IDENTITY,
+                Vec3.X, Vec3.Y, new Vec3(0, -1, 0), p));
+        assertEquals(0, b.size());
+    }
+
+    @Test
     void longPlanPolyline_crossesValueChunks() {
         // more than one 65,536-value chunk of chained plan straights, with a 3D straight and an arc
         // now and then so records of every size meet the chunk ends

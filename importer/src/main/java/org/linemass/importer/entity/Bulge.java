@@ -2,18 +2,17 @@ package org.linemass.importer.entity;
 
 import java.util.List;
 import org.linemass.geometry.Affine;
-import org.linemass.geometry.CircularArc;
+import org.linemass.geometry.BulgeArc;
+import org.linemass.geometry.PackedSegments;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Vec3;
 
 /**
  * One polyline piece from OCS vertex (x1, y1) to (x2, y2) at elevation z with bulge b =
- * tan(theta / 4) (FACTS.md §7.5): b = 0 is straight, b > 0 an arc counter-clockwise about the
- * OCS z axis, b < 0 clockwise. Chord c, radius r = c (1 + b^2) / (4 |b|), centre on the left
- * normal at signed distance c (1 - b^2) / (4 b) from the chord midpoint. The piece is mapped to
- * the world by {@code ocs}; an arc's u and v are the frame's x axis and (b > 0) y axis or (b < 0)
- * negated y axis, so all arcs of one frame share them, and t0 is the start vertex's angle.
+ * tan(theta / 4) (FACTS.md §7.5): b = 0 (or below {@link #STRAIGHT_BULGE}) is straight, otherwise
+ * the arc {@link BulgeArc} defines, in the frame {@code ocs}, whose axis objects all arcs of the
+ * frame share. The packing builder gets the vertices and bulge rather than the arc.
  */
 final class Bulge {
 
@@ -35,22 +34,16 @@ final class Bulge {
         }
         double dx = x2 - x1;
         double dy = y2 - y1;
-        double c = Math.hypot(dx, dy);
+        double c = StrictMath.hypot(dx, dy);
         if (!(c > 0)) {
             straight(x1, y1, x2, y2, z, ocs, p, out);
             return;
         }
-        double ux = dx / c;
-        double uy = dy / c;
-        double h = c * (1 - b * b) / (4 * b);
-        double cx = 0.5 * (x1 + x2) - h * uy;
-        double cy = 0.5 * (y1 + y2) + h * ux;
-        double r = c * (1 + b * b) / (4 * Math.abs(b));
-        double sweep = 4 * Math.atan(Math.abs(b));
-        // u = OCS x and v = +-OCS y (shared axis objects); t0 is the start vertex's angle in that frame
-        double t0 = b > 0 ? Math.atan2(y1 - cy, x1 - cx) : Math.atan2(cy - y1, x1 - cx);
-        out.add(CircularArc.of(ocs.map().apply(new Vec3(cx, cy, z)), r, ocs.x(), b > 0 ? ocs.y() : ocs.minusY(), t0,
-                t0 + sweep, p));
+        if (out instanceof PackedSegments.Builder packed) {
+            packed.addBulgeArc(x1, y1, x2, y2, z, b, ocs.map(), ocs.x(), ocs.y(), ocs.minusY(), p);
+        } else {
+            out.add(BulgeArc.of(x1, y1, x2, y2, z, b, ocs.map(), ocs.x(), ocs.y(), ocs.minusY(), p));
+        }
     }
 
     /**
