@@ -28,8 +28,16 @@ final class BlockBuilder {
         this.basePoint = basePoint;
     }
 
+    /** The counter of the last type counted: most files repeat a few types, so this skips the map. */
+    private String lastCurveType;
+    private int[] lastCurveCount;
+
     void countCurve(String type) {
-        curveCounts.computeIfAbsent(type, k -> new int[1])[0]++;
+        if (type != lastCurveType) {
+            lastCurveCount = curveCounts.computeIfAbsent(type, k -> new int[1]);
+            lastCurveType = type;
+        }
+        lastCurveCount[0]++;
     }
 
     void countOther(String type) {

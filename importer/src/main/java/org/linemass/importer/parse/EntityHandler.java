@@ -42,6 +42,8 @@ final class EntityHandler {
     private final List<String> converterWarnings = new java.util.ArrayList<>();
     /** Layer names used by entities read into blocks (pooled strings, so lookups are cheap). */
     final java.util.Set<String> usedLayers = new java.util.HashSet<>();
+    /** The layer name last added to {@link #usedLayers}. */
+    private String lastLayer;
 
     EntityHandler(String file, boolean binary, ImportOptions options, List<ImportNote> notes) {
         this.file = file;
@@ -89,7 +91,7 @@ final class EntityHandler {
             paperSpaceEntities++;
             return;
         }
-        usedLayers.add(layer);
+        useLayer(layer);
         if (!Converters.isCurveType(type)) {
             target.countOther(type.isEmpty() ? "(unnamed)" : type);
             return;
@@ -109,6 +111,14 @@ final class EntityHandler {
             }
         } catch (EntitySkip e) {
             notes.add(Notes.of("error", "skipped_entity", file, line, type, r.handle(), layer, e.getMessage()));
+        }
+    }
+
+    /** Notes {@code layer} as used; the same (pooled) name as last time needs no set lookup. */
+    private void useLayer(String layer) {
+        if (layer != lastLayer) {
+            usedLayers.add(layer);
+            lastLayer = layer;
         }
     }
 
