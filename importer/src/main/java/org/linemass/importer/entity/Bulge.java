@@ -32,10 +32,8 @@ final class Bulge {
             straight(x1, y1, x2, y2, z, ocs, p, out);
             return;
         }
-        double dx = x2 - x1;
-        double dy = y2 - y1;
-        double c = StrictMath.hypot(dx, dy);
-        if (!(c > 0)) {
+        if (x1 == x2 && y1 == y2) {
+            // no chord, no arc (for finite values the same test as a zero chord length)
             straight(x1, y1, x2, y2, z, ocs, p, out);
             return;
         }
