@@ -32,20 +32,7 @@ final class IntChunks {
     }
 
     void add(int value) {
-        int c = size >>> SHIFT;
-        int k = size & MASK;
-        if (c == chunks.length) {
-            chunks = Arrays.copyOf(chunks, 2 * c);
-        }
-        int[] chunk = chunks[c];
-        if (chunk == null) {
-            chunk = new int[CHUNK];
-            chunks[c] = chunk;
-        } else if (k == chunk.length) {
-            chunk = Arrays.copyOf(chunk, Math.min(CHUNK, 2 * k));
-            chunks[c] = chunk;
-        }
-        chunk[k] = value;
+        chunkWithRoom(1)[size & MASK] = value;
         size++;
     }
 
@@ -53,7 +40,18 @@ final class IntChunks {
      * Adds four values that stay in one chunk (a row of a four-column table): the caller only ever
      * adds rows of four, so a row never straddles two chunks.
      */
-    void addRow(int a, int b, int c2, int d) {
+    void addRow(int a, int b, int c, int d) {
+        int[] chunk = chunkWithRoom(4);
+        int k = size & MASK;
+        chunk[k] = a;
+        chunk[k + 1] = b;
+        chunk[k + 2] = c;
+        chunk[k + 3] = d;
+        size += 4;
+    }
+
+    /** The chunk the next {@code n} values go to, grown or allocated so they fit. */
+    private int[] chunkWithRoom(int n) {
         int c = size >>> SHIFT;
         int k = size & MASK;
         if (c == chunks.length) {
@@ -63,15 +61,11 @@ final class IntChunks {
         if (chunk == null) {
             chunk = new int[CHUNK];
             chunks[c] = chunk;
-        } else if (k + 4 > chunk.length) {
+        } else if (k + n > chunk.length) {
             chunk = Arrays.copyOf(chunk, Math.min(CHUNK, 2 * chunk.length));
             chunks[c] = chunk;
         }
-        chunk[k] = a;
-        chunk[k + 1] = b;
-        chunk[k + 2] = c2;
-        chunk[k + 3] = d;
-        size += 4;
+        return chunk;
     }
 
     /** The value at {@code i}; the caller checks {@code 0 <= i < size()}. */
