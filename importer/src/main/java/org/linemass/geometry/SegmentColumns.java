@@ -129,6 +129,7 @@ final class SegmentColumns {
     /** Adds the arc {@link BulgeArc#of} gives, as {@link #add} would add it. */
     void addBulgeArc(double x1, double y1, double x2, double y2, double z, double b, Affine map, Vec3 x, Vec3 y,
             Vec3 minusY, Provenance p) {
+        // built once here so a bad arc fails now, in the converter that can skip its entity
         CircularArc arc = BulgeArc.of(x1, y1, x2, y2, z, b, map, x, y, minusY, p);
         source(p);
         int d = -1;
