@@ -50,6 +50,11 @@ final class CheckRun {
         if (OutputOptions.STDOUT.equals(outputs.markupDxf)) {
             throw new InputProblem("--markup-dxf needs a file name, not '-'");
         }
+        if (outputs.markupDxf != null && files.size() > 1 && !Files.isDirectory(Path.of(outputs.markupDxf))
+                && outputs.markupDxf.toLowerCase(Locale.ROOT).endsWith(".dxf")) {
+            throw new InputProblem("--markup-dxf " + outputs.markupDxf + " names one file, but " + files.size()
+                    + " drawings are checked: give a folder for their marked-up copies");
+        }
         ReportFiles sink = new ReportFiles(ctx.out(), files);
         java.util.Set<Path> seen = new java.util.HashSet<>();
         for (String t : outputs.targets()) {

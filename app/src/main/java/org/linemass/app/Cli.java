@@ -2,6 +2,7 @@ package org.linemass.app;
 
 import java.io.IOException;
 import java.lang.reflect.Constructor;
+import java.util.List;
 import org.linemass.engine.AnalysisException;
 import org.linemass.importer.DxfInputException;
 import picocli.CommandLine;
@@ -46,7 +47,7 @@ public final class Cli {
     private static IParameterExceptionHandler usage(AppContext ctx) {
         return (ParameterException e, String[] args) -> {
             String name = e.getCommandLine().getCommandName();
-            ctx.err().println("linemass: " + oneLine(e.getMessage()) + " (see 'linemass "
+            ctx.err().println("linemass: " + oneLine(e.getMessage()) + suggestion(e) + " (see 'linemass "
                     + ("linemass".equals(name) ? "" : name + " ") + "--help')");
             if (debug(args)) {
                 e.printStackTrace(ctx.err());
@@ -54,6 +55,17 @@ public final class Cli {
             ctx.err().flush();
             return ExitCodes.BAD_INPUT;
         };
+    }
+
+    /** "; did you mean --json?" for a mistyped option or command, from picocli's own near-miss search. */
+    static String suggestion(ParameterException e) {
+        if (e instanceof CommandLine.UnmatchedArgumentException u) {
+            List<String> near = u.getSuggestions();
+            if (!near.isEmpty()) {
+                return "; did you mean " + String.join(" or ", near.subList(0, Math.min(3, near.size()))) + "?";
+            }
+        }
+        return "";
     }
 
     private static IExecutionExceptionHandler failure(AppContext ctx) {

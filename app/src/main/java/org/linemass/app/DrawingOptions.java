@@ -53,6 +53,12 @@ public final class DrawingOptions {
             description = "Layers matching LAYER (a glob) are made of SECTION; repeatable, later rules win.")
     List<String> assign = new ArrayList<>();
 
+    @Option(names = "--density", paramLabel = "LAYER=EXPR",
+            description = "Layers matching LAYER (a glob) have the linear density EXPR in kg/m instead of their "
+                    + "section's constant one: a formula in x, y, z (world position, m) and s (m along the piece from "
+                    + "its start), e.g. 'TAPER*=0.888*(1-0.25*s)'; repeatable, the most specific glob wins.")
+    List<String> density = new ArrayList<>();
+
     @Option(names = "--join", paramLabel = "LENGTH", converter = Converters.Length.class,
             description = "Ends closer than this are joined, e.g. 0.01mm (default 0.01 mm).")
     Double joinM;
@@ -117,7 +123,20 @@ public final class DrawingOptions {
         }
         return new AnalysisSettings(Optional.ofNullable(joinM), Optional.ofNullable(gapLimitM), Optional.empty(),
                 AnalysisSettings.defaults(table).integrationRelative(), mirrorAlike, onlyLayers, skipped(),
-                hiddenLayers, table, rules, java.util.Map.of(), checkedExpansionLimit());
+                hiddenLayers, table, rules, densities(), checkedExpansionLimit());
+    }
+
+    /** {@code --density LAYER=EXPR} rules by glob; the first '=' splits, since exp4j formulas have none. */
+    java.util.Map<String, String> densities() throws InputProblem {
+        java.util.Map<String, String> m = new java.util.LinkedHashMap<>();
+        for (String d : density) {
+            int eq = d.indexOf('=');
+            if (eq <= 0 || eq == d.length() - 1) {
+                throw new InputProblem("--density '" + d + "': expected LAYER=EXPR, e.g. 'RAIL*=0.888*(1+0.1*z)'");
+            }
+            m.put(d.substring(0, eq).trim(), d.substring(eq + 1).trim());
+        }
+        return m;
     }
 
     private long checkedExpansionLimit() throws InputProblem {
@@ -145,7 +164,7 @@ public final class DrawingOptions {
     static LayerAssignment parseAssignment(String text) throws InputProblem {
         int eq = text.lastIndexOf('=');
         if (eq <= 0 || eq == text.length() - 1) {
-            throw new InputProblem("--assign '" + text + "': expected LAYER=SECTION, e.g. FRAME*=B8");
+            throw new InputProblem("--assign '" + text + "': expected LAYER=SECTION, e.g. FRAME*=round:8:steel");
         }
         return new LayerAssignment(text.substring(0, eq).trim(), text.substring(eq + 1).trim(),
                 "command line --assign " + text);

@@ -66,15 +66,25 @@ public final class BuiltInSections {
             double d = awgDiameterMm(gauge);
             out.add(new Section(r.require("section"), "AWG " + gauge + " round wire (" + String.format(
                     java.util.Locale.ROOT, "%.4f", d) + " mm), " + m.id(), m.id(),
-                    m.densityKgM3() * Shape.ROUND.areaM2(new double[] {d}), d / 1000, null, r.require("source")));
+                    m.densityKgM3() * Shape.ROUND.areaM2(new double[] {d}), d / 1000, null, source(r, m)));
         }
         for (CsvRows.Row r : Materials.Resources.csv("wire-steel.csv").rows()) {
             double d = r.positive("diameter_mm");
             Material m = material(r.require("material"));
             out.add(new Section(r.require("section"), "round wire " + Shape.format(d) + " mm, " + m.id(), m.id(),
-                    m.densityKgM3() * Shape.ROUND.areaM2(new double[] {d}), d / 1000, null, r.require("source")));
+                    m.densityKgM3() * Shape.ROUND.areaM2(new double[] {d}), d / 1000, null, source(r, m)));
         }
         return List.copyOf(out);
+    }
+
+    /**
+     * The row's source with the table's internal pointer "materials.csv ID" replaced by what it
+     * points at: the density and the material row's own source, so a listing shows sources only.
+     */
+    private static String source(CsvRows.Row r, Material m) {
+        String pointer = "materials.csv " + m.id();
+        return r.require("source").replace(pointer,
+                Shape.format(m.densityKgM3()) + " kg/m3 for " + m.id() + " (" + m.source() + ")");
     }
 
     private static Material material(String id) {

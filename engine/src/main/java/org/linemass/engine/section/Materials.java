@@ -35,6 +35,40 @@ public final class Materials {
         return Optional.ofNullable(TABLE.get(key));
     }
 
+    /**
+     * What to say about a material id that is not built in: the closest built-in ids (by edit
+     * distance, at most three, those within half the text's length) and where the whole list is.
+     */
+    public static String unknownMessage(String id) {
+        String key = id.trim().toLowerCase(Locale.ROOT);
+        List<String> near = TABLE.keySet().stream()
+                .filter(k -> k.contains(key) && !key.isEmpty() || editDistance(k, key) <= Math.max(2, key.length() / 2))
+                .sorted(java.util.Comparator.comparingInt((String k) -> editDistance(k, key)).thenComparing(k -> k))
+                .limit(3).toList();
+        return "unknown material '" + id + "'" + (near.isEmpty() ? "" : "; near: " + String.join(", ", near))
+                + " ('linemass materials' lists them all)";
+    }
+
+    /** Levenshtein distance: insertions, deletions and substitutions of one character each cost 1. */
+    static int editDistance(String a, String b) {
+        int[] prev = new int[b.length() + 1];
+        int[] cur = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) {
+            prev[j] = j;
+        }
+        for (int i = 1; i <= a.length(); i++) {
+            cur[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                int sub = prev[j - 1] + (a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1);
+                cur[j] = Math.min(sub, Math.min(prev[j], cur[j - 1]) + 1);
+            }
+            int[] t = prev;
+            prev = cur;
+            cur = t;
+        }
+        return prev[b.length()];
+    }
+
     private static Map<String, Material> load() {
         Map<String, Material> m = new LinkedHashMap<>();
         for (CsvRows.Row r : Resources.csv("materials.csv").rows()) {

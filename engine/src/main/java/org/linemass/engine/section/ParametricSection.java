@@ -60,8 +60,8 @@ public final class ParametricSection {
             try {
                 density = Double.parseDouble(matText);
             } catch (NumberFormatException e) {
-                throw new IllegalArgumentException("section " + id + ": unknown material '" + matText
-                        + "' (give a built-in material id or a density in kg/m3)");
+                throw new IllegalArgumentException("section " + id + ": " + Materials.unknownMessage(matText)
+                        + ", or give a density in kg/m3");
             }
             if (!(density > 0) || !Double.isFinite(density)) {
                 throw new IllegalArgumentException("section " + id + ": density must be positive, got " + matText);

@@ -100,7 +100,7 @@ public final class SectionCsvReader {
         } else if (r.get("material").isPresent()) {
             String m = r.require("material");
             Material mat = Materials.find(m).orElseThrow(() -> new IllegalArgumentException("line " + r.line()
-                    + ": unknown material " + m + " (give density_kg_m3 instead)"));
+                    + ": " + Materials.unknownMessage(m) + ", or give density_kg_m3 instead"));
             density = mat.densityKgM3();
             material = mat.id();
         } else {
