@@ -11,6 +11,8 @@ import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -114,6 +116,34 @@ class CommandLineHelpTest {
         assertEquals(ExitCodes.BAD_INPUT, r.code());
         assertTrue(r.err().contains("give a folder"), r.err());
         assertFalse(Files.exists(dir.resolve("one.dxf")), "nothing is written");
+    }
+
+    @Test
+    void onlyLayerMatchingNothing_isRefusedNamingTheLayers(@TempDir Path dir) throws Exception {
+        Run r = run("check", "--only-layer", "RAIL*", bar(dir).toString());
+        assertEquals(ExitCodes.BAD_INPUT, r.code());
+        assertTrue(r.err().contains("nothing is left to weigh after --only-layer 'RAIL*'"), r.err());
+        assertTrue(r.err().contains("'BAR'"), r.err());
+    }
+
+    @Test
+    void assignmentMatchingNothing_isAWarningNamingTheRuleAndTheLayers(@TempDir Path dir) throws Exception {
+        Run r = run("check", "--json", "-", "-a", "BAR=round:12:steel", "-a", "BRA*=round:8:steel",
+                "--skip-layer", "NOTES", bar(dir).toString());
+        assertEquals(ExitCodes.OK, r.code(), r.err());
+        JsonNode findings = MAPPER.readTree(r.out()).get("findings");
+        List<String> unmatched = new ArrayList<>();
+        findings.forEach(f -> {
+            if ("unmatched_rule".equals(f.get("kind").asText())) {
+                assertEquals("warning", f.get("severity").asText());
+                unmatched.add(f.get("message").asText());
+            }
+        });
+        assertEquals(2, unmatched.size(), unmatched.toString());
+        assertTrue(unmatched.stream().anyMatch(m -> m.contains("--assign BRA*=round:8:steel")
+                && m.contains("its layers are 'BAR'")), unmatched.toString());
+        assertTrue(unmatched.stream().anyMatch(m -> m.startsWith("--skip-layer 'NOTES' matches no layer")),
+                unmatched.toString());
     }
 
     /** One LINE from (0,0,0) to (1000,0,0) mm on layer BAR. */

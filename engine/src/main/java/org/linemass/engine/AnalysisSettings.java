@@ -44,6 +44,12 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
                 Map.of(), DEFAULT_MAX_EXPANDED_SEGMENTS);
     }
 
+    /** The same settings without layer filters (every visible layer counts). */
+    public AnalysisSettings unfiltered() {
+        return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, List.of(),
+                List.of(), includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments);
+    }
+
     public AnalysisSettings withAssignments(List<LayerAssignment> a) {
         return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers,
                 excludeLayers, includeHiddenLayers, sections, a, densityExpressions, maxExpandedSegments);

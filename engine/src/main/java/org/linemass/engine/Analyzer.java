@@ -12,6 +12,7 @@ import org.linemass.engine.assemble.ImportFindings;
 import org.linemass.engine.assemble.LayerAssembler;
 import org.linemass.engine.assemble.MaterialPlan;
 import org.linemass.engine.assemble.PieceAssembler;
+import org.linemass.engine.assemble.RuleFindings;
 import org.linemass.engine.field.FieldException;
 import org.linemass.engine.field.FieldExpression;
 import org.linemass.engine.field.FieldIntegralResult;
@@ -87,6 +88,10 @@ public final class Analyzer {
         ResolvedDrawing resolved = Resolver.resolve(drawing, settings);
         Tolerances tol = tolerances(settings, resolved.extentM());
         List<Finding> findings = new ArrayList<>(ImportFindings.of(drawing));
+        java.util.Set<String> wireLayers = resolved.layers().moments().keySet();
+        RuleFindings.requireSomethingLeft(drawing, settings, wireLayers, wireLayers.isEmpty()
+                ? !Resolver.resolve(drawing, settings.unfiltered()).layers().moments().isEmpty() : true);
+        findings.addAll(RuleFindings.of(drawing, settings, wireLayers));
         List<String> reasons = new ArrayList<>();
         long skipped = drawing.notes().stream().filter(n -> n.skippedGeometry()).count();
         if (skipped > 0) {

@@ -24,6 +24,8 @@ public final class FindingKind {
     /** Paper-space entities read into model space on request (a warning: sheet scale may differ). */
     public static final String PAPER_SPACE_READ = "paper_space_read";
     public static final String LIMIT_REACHED = "limit_reached";
+    /** A layer filter, section assignment or density rule that matches no layer of the drawing (a warning). */
+    public static final String UNMATCHED_RULE = "unmatched_rule";
 
     private FindingKind() {
     }
