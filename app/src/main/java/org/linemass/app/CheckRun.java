@@ -7,7 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.linemass.engine.AnalysisException;
-import org.linemass.engine.AnalysisSettings;
+import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.result.Finding;
 import org.linemass.importer.DxfInputException;
 import org.linemass.importer.ImportOptions;

@@ -7,7 +7,7 @@ import java.util.Locale;
 import java.util.Optional;
 import org.linemass.drawing.LengthUnit;
 import org.linemass.engine.AnalysisException;
-import org.linemass.engine.AnalysisSettings;
+import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.section.LayerAssignment;
 import org.linemass.engine.section.SectionTable;
 import org.linemass.importer.ImportOptions;
@@ -117,13 +117,16 @@ public final class DrawingOptions {
         for (String a : assign) {
             rules.add(parseAssignment(a));
         }
-        if (joinM != null && gapLimitM != null && gapLimitM < joinM) {
-            throw new InputProblem("--gap-limit (" + LengthParser.describe(gapLimitM) + ") is below --join ("
-                    + LengthParser.describe(joinM) + ")");
+        java.util.Map<String, String> densities = densities();
+        long expansionLimit = checkedExpansionLimit();
+        try {
+            // the settings check the tolerances themselves (the gap limit covers the join tolerance)
+            return new AnalysisSettings(Optional.ofNullable(joinM), Optional.ofNullable(gapLimitM), Optional.empty(),
+                    AnalysisSettings.defaults(table).integrationRelative(), mirrorAlike, onlyLayers, skipped(),
+                    hiddenLayers, table, rules, densities, expansionLimit);
+        } catch (IllegalArgumentException e) {
+            throw new InputProblem("bad --join or --gap-limit: " + e.getMessage());
         }
-        return new AnalysisSettings(Optional.ofNullable(joinM), Optional.ofNullable(gapLimitM), Optional.empty(),
-                AnalysisSettings.defaults(table).integrationRelative(), mirrorAlike, onlyLayers, skipped(),
-                hiddenLayers, table, rules, densities(), checkedExpansionLimit());
     }
 
     /** {@code --density LAYER=EXPR} rules by glob; the first '=' splits, since exp4j formulas have none. */

@@ -2,7 +2,7 @@ package org.linemass.app;
 
 import java.nio.file.Path;
 import org.linemass.engine.AnalysisException;
-import org.linemass.engine.AnalysisSettings;
+import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.importer.DxfInputException;
 import org.linemass.importer.ImportOptions;
 import org.linemass.reports.Report;

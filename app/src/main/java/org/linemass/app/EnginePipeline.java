@@ -5,7 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.linemass.drawing.Drawing;
 import org.linemass.engine.AnalysisException;
-import org.linemass.engine.AnalysisSettings;
+import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.Analyzer;
 import org.linemass.engine.pieces.Piece;
 import org.linemass.engine.pieces.PieceAnalysis;

@@ -60,12 +60,12 @@ final class AppFixtures {
      * anything else is clean. Records the settings it was given.
      */
     static final class FakePipeline implements DrawingPipeline {
-        final List<org.linemass.engine.AnalysisSettings> seen = new ArrayList<>();
+        final List<org.linemass.engine.settings.AnalysisSettings> seen = new ArrayList<>();
         final List<org.linemass.importer.ImportOptions> imports = new ArrayList<>();
 
         @Override
         public Report analyse(Path file, org.linemass.importer.ImportOptions io,
-                org.linemass.engine.AnalysisSettings settings) throws DxfInputException {
+                org.linemass.engine.settings.AnalysisSettings settings) throws DxfInputException {
             seen.add(settings);
             imports.add(io);
             String n = file.getFileName().toString();

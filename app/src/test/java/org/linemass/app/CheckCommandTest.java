@@ -17,7 +17,7 @@ import java.util.Optional;
 import org.linemass.app.AppFixtures.FakePipeline;
 import org.linemass.app.AppFixtures.Run;
 import org.linemass.drawing.LengthUnit;
-import org.linemass.engine.AnalysisSettings;
+import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.section.LayerAssignment;
 import org.linemass.reports.json.JsonReportWriter;
 import org.junit.jupiter.api.BeforeEach;

@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Random;
 import java.util.concurrent.TimeUnit;
-import org.linemass.engine.Tolerances;
+import org.linemass.tolerance.Tolerances;
 import org.linemass.engine.pieces.PieceAnalysis;
 import org.linemass.engine.pieces.PieceAnalyzer;
 import org.linemass.engine.section.Section;

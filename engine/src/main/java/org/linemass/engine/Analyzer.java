@@ -34,7 +34,9 @@ import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.FindingKind;
 import org.linemass.engine.result.Severity;
 import org.linemass.engine.section.Section;
+import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.geometry.Segment;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Runs the whole engine on one imported drawing: resolve to world metres (per-layer moments by
@@ -83,7 +85,6 @@ public final class Analyzer {
     /** As {@link #analyze(Drawing, AnalysisSettings, PieceStage)}, also returning the pieces by id. */
     public static Detailed analyzeWithPieces(Drawing drawing, AnalysisSettings settings, PieceStage stage)
             throws AnalysisException {
-        tolerances(settings, 1.0);
         MaterialPlan plan = MaterialPlan.of(settings);
         ResolvedDrawing resolved = Resolver.resolve(drawing, settings);
         Tolerances tol = tolerances(settings, resolved.extentM());
@@ -108,8 +109,8 @@ public final class Analyzer {
             if (world.isPresent()) {
                 SectionLookup lookup = sectionLookup(plan, resolved);
                 PieceAnalysis pa = stage.analyze(world.get(), tol, lookup, settings.mirrorGrouping());
-                removed = removedMoments(pa.removed(), settings.integrationRelative());
-                pieces = PieceAssembler.assemble(pa, plan, settings.integrationRelative());
+                removed = removedMoments(pa.removed(), tol);
+                pieces = PieceAssembler.assemble(pa, plan, tol);
                 stageFindings = pa.findings();
                 Piece[] ordered = new Piece[pa.pieces().size()];
                 for (int i = 0; i < ordered.length; i++) {
@@ -157,7 +158,6 @@ public final class Analyzer {
     /** As {@link #integrateField(Drawing, AnalysisSettings, String)} with the given piece stage. */
     public static FieldIntegralResult integrateField(Drawing drawing, AnalysisSettings settings, String expression,
             PieceStage stage) throws AnalysisException {
-        tolerances(settings, 1.0);
         FieldExpression f = FieldExpression.parse(expression, "", false);
         // the pieces are needed for their ids and order only: leave density expressions out, so that one
         // that fails somewhere cannot stop an unrelated integral
@@ -175,7 +175,7 @@ public final class Analyzer {
                 settings.mirrorGrouping());
         PieceAssembler.Output assembled;
         try {
-            assembled = PieceAssembler.assemble(pa, plan, settings.integrationRelative());
+            assembled = PieceAssembler.assemble(pa, plan, tol);
         } catch (FieldException e) {
             throw new AnalysisException(drawing.file() + ": " + e.getMessage());
         }
@@ -186,7 +186,7 @@ public final class Analyzer {
                 var piece = pa.pieces().get(i);
                 LineIntegral.Value v;
                 try {
-                    v = LineIntegral.along(piece.segments(), f, settings.integrationRelative());
+                    v = LineIntegral.along(piece.segments(), f, tol.integrationRelative());
                 } catch (FieldException e) {
                     throw new FieldException("layer " + piece.layer() + ": " + e.getMessage());
                 }
@@ -215,22 +215,12 @@ public final class Analyzer {
     }
 
     /**
-     * The tolerances for a drawing of the given extent: the defaults ({@link Tolerances#defaultsFor})
-     * overridden by the user's join, gap and group tolerances and integration target.
+     * The analysis's one tolerance object ({@link AnalysisSettings#tolerances}); a user's tolerance that
+     * conflicts with a default derived from this drawing's extent is bad input.
      */
-    public static Tolerances tolerances(AnalysisSettings settings, double extentM) throws AnalysisException {
+    private static Tolerances tolerances(AnalysisSettings settings, double extentM) throws AnalysisException {
         try {
-            Tolerances t = Tolerances.defaultsFor(extentM).withIntegrationRelative(settings.integrationRelative());
-            if (settings.joinM().isPresent()) {
-                t = t.withJoin(settings.joinM().get());
-            }
-            if (settings.gapLimitM().isPresent()) {
-                t = t.withGapLimit(settings.gapLimitM().get());
-            }
-            if (settings.groupM().isPresent()) {
-                t = t.withGroup(settings.groupM().get());
-            }
-            return t;
+            return settings.tolerances(extentM);
         } catch (IllegalArgumentException e) {
             throw new AnalysisException("bad tolerance: " + e.getMessage());
         }
@@ -244,11 +234,11 @@ public final class Analyzer {
         return layer -> byLayer.getOrDefault(layer, Optional.empty());
     }
 
-    private static Map<String, Moments> removedMoments(List<Segment> removed, double relative) {
+    private static Map<String, Moments> removedMoments(List<Segment> removed, Tolerances tol) {
         Map<String, MomentsAccumulator> acc = new TreeMap<>();
         for (Segment s : removed) {
             acc.computeIfAbsent(s.source().layer(), k -> new MomentsAccumulator())
-                    .add(MomentIntegrator.lengthMoments(s, relative));
+                    .add(MomentIntegrator.lengthMoments(s, tol.integrationRelative()));
         }
         Map<String, Moments> out = new TreeMap<>();
         acc.forEach((k, v) -> out.put(k, v.result()));

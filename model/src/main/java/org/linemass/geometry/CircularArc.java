@@ -1,6 +1,7 @@
 package org.linemass.geometry;
 
 import java.util.Objects;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * A circular arc in any plane: {@code C(t) = centre + radius (cos t u + sin t v)} for t in
@@ -46,7 +47,7 @@ public final class CircularArc implements Segment {
         if (!(radius > 0) || !Double.isFinite(radius)) {
             throw new IllegalArgumentException("arc radius must be positive and finite, got " + radius);
         }
-        if (!(t1 > t0) || t1 - t0 > 2 * Math.PI * (1 + 1e-12) || !Double.isFinite(t0) || !Double.isFinite(t1)) {
+        if (!(t1 > t0) || t1 - t0 > 2 * Math.PI * (1 + Tolerances.FULL_TURN_SLACK) || !Double.isFinite(t0) || !Double.isFinite(t1)) {
             throw new IllegalArgumentException("arc parameter range must satisfy 0 < t1 - t0 <= 2 pi, got "
                     + t0 + " .. " + t1);
         }
@@ -159,7 +160,8 @@ public final class CircularArc implements Segment {
         double nu = au.norm();
         double nv = av.norm();
         double scale = Math.max(nu, nv);
-        if (Math.abs(nu - nv) <= 1e-12 * scale && Math.abs(au.dot(av)) <= 1e-12 * scale * scale) {
+        if (Math.abs(nu - nv) <= Tolerances.CIRCLE_KEPT_RELATIVE * scale
+                && Math.abs(au.dot(av)) <= Tolerances.CIRCLE_KEPT_RELATIVE * scale * scale) {
             return new CircularArc(map.apply(centre()), 0.5 * (nu + nv), au.times(1 / nu), av.times(1 / nv),
                     t0, t1, source);
         }

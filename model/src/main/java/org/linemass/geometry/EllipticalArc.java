@@ -1,5 +1,7 @@
 package org.linemass.geometry;
 
+import org.linemass.tolerance.Tolerances;
+
 /**
  * An elliptical arc in any plane written with two conjugate semi-diameters:
  * {@code C(t) = centre + cos t u + sin t v} for t in [t0, t1], {@code 0 < t1 - t0 <= 2 pi}.
@@ -10,7 +12,7 @@ public record EllipticalArc(Vec3 centre, Vec3 u, Vec3 v, double t0, double t1, P
         implements Segment {
 
     public static EllipticalArc of(Vec3 centre, Vec3 u, Vec3 v, double t0, double t1, Provenance source) {
-        if (!(t1 > t0) || t1 - t0 > 2 * Math.PI * (1 + 1e-12) || !Double.isFinite(t0) || !Double.isFinite(t1)) {
+        if (!(t1 > t0) || t1 - t0 > 2 * Math.PI * (1 + Tolerances.FULL_TURN_SLACK) || !Double.isFinite(t0) || !Double.isFinite(t1)) {
             throw new IllegalArgumentException("ellipse parameter range must satisfy 0 < t1 - t0 <= 2 pi, got "
                     + t0 + " .. " + t1);
         }

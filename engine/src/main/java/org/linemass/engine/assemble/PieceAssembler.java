@@ -20,6 +20,7 @@ import org.linemass.engine.result.SourceRef;
 import org.linemass.engine.section.Section;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Turns the piece stage's output into piece results and marks. Per piece: length moments (every
@@ -62,7 +63,9 @@ public final class PieceAssembler {
     private PieceAssembler() {
     }
 
-    public static Output assemble(PieceAnalysis analysis, MaterialPlan plan, double relative) throws AnalysisException {
+    public static Output assemble(PieceAnalysis analysis, MaterialPlan plan, Tolerances tol)
+            throws AnalysisException {
+        double relative = tol.integrationRelative();
         List<Computed> computed = new ArrayList<>();
         List<Piece> pieces = analysis.pieces();
         for (int i = 0; i < pieces.size(); i++) {

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.PriorityQueue;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Globally adaptive vector quadrature with the G10-K21 pair ({@link KronrodRule}).
@@ -15,7 +16,7 @@ import java.util.PriorityQueue;
  * component 0 changes sign), or the next bisection would exceed {@code maxEvaluations}, or no
  * piece can be bisected further in double precision. The error of each piece is
  * {@code |K21 - G10|} (the error of the Gauss rule, which overestimates the error of the
- * Kronrod result on smooth integrands) plus a rounding term of {@link #ROUNDING_FACTOR} units of
+ * Kronrod result on smooth integrands) plus a rounding term of {@link Tolerances#QUADRATURE_ROUNDING_FACTOR} units of
  * double rounding times the integral of |f|. This is the scheme of QUADPACK's QAG without its
  * empirical error rescaling, so the estimate stays conservative; {@link Result#reportedBound} also
  * never claims less than the target itself.
@@ -23,9 +24,6 @@ import java.util.PriorityQueue;
  * <p>Stateless and thread-safe; the integrand is called from the calling thread only.
  */
 public final class AdaptiveGaussKronrod {
-
-    /** Units of double rounding charged per piece for the summation inside the rule. */
-    public static final double ROUNDING_FACTOR = 50;
 
     private static final double EPS = Math.ulp(1.0);
 
@@ -102,7 +100,7 @@ public final class AdaptiveGaussKronrod {
      * Integrates {@code f} over [cuts[0], cuts[last]].
      *
      * @param cuts ascending parameters, at least two; the first and last are the range ends
-     * @param relative target relative error (positive; raised to {@code 2 ROUNDING_FACTOR} units of double
+     * @param relative target relative error (positive; raised to {@code 2 QUADRATURE_ROUNDING_FACTOR} units of double
      *     rounding if smaller, the accuracy the rounding allows)
      * @param absolute absolute error that is always good enough (zero or positive)
      * @param maxEvaluations cap on integrand evaluations (at least 21 per initial piece are spent anyway)
@@ -115,9 +113,9 @@ public final class AdaptiveGaussKronrod {
         if (!(relative > 0) || !(absolute >= 0)) {
             throw new IllegalArgumentException("bad error targets: relative " + relative + ", absolute " + absolute);
         }
-        // the rounding term charged to every piece sums to ROUNDING_FACTOR eps times the integral of |f|:
+        // the rounding term charged to every piece sums to QUADRATURE_ROUNDING_FACTOR eps times the integral of |f|:
         // a target below twice that could never be met, so it is raised to it
-        relative = Math.max(relative, 2 * ROUNDING_FACTOR * EPS);
+        relative = Math.max(relative, 2 * Tolerances.QUADRATURE_ROUNDING_FACTOR * EPS);
         PriorityQueue<Work> queue = new PriorityQueue<>(Comparator.comparingDouble((Work w) -> -w.norm));
         List<Work> frozen = new ArrayList<>();
         double[] scratch = new double[f.dimension()];
@@ -205,9 +203,9 @@ public final class AdaptiveGaussKronrod {
             g[c] *= half;
             abs[c] *= scale;
             diff[c] = k[c] - g[c];
-            err[c] = Math.abs(diff[c]) + ROUNDING_FACTOR * EPS * abs[c];
+            err[c] = Math.abs(diff[c]) + Tolerances.QUADRATURE_ROUNDING_FACTOR * EPS * abs[c];
         }
-        double norm = f.errorNorm(diff) + ROUNDING_FACTOR * EPS * abs[0];
+        double norm = f.errorNorm(diff) + Tolerances.QUADRATURE_ROUNDING_FACTOR * EPS * abs[0];
         if (!Double.isFinite(norm)) {
             norm = Double.MAX_VALUE;
         }

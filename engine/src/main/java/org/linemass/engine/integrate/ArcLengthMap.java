@@ -4,6 +4,7 @@ import java.util.List;
 import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Straight;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * The arc length {@code s(t)} of a segment from its start to parameter {@code t} (metres when the
@@ -38,12 +39,12 @@ public final class ArcLengthMap {
     public static ArcLengthMap of(Segment seg, double relative, long maxEvaluations) {
         if (seg instanceof Straight s) {
             double l = s.length();
-            return new ArcLengthMap(seg, 0, l, null, null, l, StraightMoments.ROUNDING_ULPS * Math.ulp(1.0) * l);
+            return new ArcLengthMap(seg, 0, l, null, null, l, Tolerances.CLOSED_FORM_ROUNDING_ULPS * Math.ulp(1.0) * l);
         }
         if (seg instanceof CircularArc c) {
             double l = c.length();
             return new ArcLengthMap(seg, c.t0(), c.radius(), null, null, l,
-                    StraightMoments.ROUNDING_ULPS * Math.ulp(1.0) * l);
+                    Tolerances.CLOSED_FORM_ROUNDING_ULPS * Math.ulp(1.0) * l);
         }
         Integrand speedIntegrand = new Integrand() {
             @Override

@@ -4,6 +4,7 @@ import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.Sym3;
 import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Closed-form length moments of a circular arc (unit density), written in the frame of the arc's
@@ -13,13 +14,10 @@ import org.linemass.geometry.Vec3;
  * Vector Mechanics: Statics, Fig. 5.8B), and the central second moment
  * {@code C = R^3 [f1(a) e2 e2^T + f2(a) e1 e1^T]} with {@code f1 = a - sin a cos a} and
  * {@code f2 = a + sin a cos a - 2 sin^2 a / a}; both are summed from their Taylor series below
- * {@link #SERIES_BELOW} to avoid the cancellation of the closed forms (f2 ~ 2a^5/45). The error
- * bound is {@link StraightMoments#ROUNDING_ULPS} units of rounding times the length.
+ * {@link Tolerances#ARC_SERIES_BELOW_RAD} to avoid the cancellation of the closed forms (f2 ~ 2a^5/45). The error
+ * bound is {@link Tolerances#CLOSED_FORM_ROUNDING_ULPS} units of rounding times the length.
  */
 public final class ArcMoments {
-
-    /** Half-sweeps (radians) below which f1 and f2 are summed as series. */
-    public static final double SERIES_BELOW = 1.5;
 
     private ArcMoments() {
     }
@@ -34,12 +32,12 @@ public final class ArcMoments {
         Vec3 g = arc.centre().plusScaled(e1, r * sinc(half));
         double r3 = r * r * r;
         Sym3 c = Sym3.outer(e2).times(r3 * f1(half)).plus(Sym3.outer(e1).times(r3 * f2(half)));
-        return new Moments(length, g, c, StraightMoments.ROUNDING_ULPS * Math.ulp(1.0) * length);
+        return new Moments(length, g, c, Tolerances.CLOSED_FORM_ROUNDING_ULPS * Math.ulp(1.0) * length);
     }
 
     /** sin(a)/a. */
     static double sinc(double a) {
-        if (Math.abs(a) < 1e-4) {
+        if (Math.abs(a) < Tolerances.SINC_SERIES_BELOW_RAD) {
             double a2 = a * a;
             return 1 - a2 / 6 + a2 * a2 / 120;
         }
@@ -48,7 +46,7 @@ public final class ArcMoments {
 
     /** a - sin(a) cos(a) = sum over k >= 1 of (-1)^(k+1) 2^(2k) a^(2k+1) / (2k+1)!. */
     static double f1(double a) {
-        if (a >= SERIES_BELOW) {
+        if (a >= Tolerances.ARC_SERIES_BELOW_RAD) {
             return a - 0.5 * Math.sin(2 * a);
         }
         double a2 = a * a;
@@ -58,7 +56,7 @@ public final class ArcMoments {
             term *= 4 * a2 / ((2.0 * k) * (2.0 * k + 1));
             double t = (k % 2 == 1) ? term : -term;
             sum += t;
-            if (Math.abs(t) <= 1e-17 * Math.abs(sum)) {
+            if (Math.abs(t) <= Tolerances.SERIES_TERM_RELATIVE * Math.abs(sum)) {
                 break;
             }
         }
@@ -67,7 +65,7 @@ public final class ArcMoments {
 
     /** a + sin(a) cos(a) - 2 sin^2(a) / a = sum over k >= 2 of (-1)^k 2^(2k) (2k - 2) a^(2k+1) / (2k+2)!. */
     static double f2(double a) {
-        if (a >= SERIES_BELOW) {
+        if (a >= Tolerances.ARC_SERIES_BELOW_RAD) {
             double s = Math.sin(a);
             return a + 0.5 * Math.sin(2 * a) - 2 * s * s / a;
         }
@@ -79,7 +77,7 @@ public final class ArcMoments {
             p *= 4 * a2 / ((2.0 * k + 1) * (2.0 * k + 2));
             double t = (k % 2 == 0 ? 1 : -1) * (2.0 * k - 2) * p;
             sum += t;
-            if (Math.abs(t) <= 1e-17 * Math.abs(sum)) {
+            if (Math.abs(t) <= Tolerances.SERIES_TERM_RELATIVE * Math.abs(sum)) {
                 break;
             }
         }

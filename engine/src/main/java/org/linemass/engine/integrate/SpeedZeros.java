@@ -4,12 +4,13 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import org.linemass.geometry.Segment;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Parameters where the speed {@code |C'(t)|} of a curve nearly vanishes (cusps of splines with
  * repeated control points): the integrand {@code |C'|} has a kink there, so the integrator cuts the
  * range at them. Contract: samples {@link #SAMPLES} points per span, takes every interior local
- * minimum below {@link #NEAR_ZERO} times the span's largest sampled speed, and refines it with a
+ * minimum below {@link Tolerances#NEAR_ZERO_SPEED} times the span's largest sampled speed, and refines it with a
  * golden-section search. Returns the minima in ascending order (may be empty). {@link #cuts} also
  * grades the cuts towards every such point (see {@code graded}).
  */
@@ -17,9 +18,6 @@ final class SpeedZeros {
 
     /** Samples per span. */
     static final int SAMPLES = 32;
-
-    /** A sampled speed below this fraction of the span's largest counts as nearly zero. */
-    static final double NEAR_ZERO = 1e-3;
 
     private static final double GOLDEN = (Math.sqrt(5) - 1) / 2;
 
@@ -37,7 +35,7 @@ final class SpeedZeros {
         }
         List<Double> out = new ArrayList<>();
         for (int i = 1; i < SAMPLES; i++) {
-            if (v[i] <= v[i - 1] && v[i] <= v[i + 1] && v[i] < NEAR_ZERO * max) {
+            if (v[i] <= v[i - 1] && v[i] <= v[i + 1] && v[i] < Tolerances.NEAR_ZERO_SPEED * max) {
                 double z = refine(seg, t[i - 1], t[i + 1]);
                 if (z > a && z < b) {
                     out.add(z);
@@ -123,7 +121,7 @@ final class SpeedZeros {
             out.add(c[i]);
             double v = seg.derivative(c[i]).norm();
             double acc = seg.secondDerivative(c[i]).norm();
-            if (!(v > 0) || !(v < NEAR_ZERO * max) || !(acc > 0)) {
+            if (!(v > 0) || !(v < Tolerances.NEAR_ZERO_SPEED * max) || !(acc > 0)) {
                 continue;
             }
             double w = v / acc;

@@ -4,17 +4,15 @@ import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.Sym3;
 import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Closed-form length moments of a straight segment (unit density): {@code L = |b - a|},
  * {@code g = (a + b) / 2}, {@code C = (L / 12)(b - a)(b - a)^T} (thin rod, e.g. Beer and Johnston,
- * Vector Mechanics, ch. 9). The error bound is {@link #ROUNDING_ULPS} units of double rounding times
+ * Vector Mechanics, ch. 9). The error bound is {@link Tolerances#CLOSED_FORM_ROUNDING_ULPS} units of double rounding times
  * the length. A zero-length segment has mass 0 at its point.
  */
 public final class StraightMoments {
-
-    /** Rounding bound of the closed forms, in units of double rounding of the length. */
-    public static final double ROUNDING_ULPS = 8;
 
     private StraightMoments() {
     }
@@ -26,6 +24,6 @@ public final class StraightMoments {
         if (length == 0) {
             return new Moments(0, g, Sym3.ZERO, 0);
         }
-        return new Moments(length, g, Sym3.outer(d).times(length / 12), ROUNDING_ULPS * Math.ulp(1.0) * length);
+        return new Moments(length, g, Sym3.outer(d).times(length / 12), Tolerances.CLOSED_FORM_ROUNDING_ULPS * Math.ulp(1.0) * length);
     }
 }

@@ -2,6 +2,7 @@ package org.linemass.engine.moments;
 
 import org.linemass.geometry.Affine;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * The moments of a curve with linear density λ: {@code mass = ∫ λ ds} (the length when λ = 1),
@@ -37,7 +38,7 @@ public record Moments(double mass, Vec3 centroid, Sym3 covariance, double errorB
     /**
      * The moments of the image of the curve under a similarity {@code x' = s Q x + t} for a density
      * fixed per unit length: {@code m' = s m}, {@code g' = s Q g + t}, {@code C' = s^3 Q C Q^T};
-     * the error bound scales with s and gains {@link #TRANSFORM_ROUNDING} of the new mass for the rounding of the map.
+     * the error bound scales with s and gains {@link Tolerances#TRANSFORM_ROUNDING} of the new mass for the rounding of the map.
      *
      * @param map a similarity (the caller checks with {@link Affine#similarityScale})
      * @param scale its scale s
@@ -50,14 +51,14 @@ public record Moments(double mass, Vec3 centroid, Sym3 covariance, double errorB
         }
         double newMass = mass * scale;
         return new Moments(newMass, map.apply(centroid), covariance.rotated(q).times(scale * scale * scale),
-                errorBound * scale + TRANSFORM_ROUNDING * Math.abs(newMass));
+                errorBound * scale + Tolerances.TRANSFORM_ROUNDING * Math.abs(newMass));
     }
 
     /**
      * The moments of the material left when {@code o} (a part of this curve) is taken away: the
      * inverse of {@link #plus}, {@code m = ma - mb}, {@code g = (ma ga - mb gb) / m},
      * {@code C = Ca - Cb - (ma mb / m)(gb - ga)(gb - ga)^T}. Error bounds add (removal is not
-     * exact either). Removing everything, to within rounding ({@link #REMOVAL_SLACK} relative plus
+     * exact either). Removing everything, to within rounding ({@link Tolerances#REMOVAL_SLACK} relative plus
      * both error bounds), gives a zero-mass result at this centroid.
      *
      * @throws IllegalArgumentException when {@code o} has clearly more mass than this
@@ -67,7 +68,7 @@ public record Moments(double mass, Vec3 centroid, Sym3 covariance, double errorB
             return new Moments(mass, centroid, covariance.minus(o.covariance), errorBound + o.errorBound);
         }
         double m = mass - o.mass;
-        double slack = REMOVAL_SLACK * Math.max(Math.abs(mass), Math.abs(o.mass)) + errorBound + o.errorBound;
+        double slack = Tolerances.REMOVAL_SLACK * Math.max(Math.abs(mass), Math.abs(o.mass)) + errorBound + o.errorBound;
         if (m <= slack) {
             if (m < -slack) {
                 throw new IllegalArgumentException("cannot remove mass " + o.mass + " from mass " + mass);
@@ -79,12 +80,6 @@ public record Moments(double mass, Vec3 centroid, Sym3 covariance, double errorB
         Sym3 c = covariance.minus(o.covariance).minus(Sym3.outer(d).times(mass * o.mass / m));
         return new Moments(m, g, c, errorBound + o.errorBound);
     }
-
-    /** Rounding added to the error bound by {@link #transformedBySimilarity}, relative to the new mass. */
-    public static final double TRANSFORM_ROUNDING = 4 * Math.ulp(1.0);
-
-    /** Relative rounding slack of {@link #minus} (64 units of double rounding). */
-    public static final double REMOVAL_SLACK = 64 * Math.ulp(1.0);
 
     /** The moments of the same curve seen with its centroid moved by {@code shift} (a pure translation). */
     public Moments translated(Vec3 shift) {

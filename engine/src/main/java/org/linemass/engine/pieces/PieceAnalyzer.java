@@ -7,7 +7,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
-import org.linemass.engine.Tolerances;
 import org.linemass.engine.pieces.checks.BendCheck;
 import org.linemass.engine.pieces.checks.BendFinder;
 import org.linemass.engine.pieces.checks.ContactCheck;
@@ -32,6 +31,7 @@ import org.linemass.engine.result.Bend;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.section.Section;
 import org.linemass.geometry.Segment;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Joins world segments into pieces, checks the drawing and groups identical pieces. The stages,
@@ -68,7 +68,7 @@ public final class PieceAnalyzer {
         SegmentIndex index = new SegmentIndex(world, tol.joinM());
         // every layer: welds between layers (cross wires on a frame layer) count as contacts
         CandidatePairs pairs = CandidatePairs.of(index, world.size(), (i, j) -> true);
-        DedupResult dedup = Deduplicator.run(world, pairs, tol.joinM(), cache);
+        DedupResult dedup = Deduplicator.run(world, pairs, tol, cache);
         List<Finding> findings = new ArrayList<>(dedup.findings());
         if (pairs.truncated()) {
             findings.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
@@ -133,7 +133,7 @@ public final class PieceAnalyzer {
             List<Finding> findings) {
         String layer = segments.get(0).source().layer();
         Optional<Section> section = cache.forLayer(layer);
-        List<BendFinder.Located> located = BendFinder.located(segments, closed, section, tol.angleRad(), tol.joinM());
+        List<BendFinder.Located> located = BendFinder.located(segments, closed, section, tol);
         if (!located.isEmpty() && section.isPresent()) {
             findings.addAll(BendCheck.check(layer, located, section.get()));
         }

@@ -17,6 +17,7 @@ import org.linemass.engine.moments.Moments;
 import org.linemass.geometry.Affine;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Per-layer length moments of a whole drawing by instancing: each (block, inherited layer) pair is
@@ -30,16 +31,6 @@ import org.linemass.geometry.Vec3;
  * inside itself is skipped and recorded. Single use, not thread-safe.
  */
 final class BlockInstancer {
-
-    /** Relative tolerance for recognising a similarity (rotation, mirror, uniform scale). */
-    static final double SIMILARITY_TOLERANCE = 1e-12;
-
-    /**
-     * Relative error of lengths transformed by a map accepted as a similarity: its squared column norms
-     * and products are within {@link #SIMILARITY_TOLERANCE} of {@code s^2 I}, so every direction is
-     * stretched by {@code s} to within about 1.5 times that; 3 times is charged.
-     */
-    static final double SIMILARITY_SLACK = 3 * SIMILARITY_TOLERANCE;
 
     private final Drawing drawing;
     private final LayerRules rules;
@@ -171,7 +162,7 @@ final class BlockInstancer {
             sub = f.childResult;
             f.childResult = null;
         } else {
-            OptionalDouble s = composite.similarityScale(SIMILARITY_TOLERANCE);
+            OptionalDouble s = composite.similarityScale(Tolerances.SIMILARITY_RELATIVE);
             if (onStack(child.name())) {
                 reasons.add("block " + child.name() + " inserts itself (" + ins.source().describe()
                         + "); that insert was left out");
@@ -184,7 +175,7 @@ final class BlockInstancer {
                     push(stack, new Frame(child, inherited, null, key, f));
                     return false;
                 }
-                sub = cached.transformed(composite, s.getAsDouble(), SIMILARITY_SLACK);
+                sub = cached.transformed(composite, s.getAsDouble(), Tolerances.SIMILARITY_SLACK);
             } else {
                 push(stack, new Frame(child, inherited, composite, null, f));
                 return false;

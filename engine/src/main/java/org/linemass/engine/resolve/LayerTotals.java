@@ -8,6 +8,7 @@ import org.linemass.engine.moments.MomentsAccumulator;
 import org.linemass.engine.moments.Sym3;
 import org.linemass.geometry.Affine;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Length moments and segment counts per layer of some content (a block, or the whole drawing),
@@ -61,7 +62,7 @@ public record LayerTotals(Map<String, Moments> moments, Map<String, Long> segmen
             Sym3 spread = Sym3.outer(columnStep).times(nr * sc).plus(Sym3.outer(rowStep).times(nc * sr));
             m.put(k, new Moments(n * v.mass(), v.centroid().plus(mean),
                     v.covariance().times(n).plus(spread.times(v.mass())),
-                    n * v.errorBound() + Moments.TRANSFORM_ROUNDING * n * v.mass()));
+                    n * v.errorBound() + Tolerances.TRANSFORM_ROUNDING * n * v.mass()));
         });
         Map<String, Long> c = new TreeMap<>();
         long copies = (long) columns * rows;

@@ -12,7 +12,7 @@ import org.linemass.drawing.ImportNote;
 import org.linemass.drawing.LengthUnit;
 import org.linemass.drawing.UnitSource;
 import org.linemass.engine.AnalysisException;
-import org.linemass.engine.AnalysisSettings;
+import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.Analyzer;
 import org.linemass.engine.field.FieldIntegralResult;
 import org.linemass.engine.result.DrawingResult;
@@ -275,19 +275,31 @@ class AnalyzerTest {
     }
 
     @Test
-    void badTolerances_areAnalysisExceptions() {
-        Drawings d = Drawings.create();
-        d.model().line("W", Vec3.ZERO, new Vec3(10, 0, 0));
+    void badTolerances_areRefusedWhenTheSettingsAreBuilt() {
         AnalysisSettings s = settings();
-        AnalysisSettings badGap = new AnalysisSettings(java.util.Optional.of(0.01), java.util.Optional.of(0.001),
-                s.groupM(), s.integrationRelative(), false, List.of(), List.of(), false, s.sections(), List.of(),
-                Map.of(), s.maxExpandedSegments());
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> new AnalysisSettings(java.util.Optional.of(0.01), java.util.Optional.of(0.001),
+                        s.groupM(), s.integrationRelative(), false, List.of(), List.of(), false, s.sections(),
+                        List.of(), Map.of(), s.maxExpandedSegments()));
+        assertTrue(e.getMessage().contains("gap limit 0.001 m is below the join tolerance 0.01 m"), e.getMessage());
+        assertThrows(IllegalArgumentException.class, () -> new AnalysisSettings(s.joinM(), s.gapLimitM(),
+                s.groupM(), -1, false, List.of(), List.of(), false, s.sections(), List.of(), Map.of(),
+                s.maxExpandedSegments()));
+    }
+
+    @Test
+    void gapLimitBelowTheDrawingsDefaultJoin_isAnAnalysisException() {
+        // a drawing 1e5 km across: its default join tolerance is 1e-9 of the extent, 0.1 m, above the
+        // user's 1 mm gap limit (Tolerances.defaultsFor)
+        Drawings d = Drawings.create();
+        d.model().line("W", Vec3.ZERO, new Vec3(1e11, 0, 0));
+        AnalysisSettings s = settings();
+        AnalysisSettings smallGap = new AnalysisSettings(s.joinM(), java.util.Optional.of(0.001), s.groupM(),
+                s.integrationRelative(), false, List.of(), List.of(), false, s.sections(), List.of(), Map.of(),
+                s.maxExpandedSegments());
         AnalysisException e = assertThrows(AnalysisException.class,
-                () -> Analyzer.analyze(d.build(), badGap, SimpleStages.CHAIN));
-        assertTrue(e.getMessage().contains("gap limit"), e.getMessage());
-        AnalysisSettings badRel = new AnalysisSettings(s.joinM(), s.gapLimitM(), s.groupM(), -1, false, List.of(),
-                List.of(), false, s.sections(), List.of(), Map.of(), s.maxExpandedSegments());
-        assertThrows(AnalysisException.class, () -> Analyzer.analyze(d.build(), badRel, SimpleStages.CHAIN));
+                () -> Analyzer.analyze(d.build(), smallGap, SimpleStages.CHAIN));
+        assertTrue(e.getMessage().startsWith("bad tolerance: gap limit"), e.getMessage());
     }
 
     @Test

@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.code_intelligence.jazzer.junit.FuzzTest;
 import org.junit.jupiter.api.Timeout;
 import org.linemass.drawing.Drawing;
-import org.linemass.engine.AnalysisSettings;
+import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.resolve.ResolvedDrawing;
 import org.linemass.engine.resolve.Resolver;
 import org.linemass.engine.section.SectionTable;

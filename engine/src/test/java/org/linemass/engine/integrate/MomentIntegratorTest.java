@@ -10,6 +10,7 @@ import org.linemass.geometry.Nurbs;
 import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
 import org.junit.jupiter.api.Test;
+import org.linemass.tolerance.Tolerances;
 
 class MomentIntegratorTest {
 
@@ -102,7 +103,7 @@ class MomentIntegratorTest {
     void arcSeries_meetsClosedFormAtSwitch() {
         // f1 and f2 switch from Taylor series to the closed forms at SERIES_BELOW; both sides must agree
         // there to a few ulps (f1 ~ 1.43, f2 ~ 0.24 at a = 1.5: the closed forms lose at most a digit)
-        double a = ArcMoments.SERIES_BELOW;
+        double a = Tolerances.ARC_SERIES_BELOW_RAD;
         double below = Math.nextDown(a);
         assertEquals(ArcMoments.f1(a), ArcMoments.f1(below), 1e-14);
         assertEquals(ArcMoments.f2(a), ArcMoments.f2(below), 1e-14);

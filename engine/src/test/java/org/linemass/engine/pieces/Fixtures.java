@@ -1,7 +1,7 @@
 package org.linemass.engine.pieces;
 
 import java.util.Optional;
-import org.linemass.engine.Tolerances;
+import org.linemass.tolerance.Tolerances;
 import org.linemass.engine.section.Section;
 import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Provenance;

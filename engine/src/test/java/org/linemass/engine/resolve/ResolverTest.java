@@ -9,7 +9,7 @@ import java.util.Map;
 import org.linemass.drawing.Drawing;
 import org.linemass.drawing.LengthUnit;
 import org.linemass.drawing.UnitSource;
-import org.linemass.engine.AnalysisSettings;
+import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.integrate.MomentIntegrator;
 import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.MomentsAccumulator;

@@ -7,20 +7,15 @@ import org.linemass.geometry.PackedSegments;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * One polyline piece from OCS vertex (x1, y1) to (x2, y2) at elevation z with bulge b =
- * tan(theta / 4) (FACTS.md §7.5): b = 0 (or below {@link #STRAIGHT_BULGE}) is straight, otherwise
+ * tan(theta / 4) (FACTS.md §7.5): b = 0 (or below {@link Tolerances#STRAIGHT_BULGE}) is straight, otherwise
  * the arc {@link BulgeArc} defines, in the frame {@code ocs}, whose axis objects all arcs of the
  * frame share. The packing builder gets the vertices and bulge rather than the arc.
  */
 final class Bulge {
-
-    /**
-     * Bulges smaller than this are straight: the sagitta is then below 1e-12 of the chord, under the
-     * rounding of the coordinates themselves, while the radius would exceed 1e11 chords.
-     */
-    static final double STRAIGHT_BULGE = 2e-12;
 
     private Bulge() {
     }
@@ -28,7 +23,7 @@ final class Bulge {
     /** Appends the piece to {@code out}. */
     static void append(double x1, double y1, double x2, double y2, double z, double b, Ocs.Frame ocs,
             Provenance p, List<Segment> out) {
-        if (Math.abs(b) < STRAIGHT_BULGE) {
+        if (Math.abs(b) < Tolerances.STRAIGHT_BULGE) {
             straight(x1, y1, x2, y2, z, ocs, p, out);
             return;
         }

@@ -10,6 +10,7 @@ import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * The bends of one oriented run of segments. A sharp corner is where the tangent turns by more
@@ -33,14 +34,14 @@ public final class BendFinder {
         }
     }
 
-    public static List<Bend> bends(List<Segment> run, boolean closed, Optional<Section> section, double angleRad,
-            double joinM) {
-        return located(run, closed, section, angleRad, joinM).stream().map(Located::bend).toList();
-    }
-
-    /** The bends with their entities, in order along the run. */
+    /**
+     * The bends with their entities, in order along the run; corners sharper than the angle tolerance
+     * count, and arcs on one circle within the join tolerance are one bend.
+     */
     public static List<Located> located(List<Segment> path, boolean closed, Optional<Section> section,
-            double angleRad, double joinM) {
+            Tolerances tol) {
+        double angleRad = tol.angleRad();
+        double joinM = tol.joinM();
         List<Segment> run = closed ? fromABreak(path, angleRad, joinM) : path;
         List<Located> out = new ArrayList<>();
         int n = run.size();

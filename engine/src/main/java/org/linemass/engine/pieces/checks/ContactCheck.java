@@ -3,7 +3,7 @@ package org.linemass.engine.pieces.checks;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.linemass.engine.Tolerances;
+import org.linemass.tolerance.Tolerances;
 import org.linemass.engine.pieces.geom.ClosestPoints;
 import org.linemass.engine.pieces.geom.Contact;
 import org.linemass.engine.pieces.geom.PlanarCrossing;

@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
-import org.linemass.engine.Tolerances;
+import org.linemass.tolerance.Tolerances;
 import org.linemass.engine.pieces.geom.PointGrid;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.FindingKind;

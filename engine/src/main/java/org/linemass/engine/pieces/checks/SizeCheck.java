@@ -1,7 +1,7 @@
 package org.linemass.engine.pieces.checks;
 
 import java.util.List;
-import org.linemass.engine.Tolerances;
+import org.linemass.tolerance.Tolerances;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.FindingKind;
 import org.linemass.engine.result.Severity;

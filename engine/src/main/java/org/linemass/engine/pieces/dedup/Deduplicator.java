@@ -16,6 +16,7 @@ import org.linemass.engine.result.FindingKind;
 import org.linemass.engine.result.Severity;
 import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Segment;
+import org.linemass.tolerance.Tolerances;
 import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
 
@@ -41,11 +42,12 @@ public final class Deduplicator {
 
     /**
      * @param segments world segments in metres
-     * @param pairs candidate pairs of {@code segments} (any layers; only same-layer pairs are used), boxes grown by at least {@code tolM}
-     * @param tolM join tolerance (metres): closer than this counts as the same place
+     * @param pairs candidate pairs of {@code segments} (any layers; only same-layer pairs are used), boxes grown by at least the join tolerance
+     * @param tol the analysis's tolerances; its join tolerance (metres) is the "same place" distance
      */
-    public static DedupResult run(List<Segment> segments, CandidatePairs pairs, double tolM,
+    public static DedupResult run(List<Segment> segments, CandidatePairs pairs, Tolerances tol,
             SectionCache sections) {
+        double tolM = tol.joinM();
         int n = segments.size();
         double[] length = new double[n];
         for (int i = 0; i < n; i++) {

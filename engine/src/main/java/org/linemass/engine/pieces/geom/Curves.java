@@ -4,6 +4,7 @@ import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Lengths, end tangents and parameter grids of segments, accurate enough for drawing checks
@@ -18,9 +19,6 @@ public final class Curves {
 
     /** Chords per full turn of an arc or ellipse in {@link #polylineParams} (about 11 degrees each). */
     public static final int CHORDS_PER_TURN = 32;
-
-    /** Fraction of the parameter range used for a one-sided difference when a derivative vanishes. */
-    private static final double TANGENT_STEP_FRACTION = 1e-6;
 
     // 5-point Gauss-Legendre nodes and weights on [-1, 1] (Abramowitz and Stegun 25.4.30).
     private static final double[] GL_X = {0.0, -0.5384693101056831, 0.5384693101056831,
@@ -100,7 +98,7 @@ public final class Curves {
             return d.times(1 / n);
         }
         // Vanishing derivative (repeated spline control points): use a short chord instead.
-        double h = TANGENT_STEP_FRACTION * (s.tEnd() - s.tStart());
+        double h = Tolerances.TANGENT_STEP_FRACTION * (s.tEnd() - s.tStart());
         Vec3 chord = towardsInside > 0 ? s.point(t + h).minus(s.point(t)) : s.point(t).minus(s.point(t - h));
         double c = chord.norm();
         return c > 0 ? chord.times(1 / c) : Vec3.ZERO;

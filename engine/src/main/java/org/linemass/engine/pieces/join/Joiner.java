@@ -3,7 +3,7 @@ package org.linemass.engine.pieces.join;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
-import org.linemass.engine.Tolerances;
+import org.linemass.tolerance.Tolerances;
 import org.linemass.engine.pieces.checks.Findings;
 import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.engine.result.Finding;

@@ -4,6 +4,7 @@ import java.util.List;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.SingularValueDecomposition;
+import org.linemass.tolerance.Tolerances;
 
 /** The geometric test of {@link Grouper}: one piece's samples against another's starts and directions. */
 final class Congruence {
@@ -53,7 +54,7 @@ final class Congruence {
      * one plane within {@code tol} or lie on one line within {@code tol}. The plane is the total
      * least-squares fit (smallest singular vector of the centred samples' scatter matrix); the
      * normal's sign makes its largest-magnitude component positive, components within
-     * {@link #NORMAL_TIE} of the largest counting as tied and then z before y before x (so a
+     * {@link Tolerances#NORMAL_TIE} of the largest counting as tied and then z before y before x (so a
      * drawing in plan gets +z).
      */
     static double[] planeNormal(double[][] p, double tol) {
@@ -83,7 +84,7 @@ final class Congruence {
         double big = Math.max(Math.abs(normal[0]), Math.max(Math.abs(normal[1]), Math.abs(normal[2])));
         int lead = 0;
         for (int k = 2; k >= 0; k--) {
-            if (Math.abs(normal[k]) >= big - NORMAL_TIE) {
+            if (Math.abs(normal[k]) >= big - Tolerances.NORMAL_TIE) {
                 lead = k;
                 break;
             }
@@ -95,12 +96,6 @@ final class Congruence {
         }
         return normal;
     }
-
-    /**
-     * Components of a unit normal closer than this to the largest are tied (dimensionless): far
-     * above the rounding of an SVD normal (about 1e-15), far below any tilt a drafter draws.
-     */
-    static final double NORMAL_TIE = 1e-9;
 
     private static double dot(double[] a, double[] b) {
         return a[0] * b[0] + a[1] * b[1] + a[2] * b[2];

@@ -5,7 +5,7 @@ import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.linemass.engine.Tolerances;
+import org.linemass.tolerance.Tolerances;
 import org.linemass.engine.pieces.Piece;
 
 /**
@@ -22,7 +22,7 @@ import org.linemass.engine.pieces.Piece;
  * piece are different marks. A planar piece (every sample within the group tolerance of one
  * plane, not all on one line) is compared keeping its orientation relative to the canonical
  * normal of its plane: the unit normal whose largest-magnitude component is positive (ties, within
- * {@link Congruence#NORMAL_TIE}, go to z, then y, then x; a drawing in plan gets +z). Each piece
+ * {@link Tolerances#NORMAL_TIE}, go to z, then y, then x; a drawing in plan gets +z). Each piece
  * carries a point off its centroid along its own canonical normal into the fit, and the fit only
  * uses proper rotations, so a planar piece and its mirror image, seen from the canonical side of
  * their planes, are told apart in the x-y plane, the x-z plane or any tilted plane alike; turning a

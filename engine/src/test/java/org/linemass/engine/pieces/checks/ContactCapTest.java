@@ -10,7 +10,7 @@ import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
-import org.linemass.engine.Tolerances;
+import org.linemass.tolerance.Tolerances;
 import org.linemass.engine.pieces.geom.CandidatePairs;
 import org.linemass.engine.pieces.geom.DerivedIndex;
 import org.linemass.engine.pieces.geom.SegmentIndex;

@@ -8,7 +8,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import org.junit.jupiter.api.Test;
-import org.linemass.engine.Tolerances;
+import org.linemass.tolerance.Tolerances;
 import org.linemass.engine.pieces.geom.CandidatePairs;
 import org.linemass.engine.pieces.geom.DerivedIndex;
 import org.linemass.engine.pieces.geom.SegmentIndex;

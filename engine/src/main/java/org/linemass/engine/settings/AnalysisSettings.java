@@ -1,14 +1,22 @@
-package org.linemass.engine;
+package org.linemass.engine.settings;
 
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.linemass.engine.section.LayerAssignment;
 import org.linemass.engine.section.SectionTable;
+import org.linemass.tolerance.Tolerances;
 
 /**
- * What the user chose for one analysis. Empty optionals mean "use the default derived from the
- * drawing" (see {@link Tolerances#defaultsFor}).
+ * What the user chose for one analysis: the one settings object, built once from the options and
+ * passed whole. Empty optionals mean "use the default derived from the drawing" (see
+ * {@link Tolerances#defaultsFor}); {@link #tolerances} turns the settings and the drawing's extent
+ * into the one {@link Tolerances} object the stages share.
+ *
+ * <p>The constructor checks what the user gave: every tolerance positive and finite, and the gap
+ * limit not below the join tolerance when both are given (the rule itself lives in
+ * {@link Tolerances#requireGapCoversJoin}); it throws {@link IllegalArgumentException} with the
+ * offending values otherwise.
  *
  * @param joinM join tolerance in metres
  * @param gapLimitM gap limit in metres
@@ -31,6 +39,13 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
     public static final long DEFAULT_MAX_EXPANDED_SEGMENTS = 2_000_000L;
 
     public AnalysisSettings {
+        joinM.ifPresent(m -> Tolerances.requirePositive("join tolerance", m));
+        gapLimitM.ifPresent(m -> Tolerances.requirePositive("gap limit", m));
+        groupM.ifPresent(m -> Tolerances.requirePositive("group tolerance", m));
+        Tolerances.requirePositive("integration tolerance", integrationRelative);
+        if (joinM.isPresent() && gapLimitM.isPresent()) {
+            Tolerances.requireGapCoversJoin(gapLimitM.get(), joinM.get());
+        }
         includeLayers = List.copyOf(includeLayers);
         excludeLayers = List.copyOf(excludeLayers);
         assignments = List.copyOf(assignments);
@@ -48,6 +63,28 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
     public AnalysisSettings unfiltered() {
         return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, List.of(),
                 List.of(), includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments);
+    }
+
+    /**
+     * The tolerances for a drawing of the given extent (bounding-box diagonal, metres): the defaults
+     * ({@link Tolerances#defaultsFor}) overridden by the user's join, gap and group tolerances and
+     * integration target. Built once per analysis.
+     *
+     * @throws IllegalArgumentException when a user's tolerance conflicts with a default derived from the
+     *     extent (a gap limit below the join tolerance of a very large drawing)
+     */
+    public Tolerances tolerances(double extentM) {
+        Tolerances t = Tolerances.defaultsFor(extentM).withIntegrationRelative(integrationRelative);
+        if (joinM.isPresent()) {
+            t = t.withJoin(joinM.get());
+        }
+        if (gapLimitM.isPresent()) {
+            t = t.withGapLimit(gapLimitM.get());
+        }
+        if (groupM.isPresent()) {
+            t = t.withGroup(groupM.get());
+        }
+        return t;
     }
 
     public AnalysisSettings withAssignments(List<LayerAssignment> a) {

@@ -1,0 +1,165 @@
+package org.linemass.tolerance;
+
+/**
+ * Every tolerance linemass uses, in one place, with its unit in the name or the doc.
+ *
+ * <p>The record holds the tolerances of one analysis: built once per drawing from the user's
+ * settings and the drawing's extent ({@code AnalysisSettings.tolerances} in the engine), then
+ * passed whole to each stage, the integration target included. The static constants below are
+ * the fixed numerical tolerances of the algorithms (rounding models, series switch points,
+ * similarity tests); they do not depend on the drawing and cannot be set by the user, but they
+ * live here so that one file lists every tolerance there is.
+ *
+ * <p>Invariants checked by the constructor: every value positive and finite, and
+ * {@code gapLimitM >= joinM} (a gap is an opening wider than the join tolerance, so a gap limit
+ * below it would make every gap a join). This is the only place that rule is checked.
+ *
+ * @param joinM segment ends closer than this join (metres)
+ * @param gapLimitM ends farther apart than {@code joinM} but within this are reported as gaps (metres)
+ * @param noiseM distances below this are numerical noise, not drafting (metres; about 1e-9 of the extent)
+ * @param groupM largest point deviation for two pieces to count as identical (metres)
+ * @param integrationRelative target relative error of every integral (dimensionless)
+ * @param angleRad angles below this are "straight on" for bends and collinearity (radians)
+ */
+public record Tolerances(double joinM, double gapLimitM, double noiseM, double groupM,
+        double integrationRelative, double angleRad) {
+
+    public Tolerances {
+        requirePositive("join tolerance", joinM);
+        requirePositive("gap limit", gapLimitM);
+        requirePositive("noise", noiseM);
+        requirePositive("group tolerance", groupM);
+        requirePositive("integration tolerance", integrationRelative);
+        requirePositive("angle tolerance", angleRad);
+        requireGapCoversJoin(gapLimitM, joinM);
+    }
+
+    /**
+     * Checks a user-given tolerance.
+     *
+     * @throws IllegalArgumentException naming {@code what} when {@code v} is not positive and finite
+     */
+    public static void requirePositive(String what, double v) {
+        if (!(v > 0) || !Double.isFinite(v)) {
+            throw new IllegalArgumentException(what + " must be positive and finite, got " + v);
+        }
+    }
+
+    /**
+     * The rule between the two end tolerances: the gap limit is at least the join tolerance.
+     *
+     * @throws IllegalArgumentException with both values (metres) when {@code gapLimitM < joinM}
+     */
+    public static void requireGapCoversJoin(double gapLimitM, double joinM) {
+        if (gapLimitM < joinM) {
+            throw new IllegalArgumentException("gap limit " + gapLimitM + " m is below the join tolerance "
+                    + joinM + " m");
+        }
+    }
+
+    /** Default relative integration error target (dimensionless). */
+    public static final double DEFAULT_INTEGRATION_RELATIVE = 1e-10;
+
+    /** Default join tolerance: 0.01 mm, a tenth of a typical drafting precision (common practice, no source). */
+    public static final double DEFAULT_JOIN_M = 1e-5;
+
+    /** Default gap limit: 5 mm (common practice, no source: larger openings are usually deliberate). */
+    public static final double DEFAULT_GAP_LIMIT_M = 5e-3;
+
+    /**
+     * Defaults for a drawing of the given extent (bounding-box diagonal, metres): the join tolerance
+     * is 0.01 mm but never below 1e-9 of the extent; noise is 1e-9 of the extent.
+     */
+    public static Tolerances defaultsFor(double extentM) {
+        double extent = extentM > 0 && Double.isFinite(extentM) ? extentM : 1.0;
+        double noise = Math.max(1e-9 * extent, 1e-12);
+        double join = Math.max(DEFAULT_JOIN_M, noise);
+        return new Tolerances(join, Math.max(DEFAULT_GAP_LIMIT_M, join), noise, Math.max(join, 1e-4),
+                DEFAULT_INTEGRATION_RELATIVE, Math.toRadians(0.01));
+    }
+
+    public Tolerances withJoin(double m) {
+        return new Tolerances(m, Math.max(gapLimitM, m), noiseM, Math.max(groupM, m), integrationRelative, angleRad);
+    }
+
+    public Tolerances withGapLimit(double m) {
+        return new Tolerances(joinM, m, noiseM, groupM, integrationRelative, angleRad);
+    }
+
+    public Tolerances withGroup(double m) {
+        return new Tolerances(joinM, gapLimitM, noiseM, m, integrationRelative, angleRad);
+    }
+
+    public Tolerances withIntegrationRelative(double r) {
+        return new Tolerances(joinM, gapLimitM, noiseM, groupM, r, angleRad);
+    }
+
+    // ---- fixed numerical tolerances of the algorithms (not drawing-dependent, not user-set) ----
+
+    /**
+     * Relative slack on an arc's or ellipse's parameter span above a full turn (dimensionless):
+     * a span up to {@code 2 pi (1 + this)} is accepted, since a full turn computed from degrees
+     * or from two angles rounds to a little above 2 pi.
+     */
+    public static final double FULL_TURN_SLACK = 1e-12;
+
+    /**
+     * Relative tolerance under which a mapped circle is still a circle (dimensionless): the images
+     * of its two unit axes differ in length by at most this times the larger, and their dot product
+     * is at most this times its square. Rounding of a rigid or uniform map stays far below.
+     */
+    public static final double CIRCLE_KEPT_RELATIVE = 1e-12;
+
+    /** Relative tolerance for recognising a similarity (rotation, mirror, uniform scale) (dimensionless). */
+    public static final double SIMILARITY_RELATIVE = 1e-12;
+
+    /**
+     * Relative error of lengths transformed by a map accepted as a similarity (dimensionless): its
+     * squared column norms and products are within {@link #SIMILARITY_RELATIVE} of {@code s^2 I}, so
+     * every direction is stretched by {@code s} to within about 1.5 times that; 3 times is charged.
+     */
+    public static final double SIMILARITY_SLACK = 3 * SIMILARITY_RELATIVE;
+
+    /** Rounding added to the error bound of moments moved by a similarity, relative to the new mass. */
+    public static final double TRANSFORM_ROUNDING = 4 * Math.ulp(1.0);
+
+    /** Relative rounding slack of subtracting moments (64 units of double rounding). */
+    public static final double REMOVAL_SLACK = 64 * Math.ulp(1.0);
+
+    /** Rounding bound of the closed-form moments, in units of double rounding of the length. */
+    public static final double CLOSED_FORM_ROUNDING_ULPS = 8;
+
+    /** Units of double rounding charged per piece for the summation inside the adaptive rule. */
+    public static final double QUADRATURE_ROUNDING_FACTOR = 50;
+
+    /** Half-sweeps (radians) below which the circular-arc moment functions are summed as series. */
+    public static final double ARC_SERIES_BELOW_RAD = 1.5;
+
+    /**
+     * Angles (radians) below which sin(a)/a is its three-term Taylor polynomial: the first left-out
+     * term, a^6/5040, is then below 1e-27, far under double rounding.
+     */
+    public static final double SINC_SERIES_BELOW_RAD = 1e-4;
+
+    /** A series is summed until a term is at most this fraction of the sum (dimensionless; below half an ulp). */
+    public static final double SERIES_TERM_RELATIVE = 1e-17;
+
+    /** A sampled speed below this fraction of a span's largest counts as nearly zero (dimensionless). */
+    public static final double NEAR_ZERO_SPEED = 1e-3;
+
+    /** Fraction of the parameter range used for a one-sided difference when a derivative vanishes. */
+    public static final double TANGENT_STEP_FRACTION = 1e-6;
+
+    /**
+     * Components of a unit normal closer than this to the largest are tied (dimensionless): far
+     * above the rounding of an SVD normal (about 1e-15), far below any tilt a drafter draws.
+     */
+    public static final double NORMAL_TIE = 1e-9;
+
+    /**
+     * Polyline bulges smaller than this are straight (dimensionless): the sagitta is then below
+     * 1e-12 of the chord, under the rounding of the coordinates themselves, while the radius would
+     * exceed 1e11 chords.
+     */
+    public static final double STRAIGHT_BULGE = 2e-12;
+}
