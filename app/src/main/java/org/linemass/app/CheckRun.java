@@ -20,6 +20,9 @@ import org.linemass.reports.csv.PiecesCsvWriter;
 import org.linemass.reports.dxf.DxfMarkupWriter;
 import org.linemass.reports.html.HtmlReportWriter;
 import org.linemass.reports.json.JsonReportWriter;
+import org.linemass.reports.xlsx.CheckSheets;
+import org.linemass.reports.xlsx.XlsxSheet;
+import org.linemass.reports.xlsx.XlsxWorkbook;
 
 /**
  * One run of {@code check}: expand the inputs, build the settings, refuse outputs that would land
@@ -46,6 +49,9 @@ final class CheckRun {
         long toStdout = outputs.targets().stream().filter(OutputOptions.STDOUT::equals).count();
         if (toStdout > 1) {
             throw new InputProblem("only one report can go to standard output ('-')");
+        }
+        if (OutputOptions.STDOUT.equals(outputs.xlsx)) {
+            throw new InputProblem("--xlsx needs a file name, not '-'");
         }
         if (OutputOptions.STDOUT.equals(outputs.markupDxf)) {
             throw new InputProblem("--markup-dxf needs a file name, not '-'");
@@ -96,6 +102,10 @@ final class CheckRun {
         sink.text(outputs.bomCsv, reports, (r, w) -> BomCsvWriter.write(r, units, w), true);
         sink.text(outputs.piecesCsv, reports, (r, w) -> PiecesCsvWriter.write(r, units, w), true);
         sink.text(outputs.findingsCsv, reports, (r, w) -> FindingsCsvWriter.write(r, units, w), true);
+        if (outputs.xlsx != null) {
+            List<XlsxSheet> sheets = CheckSheets.of(reports, units);
+            sink.bytes(Path.of(outputs.xlsx), os -> XlsxWorkbook.write(sheets, os));
+        }
         sink.text(outputs.html, reports, (r, w) -> new HtmlReportWriter(units).write(r, w));
         if (outputs.markupDxf != null) {
             markup(sink, reports, analysed);

@@ -22,6 +22,10 @@ public final class OutputOptions {
     @Option(names = "--findings-csv", paramLabel = "FILE", description = "Write the drawing findings as CSV.")
     String findingsCsv;
 
+    @Option(names = "--xlsx", paramLabel = "FILE",
+            description = "Write a spreadsheet workbook (bill of materials, pieces, findings, layers) with numeric cells.")
+    String xlsx;
+
     @Option(names = "--html", paramLabel = "FILE", description = "Write the HTML report with the picture of the drawing.")
     String html;
 
@@ -37,7 +41,7 @@ public final class OutputOptions {
     /** The report targets given, in a fixed order. */
     List<String> targets() {
         List<String> t = new ArrayList<>();
-        for (String s : new String[] {json, bomCsv, piecesCsv, findingsCsv, html, markupDxf}) {
+        for (String s : new String[] {json, bomCsv, piecesCsv, findingsCsv, xlsx, html, markupDxf}) {
             if (s != null) {
                 t.add(s);
             }

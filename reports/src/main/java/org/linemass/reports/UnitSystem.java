@@ -58,6 +58,36 @@ public enum UnitSystem {
         return massUnit;
     }
 
+    /** A length in metres as a number in the long unit (m or ft), unrounded, for typed spreadsheet cells. */
+    public double inLongUnit(double metres) {
+        return metres / longM;
+    }
+
+    /** A length in metres as a number in the short unit (mm or in), unrounded. */
+    public double inShortUnit(double metres) {
+        return metres / shortM;
+    }
+
+    /** A mass in kilograms as a number in the mass unit (kg or lb), unrounded. */
+    public double inMassUnit(double kg) {
+        return kg / massKg;
+    }
+
+    /** Decimals shown for long lengths and coordinates. */
+    public int longDecimals() {
+        return longDecimals;
+    }
+
+    /** Decimals shown for cut lengths. */
+    public int shortDecimals() {
+        return shortDecimals;
+    }
+
+    /** Decimals shown for masses. */
+    public int massDecimals() {
+        return massDecimals;
+    }
+
     /** A length in metres shown in the long unit, fixed decimals; empty text for null. */
     public String longLength(Double metres) {
         return metres == null ? "" : fixed(metres / longM, longDecimals);
