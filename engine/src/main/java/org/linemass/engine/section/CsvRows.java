@@ -42,7 +42,10 @@ final class CsvRows {
                 }
                 return d;
             } catch (NumberFormatException e) {
-                throw new IllegalArgumentException("line " + line + ": column " + column + " is not a number: " + v);
+                String hint = v.matches("[+-]?\\d+,\\d+") ? " (write decimals with a point: " + v.replace(',', '.')
+                        + ")" : "";
+                throw new IllegalArgumentException("line " + line + ": column " + column + " is not a number: " + v
+                        + hint);
             }
         }
 
@@ -91,12 +94,23 @@ final class CsvRows {
             }
             List<String> fields = split(text, line);
             if (header == null) {
+                if (fields.size() == 1 && (text.indexOf(';') >= 0 || text.indexOf('\t') >= 0)) {
+                    String sep = text.indexOf(';') >= 0 ? "';'" : "tabs";
+                    throw new IllegalArgumentException("line " + line + ": the columns are separated by " + sep
+                            + ", not commas (a spreadsheet saved with a comma-decimal setting?); save it as CSV with "
+                            + "',' between columns and '.' in decimals");
+                }
                 header = fields.stream().map(f -> f.trim().toLowerCase(Locale.ROOT)).toList();
                 continue;
             }
             if (fields.size() > header.size()) {
+                boolean decimalComma = false;
+                for (int i = 0; i + 1 < fields.size(); i++) {
+                    decimalComma |= fields.get(i).trim().matches("[+-]?\\d+") && fields.get(i + 1).matches("\\d+\\s*");
+                }
                 throw new IllegalArgumentException("line " + line + ": " + fields.size() + " fields but the header has "
-                        + header.size());
+                        + header.size() + (decimalComma ? " (a decimal comma? write decimals with a point, or quote "
+                        + "the field)" : ""));
             }
             Map<String, String> values = new HashMap<>();
             for (int i = 0; i < fields.size(); i++) {
