@@ -95,8 +95,10 @@ public final class PieceAssembler {
                 .thenComparingInt(g -> g.get(0)));
         String[] markOf = new String[computed.size() + 1];
         List<MarkResult> marks = new ArrayList<>();
+        // zero-padded to the number of marks (at least two digits), so M007 sorts before M100
+        String markFormat = "M%0" + Math.max(2, String.valueOf(groups.size()).length()) + "d";
         for (int gi = 0; gi < groups.size(); gi++) {
-            String mark = gi < 9 ? "M0" + (gi + 1) : "M" + (gi + 1);
+            String mark = String.format(java.util.Locale.ROOT, markFormat, gi + 1);
             List<Integer> ids = groups.get(gi);
             Computed first = computed.get(ids.get(0) - 1);
             double lengthTotal = 0;

@@ -16,6 +16,7 @@ import org.linemass.geometry.Vec3;
 import org.linemass.reports.Caution;
 import org.linemass.reports.CombinedTotals;
 import org.linemass.reports.Report;
+import org.linemass.reports.Words;
 import org.linemass.reports.UnitSystem;
 
 /**
@@ -101,7 +102,7 @@ public final class ConsoleReport {
         field(out, "DXF version", r.drawing().dxfVersion().isEmpty() ? "(no header)" : r.drawing().dxfVersion());
         field(out, "units", r.drawing().unit().symbol() + " (" + unitSource(r) + ")");
         totalsLines(r.totals(), r.complete(), out);
-        field(out, "pieces", r.pieces().size() + " in " + r.groups().size() + " marks");
+        field(out, "pieces", r.pieces().size() + " in " + Words.count(r.groups().size(), "mark"));
         field(out, "findings", severityCounts(r.findings()));
         for (String reason : r.incompleteReasons()) {
             out.print("  " + paint("31", "incomplete: " + TextTable.clean(reason)) + "\n");
@@ -154,8 +155,9 @@ public final class ConsoleReport {
         int e = n.getOrDefault(Severity.ERROR, 0);
         int w = n.getOrDefault(Severity.WARNING, 0);
         int i = n.getOrDefault(Severity.INFO, 0);
-        return (e > 0 ? paint("31", count(e, "error")) : count(e, "error")) + ", "
-                + (w > 0 ? paint("33", count(w, "warning")) : count(w, "warning")) + ", " + count(i, "note");
+        return (e > 0 ? paint("31", Words.count(e, "error")) : Words.count(e, "error")) + ", "
+                + (w > 0 ? paint("33", Words.count(w, "warning")) : Words.count(w, "warning")) + ", "
+                + Words.count(i, "note");
     }
 
     private void bom(DrawingResult r, PrintWriter out) {
@@ -228,14 +230,10 @@ public final class ConsoleReport {
         if (!noteKinds.isEmpty()) {
             StringBuilder b = new StringBuilder();
             noteKinds.forEach((k, c) -> b.append(b.length() == 0 ? "" : ", ").append(c).append(' ').append(k));
-            out.print("  " + count((int) notes, "note") + " not listed here (" + b + "): each is in the findings CSV, "
+            out.print("  " + Words.count((int) notes, "note") + " not listed here (" + b + "): each is in the findings CSV, "
                     + "the JSON and the HTML report, or add --list-notes\n");
         }
         out.print("\n");
-    }
-
-    private static String count(int n, String what) {
-        return n + " " + what + (n == 1 ? "" : "s");
     }
 
     private static void field(PrintWriter out, String name, String value) {

@@ -14,6 +14,7 @@ import org.linemass.geometry.Vec3;
 import org.linemass.reports.Caution;
 import org.linemass.reports.CombinedTotals;
 import org.linemass.reports.Report;
+import org.linemass.reports.Words;
 import org.linemass.reports.UnitSystem;
 
 /**
@@ -76,8 +77,9 @@ public final class HtmlReportWriter {
         s.append("<section class=\"drawing\">\n<h2>").append(Html.escape(r.drawing().file())).append("</h2>\n");
         s.append("<p class=\"meta\">DXF ").append(Html.escape(r.drawing().dxfVersion().isEmpty() ? "(no header)"
                 : r.drawing().dxfVersion())).append(", units ").append(Html.escape(r.drawing().unit().symbol()))
-                .append(" (").append(unitSource(r)).append("), ").append(r.pieces().size()).append(" pieces in ")
-                .append(r.groups().size()).append(" marks, ").append(r.findings().size()).append(" findings</p>\n");
+                .append(" (").append(unitSource(r)).append("), ").append(Words.count(r.pieces().size(), "piece"))
+                .append(" in ").append(Words.count(r.groups().size(), "mark")).append(", ")
+                .append(Words.count(r.findings().size(), "finding")).append("</p>\n");
         if (!r.complete()) {
             s.append("<div class=\"incomplete\"><strong>Totals are incomplete.</strong> Part of the drawing was not "
                     + "counted:<ul>\n");
