@@ -61,11 +61,15 @@ final class CheckRun {
             throw new InputProblem("--markup-dxf " + outputs.markupDxf + " names one file, but " + files.size()
                     + " drawings are checked: give a folder for their marked-up copies");
         }
-        ReportFiles sink = new ReportFiles(ctx.out(), files);
+        ReportFiles sink = new ReportFiles(ctx.out(), drawing.protectedFiles(files));
         java.util.Set<Path> seen = new java.util.HashSet<>();
         for (String t : outputs.targets()) {
-            sink.guard(t);
-            if (!t.equals(OutputOptions.STDOUT) && !seen.add(Path.of(t).toAbsolutePath().normalize())) {
+            boolean folder = t.equals(outputs.markupDxf) && (files.size() > 1 || Files.isDirectory(Path.of(t)));
+            if (folder) {
+                continue; // a folder of marked-up copies: each file is guarded when it is written
+            }
+            org.linemass.reports.io.OutputPath p = sink.guard(t);
+            if (p != null && !seen.add(p.resolved())) {
                 throw new InputProblem("two reports would be written to the same file " + t);
             }
         }

@@ -163,6 +163,20 @@ public final class DrawingOptions {
         return all;
     }
 
+    /**
+     * Every file a run with these options reads: the drawings, the section table and the layer
+     * assignment files; no report may be written onto any of them.
+     */
+    org.linemass.reports.io.ProtectedFiles protectedFiles(List<Path> drawings) {
+        org.linemass.reports.io.ProtectedFiles p = new org.linemass.reports.io.ProtectedFiles();
+        p.addAll(drawings, "input drawing");
+        if (sectionTable != null) {
+            p.add(sectionTable, "section table");
+        }
+        p.addAll(assignFiles, "assignment file");
+        return p;
+    }
+
     /** {@code LAYER=SECTION}; the layer glob may itself contain '=', so the last '=' splits. */
     static LayerAssignment parseAssignment(String text) throws InputProblem {
         int eq = text.lastIndexOf('=');

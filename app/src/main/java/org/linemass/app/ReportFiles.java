@@ -12,10 +12,13 @@ import java.util.List;
 import org.linemass.reports.Report;
 import org.linemass.reports.io.AtomicWrite;
 import org.linemass.reports.io.OutputGuard;
+import org.linemass.reports.io.OutputPath;
+import org.linemass.reports.io.ProtectedFiles;
 
 /**
  * Sends one text report to its target: standard output for {@code -}, otherwise a file written
- * atomically after checking that it is not one of the input drawings.
+ * atomically after checking that it is none of the files the run reads ({@link ProtectedFiles}).
+ * The output path is resolved once ({@link OutputPath}); the guard and the writer use that path.
  */
 final class ReportFiles {
 
@@ -26,18 +29,22 @@ final class ReportFiles {
     }
 
     private final PrintWriter stdout;
-    private final List<Path> inputs;
+    private final ProtectedFiles inputs;
 
-    ReportFiles(PrintWriter stdout, List<Path> inputs) {
+    ReportFiles(PrintWriter stdout, ProtectedFiles inputs) {
         this.stdout = stdout;
-        this.inputs = List.copyOf(inputs);
+        this.inputs = inputs;
     }
 
-    /** Refuses an output path that resolves to an input (checked before any work is done). */
-    void guard(String target) throws IOException {
+    /**
+     * Refuses an output path that resolves to a file the run reads, a folder or a symbolic link
+     * (checked before any work is done); returns the resolved path, or null for standard output.
+     */
+    OutputPath guard(String target) throws IOException {
         if (target != null && !target.equals(OutputOptions.STDOUT)) {
-            OutputGuard.check(Path.of(target), inputs);
+            return OutputGuard.check(Path.of(target), inputs);
         }
+        return null;
     }
 
     void text(String target, List<Report> reports, TextReport writer) throws IOException {
@@ -58,11 +65,7 @@ final class ReportFiles {
             stdout.flush();
             return;
         }
-        Path p = Path.of(target);
-        OutputGuard.check(p, inputs);
-        if (Files.isDirectory(p)) {
-            throw new IOException(target + " is a folder; give a file name");
-        }
+        OutputPath p = OutputGuard.check(Path.of(target), inputs);
         AtomicWrite.write(p, os -> {
             Writer w = new OutputStreamWriter(nonClosing(os), StandardCharsets.UTF_8);
             if (byteOrderMark) {
@@ -74,11 +77,10 @@ final class ReportFiles {
     }
 
     void bytes(Path target, AtomicWrite.Content content) throws IOException {
-        OutputGuard.check(target, inputs);
         if (Files.isDirectory(target)) {
             throw new IOException(target + " is a folder; give a file name for one drawing");
         }
-        AtomicWrite.write(target, content);
+        AtomicWrite.write(OutputGuard.check(target, inputs), content);
     }
 
     private static OutputStream nonClosing(OutputStream os) {

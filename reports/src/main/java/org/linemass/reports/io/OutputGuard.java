@@ -1,13 +1,12 @@
 package org.linemass.reports.io;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Collection;
 
 /**
- * Refuses output paths that are an input drawing: compared by real path (symbolic links and
- * {@code ..} resolved), and by file identity when both exist (hard links).
+ * Refuses output paths that are a file the run reads ({@link ProtectedFiles}): compared by real
+ * path, with the output resolved by {@link OutputPath} exactly as the writer will use it, and by
+ * file identity when both exist (hard links).
  */
 public final class OutputGuard {
 
@@ -15,36 +14,20 @@ public final class OutputGuard {
     }
 
     /**
-     * @throws IOException naming both paths when {@code output} resolves to one of {@code inputs}
+     * @throws IOException naming the output and the protected file when they are the same file
      */
-    public static void check(Path output, Collection<Path> inputs) throws IOException {
-        Path out = realOrResolved(output);
-        for (Path in : inputs) {
-            Path inReal = realOrResolved(in);
-            boolean same = out.equals(inReal)
-                    || Files.exists(output) && Files.exists(in) && Files.isSameFile(output, in);
-            if (same) {
-                throw new IOException("refusing to write " + output + ": it is the input drawing " + in);
-            }
+    public static void check(OutputPath output, ProtectedFiles inputs) throws IOException {
+        ProtectedFiles.Entry hit = inputs.match(output.resolved());
+        if (hit != null) {
+            throw new IOException("refusing to write " + output.given() + ": it is the " + hit.role() + " "
+                    + hit.path() + " read by this run");
         }
     }
 
-    /**
-     * The real path of {@code p} when it exists; otherwise the real path of its nearest existing
-     * ancestor with the remaining names appended (so a new file in a linked folder still compares).
-     */
-    static Path realOrResolved(Path p) throws IOException {
-        Path abs = p.toAbsolutePath();
-        if (Files.exists(abs)) {
-            return abs.toRealPath();
-        }
-        Path existing = abs.getParent();
-        while (existing != null && !Files.exists(existing)) {
-            existing = existing.getParent();
-        }
-        if (existing == null) {
-            return abs;
-        }
-        return existing.toRealPath().resolve(existing.relativize(abs)).normalize();
+    /** Resolves {@code output} and checks it; returns the resolved path for the writer. */
+    public static OutputPath check(Path output, ProtectedFiles inputs) throws IOException {
+        OutputPath p = OutputPath.of(output);
+        check(p, inputs);
+        return p;
     }
 }

@@ -57,6 +57,40 @@ class AtomicWriteTest {
             assertTrue(p.waitFor(30, TimeUnit.SECONDS));
         }
         assertEquals("{\"previous\": true}", Files.readString(f));
+        assertEquals(1, temporaries().size(), "the killed run could not remove its temporary: " + list());
+        // the next write into that folder, for any target, removes what the killed run left
+        AtomicWrite.write(dir.resolve("other.csv"), out -> out.write('x'));
+        assertEquals(List.of(), temporaries(), "no .part file is left after the next run");
+        assertEquals("{\"previous\": true}", Files.readString(f));
+    }
+
+    @Test
+    void removeStale_keepsTemporariesOfLiveProcessesAndForeignFiles() throws IOException {
+        long me = ProcessHandle.current().pid();
+        Path mine = Files.writeString(dir.resolve(".a.json.linemass-" + me + "-123.part"), "live");
+        Path foreign = Files.writeString(dir.resolve(".a.json.part"), "not ours");
+        Path dead = Files.writeString(dir.resolve(".a.json.linemass-" + deadPid() + "-5.part"), "killed");
+        AtomicWrite.removeStale(dir);
+        assertTrue(Files.exists(mine));
+        assertTrue(Files.exists(foreign));
+        assertTrue(Files.notExists(dead));
+    }
+
+    /** The id of a process that has ended. */
+    private static long deadPid() throws IOException {
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        Process p = new ProcessBuilder(java, "-version").redirectErrorStream(true).start();
+        try {
+            p.getInputStream().readAllBytes();
+            p.waitFor(60, TimeUnit.SECONDS);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+        return p.pid();
+    }
+
+    private List<Path> temporaries() throws IOException {
+        return list().stream().filter(p -> p.getFileName().toString().endsWith(".part")).toList();
     }
 
     @Test
