@@ -26,8 +26,11 @@ import org.linemass.reports.xlsx.XlsxWorkbook;
 
 /**
  * One run of {@code check}: expand the inputs, build the settings, refuse outputs that would land
- * on an input, analyse each drawing (a bad drawing among several is reported on stderr and the
- * others go on), print the summary, write the requested reports, and work out the exit code.
+ * on a file the run reads, analyse each drawing (a bad drawing among several is reported on
+ * stderr and the others are still read, so that every bad one is named), write the requested
+ * reports, print the summary, and work out the exit code. A run that fails (exit 2: a drawing
+ * refused, a report that cannot be written) writes no report in any format: the reports are
+ * written to temporaries first and moved into place only when all of them succeeded.
  */
 final class CheckRun {
 
@@ -45,6 +48,7 @@ final class CheckRun {
 
     /** Runs and returns the exit code; single-drawing input errors propagate as exceptions (exit 2). */
     int run(List<Path> args) throws InputProblem, AnalysisException, DxfInputException, IOException {
+        ReportFiles.removeStale(outputs.targets());
         List<Path> files = InputFiles.collect(args);
         long toStdout = outputs.targets().stream().filter(OutputOptions.STDOUT::equals).count();
         if (toStdout > 1) {
@@ -66,7 +70,11 @@ final class CheckRun {
         for (String t : outputs.targets()) {
             boolean folder = t.equals(outputs.markupDxf) && (files.size() > 1 || Files.isDirectory(Path.of(t)));
             if (folder) {
-                continue; // a folder of marked-up copies: each file is guarded when it is written
+                // a folder of marked-up copies: each file is guarded when it is written
+                if (Files.isDirectory(Path.of(t))) {
+                    org.linemass.reports.io.AtomicWrite.removeStale(Path.of(t));
+                }
+                continue;
             }
             org.linemass.reports.io.OutputPath p = sink.guard(t);
             if (p != null && !seen.add(p.resolved())) {
@@ -98,34 +106,50 @@ final class CheckRun {
         if (reports.isEmpty()) {
             throw new InputProblem("none of the " + files.size() + " drawings could be read");
         }
+        if (badInput) {
+            // a run that fails writes no report, in any format (README, "Output files")
+            int bad = files.size() - reports.size();
+            throw new InputProblem("no report written: " + bad + " of the " + files.size() + " drawings could not "
+                    + "be read (see above); correct them or leave them out");
+        }
         UnitSystem units = common.units();
+        List<String> marked = new ArrayList<>();
+        try {
+            sink.text(outputs.json, reports, JsonReportWriter::write);
+            sink.text(outputs.bomCsv, reports, (r, w) -> BomCsvWriter.write(r, units, w), true);
+            sink.text(outputs.piecesCsv, reports, (r, w) -> PiecesCsvWriter.write(r, units, w), true);
+            sink.text(outputs.findingsCsv, reports, (r, w) -> FindingsCsvWriter.write(r, units, w), true);
+            if (outputs.xlsx != null) {
+                List<XlsxSheet> sheets = CheckSheets.of(reports, units);
+                sink.bytes(Path.of(outputs.xlsx), os -> XlsxWorkbook.write(sheets, os));
+            }
+            sink.text(outputs.html, reports, (r, w) -> new HtmlReportWriter(units).write(r, w));
+            if (outputs.markupDxf != null) {
+                marked = markup(sink, reports, analysed);
+            }
+        } catch (IOException | RuntimeException | Error e) {
+            sink.discard();
+            throw e;
+        }
+        sink.commit();
         if (!outputs.usesStdout()) {
             new ConsoleReport(units, ctx.terminal(), common.quiet, common.listNotes).print(reports, ctx.out());
+            if (!common.quiet) {
+                marked.forEach(m -> ctx.out().println("marked-up drawing: " + m));
+            }
         }
-        sink.text(outputs.json, reports, JsonReportWriter::write);
-        sink.text(outputs.bomCsv, reports, (r, w) -> BomCsvWriter.write(r, units, w), true);
-        sink.text(outputs.piecesCsv, reports, (r, w) -> PiecesCsvWriter.write(r, units, w), true);
-        sink.text(outputs.findingsCsv, reports, (r, w) -> FindingsCsvWriter.write(r, units, w), true);
-        if (outputs.xlsx != null) {
-            List<XlsxSheet> sheets = CheckSheets.of(reports, units);
-            sink.bytes(Path.of(outputs.xlsx), os -> XlsxWorkbook.write(sheets, os));
-        }
-        sink.text(outputs.html, reports, (r, w) -> new HtmlReportWriter(units).write(r, w));
-        if (outputs.markupDxf != null) {
-            markup(sink, reports, analysed);
-        }
-        if (badInput) {
-            return ExitCodes.BAD_INPUT;
-        }
+        ctx.out().flush();
         List<Finding> all = new ArrayList<>();
         reports.forEach(r -> all.addAll(r.result().findings()));
         return outputs.failAt.tripped(all) ? ExitCodes.FINDINGS : ExitCodes.OK;
     }
 
-    private void markup(ReportFiles sink, List<Report> reports, List<Path> analysed) throws IOException {
+    /** Writes the marked-up copies (staged in {@code sink}); returns their paths for the summary. */
+    private List<String> markup(ReportFiles sink, List<Report> reports, List<Path> analysed) throws IOException {
         Path target = Path.of(outputs.markupDxf);
         boolean folder = reports.size() > 1 || Files.isDirectory(target);
         java.util.Set<String> used = new java.util.HashSet<>();
+        List<String> written = new ArrayList<>();
         for (int i = 0; i < reports.size(); i++) {
             Path in = analysed.get(i);
             Path out = target;
@@ -139,11 +163,9 @@ final class CheckRun {
             byte[] original = Files.readAllBytes(in);
             Report r = reports.get(i);
             sink.bytes(out, os -> DxfMarkupWriter.write(original, r.result(), os));
-            if (!common.quiet && !outputs.usesStdout()) {
-                ctx.out().println("marked-up drawing: " + out);
-            }
+            written.add(out.toString());
         }
-        ctx.out().flush();
+        return written;
     }
 
     /** {@code name.dxf} becomes {@code name-findings.dxf} (a second drawing of the same name gets {@code -2}, ...). */

@@ -152,14 +152,19 @@ class CheckCommandTest {
     }
 
     @Test
-    void check_folderWithOneBadDrawing_reportsOthersAndExits2() throws IOException {
+    void check_folderWithOneBadDrawing_namesItExits2AndWritesNoReport() throws IOException {
         file("mix/a.dxf");
         file("mix/bad.dxf");
         file("mix/c.dxf");
-        Run r = check(dir.resolve("mix").toString());
+        Path json = dir.resolve("r.json");
+        Run r = check(dir.resolve("mix").toString(), "--json", json.toString());
         assertEquals(2, r.code());
         assertTrue(r.err().contains("bad.dxf:17"), r.err());
-        assertTrue(r.out().contains("All 2 drawings together"), r.out());
+        assertTrue(r.err().strip().endsWith("linemass: no report written: 1 of the 3 drawings could not be read "
+                + "(see above); correct them or leave them out"), r.err());
+        assertEquals(3, pipeline.seen.size(), "the others are still read, so every bad drawing is named");
+        assertEquals("", r.out(), "a run that fails prints no summary either");
+        assertFalse(Files.exists(json));
     }
 
     @Test

@@ -114,4 +114,45 @@ class HostilePathsTest {
             assertEquals(0, s.filter(p -> p.toString().endsWith(".part")).count());
         }
     }
+
+    @Test
+    void runThatFailsWritingOneReport_writesNoneAndKeepsTheOldOnes() throws IOException {
+        // the marked-up copy is refused (binary DXF); the JSON and HTML before it must not appear
+        Path binary = Files.write(dir.resolve("job/bin.dxf"), "AutoCAD Binary DXF\r\n\u001a\u0000".getBytes(
+                java.nio.charset.StandardCharsets.ISO_8859_1));
+        Path json = Files.writeString(dir.resolve("job/r.json"), "old json");
+        Path html = dir.resolve("job/r.html");
+        Run r = check("--json", json.toString(), "--html", html.toString(), "--markup-dxf",
+                dir.resolve("job/m.dxf").toString(), binary.toString());
+        assertEquals(2, r.code(), r.err());
+        assertTrue(r.err().contains("can only be written for ASCII DXF"), r.err());
+        assertEquals("old json", Files.readString(json));
+        assertTrue(Files.notExists(html));
+        assertTrue(Files.notExists(dir.resolve("job/m.dxf")));
+        assertEquals("", r.out());
+        try (Stream<Path> s = Files.list(dir.resolve("job"))) {
+            assertEquals(0, s.filter(p -> p.toString().endsWith(".part")).count());
+        }
+    }
+
+    @Test
+    void temporaryOfAKilledRun_removedAtStartUpEvenWhenThisRunFails() throws IOException {
+        Path stale = Files.writeString(dir.resolve("job/.r.json.linemass-" + endedProcess() + "-77.part"), "half");
+        Run r = check("--json", dir.resolve("job/r.json").toString(), dir.resolve("job/missing.dxf").toString());
+        assertEquals(2, r.code());
+        // the input is missing, so nothing is written; the killed run's temporary is gone all the same
+        assertTrue(Files.notExists(stale), "stale temporary removed at start-up");
+    }
+
+    private static long endedProcess() throws IOException {
+        Process p = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-version")
+                .redirectErrorStream(true).start();
+        p.getInputStream().readAllBytes();
+        try {
+            p.waitFor();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+        return p.pid();
+    }
 }

@@ -50,6 +50,65 @@ public final class AtomicWrite {
 
     /** Writes {@code content} to {@code target} atomically; creates missing parent folders. */
     public static void write(OutputPath target, Content content) throws IOException {
+        prepare(target, content).commit();
+    }
+
+    /**
+     * A file written to its temporary and forced to disk, not yet moved into place: {@link #commit}
+     * moves it over the target, {@link #discard} deletes it. Lets a run write all its reports
+     * first and put them in place only when every one of them succeeded.
+     */
+    public static final class Staged {
+        private final OutputPath target;
+        private final Path tmp;
+        private boolean done;
+
+        private Staged(OutputPath target, Path tmp) {
+            this.target = target;
+            this.tmp = tmp;
+        }
+
+        public OutputPath target() {
+            return target;
+        }
+
+        /** Moves the temporary over the target. */
+        public void commit() throws IOException {
+            if (done) {
+                throw new IllegalStateException("already committed or discarded: " + target);
+            }
+            done = true;
+            try {
+                try {
+                    Files.move(tmp, target.resolved(), StandardCopyOption.ATOMIC_MOVE);
+                } catch (AtomicMoveNotSupportedException e) {
+                    Files.move(tmp, target.resolved(), StandardCopyOption.REPLACE_EXISTING);
+                }
+            } catch (IOException e) {
+                Files.deleteIfExists(tmp);
+                throw failure(target, e);
+            }
+        }
+
+        /** Deletes the temporary; the target stays as it was. Never throws. */
+        public void discard() {
+            if (!done) {
+                done = true;
+                try {
+                    Files.deleteIfExists(tmp);
+                } catch (IOException e) {
+                    // a later run removes it (removeStale)
+                }
+            }
+        }
+    }
+
+    /**
+     * Writes {@code content} to a temporary beside {@code target} and forces it to disk; the
+     * target is not touched until {@link Staged#commit}. When writing fails the temporary is
+     * deleted and the exception propagates.
+     */
+    public static Staged prepare(OutputPath target, Content content) throws IOException {
         Path abs = target.resolved();
         Path dir = abs.getParent();
         Path tmp;
@@ -61,7 +120,7 @@ public final class AtomicWrite {
         } catch (IOException e) {
             throw failure(target, e);
         }
-        boolean moved = false;
+        boolean written = false;
         try {
             try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
                 OutputStream out = Channels.newOutputStream(ch);
@@ -76,18 +135,10 @@ public final class AtomicWrite {
                 }
                 throw e;
             }
-            try {
-                try {
-                    Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE);
-                } catch (AtomicMoveNotSupportedException e) {
-                    Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
-                }
-            } catch (IOException e) {
-                throw failure(target, e);
-            }
-            moved = true;
+            written = true;
+            return new Staged(target, tmp);
         } finally {
-            if (!moved) {
+            if (!written) {
                 Files.deleteIfExists(tmp);
             }
         }
