@@ -21,10 +21,53 @@ public record PrincipalAxes(double[] moments, Vec3[] axes) {
         axes = axes.clone();
     }
 
-    /** The principal moments and axes of a symmetric tensor. */
+    /**
+     * The principal moments and axes of a symmetric tensor.
+     *
+     * @throws IllegalArgumentException when an entry is not finite or the decomposition does not
+     *         converge (see {@link #tryOf})
+     */
     public static PrincipalAxes of(Sym3 tensor) {
-        EigenDecomposition e = new EigenDecomposition(new Array2DRowRealMatrix(tensor.toMatrix()));
-        double[] values = e.getRealEigenvalues();
+        return tryOf(tensor).orElseThrow(() -> new IllegalArgumentException(
+                "principal axes of a tensor with non-finite entries or too far out of scale: " + tensor));
+    }
+
+    /**
+     * The principal moments and axes, or empty when an entry is not finite or the iteration does
+     * not converge. The tensor is divided by its largest entry before the decomposition and the
+     * moments multiplied back, so tensors of any magnitude (up to 1e300, as placed copies of
+     * huge drawings give) converge like tensors of order one.
+     */
+    public static java.util.Optional<PrincipalAxes> tryOf(Sym3 tensor) {
+        double[][] m = tensor.toMatrix();
+        double scale = 0;
+        for (double[] row : m) {
+            for (double x : row) {
+                if (!Double.isFinite(x)) {
+                    return java.util.Optional.empty();
+                }
+                scale = Math.max(scale, Math.abs(x));
+            }
+        }
+        if (scale > 0) {
+            for (double[] row : m) {
+                for (int j = 0; j < row.length; j++) {
+                    row[j] /= scale;
+                }
+            }
+        } else {
+            scale = 1;
+        }
+        EigenDecomposition e;
+        try {
+            e = new EigenDecomposition(new Array2DRowRealMatrix(m));
+        } catch (org.apache.commons.math3.exception.MathIllegalStateException ex) {
+            return java.util.Optional.empty();
+        }
+        double[] values = e.getRealEigenvalues().clone();
+        for (int k = 0; k < values.length; k++) {
+            values[k] *= scale;
+        }
         Integer[] order = {0, 1, 2};
         java.util.Arrays.sort(order, (a, b) -> Double.compare(values[a], values[b]));
         double[] sorted = new double[3];
@@ -35,7 +78,12 @@ public record PrincipalAxes(double[] moments, Vec3[] axes) {
             axes[k] = new Vec3(v.getEntry(0), v.getEntry(1), v.getEntry(2)).unit();
         }
         axes[2] = axes[0].cross(axes[1]).unit();
-        return new PrincipalAxes(sorted, axes);
+        for (int k = 0; k < 3; k++) {
+            if (!Double.isFinite(sorted[k]) || !axes[k].isFinite()) {
+                return java.util.Optional.empty();
+            }
+        }
+        return java.util.Optional.of(new PrincipalAxes(sorted, axes));
     }
 
     /** Radii of gyration {@code sqrt(I_k / mass)} for the principal moments (metres). */

@@ -27,7 +27,10 @@ import org.linemass.geometry.Vec3;
  * of gravity (or the length centroid without mass) gets a CIRCLE, two LINEs and the TEXT "CG"; a
  * drawing read incompletely gets one more TEXT saying so. Sizes are 1 % of the drawing's extent.
  * Coordinates are converted back from metres to drawing units. Files from R13 on get subclass
- * markers; R12 files get the plain R12 form. Binary DXF is refused (IOException).
+ * markers; R12 files get the plain R12 form. Binary DXF is refused (IOException), and so is a
+ * drawing whose group pairs are out of step before its 0/EOF (a code line that is not a number,
+ * an unpaired last line, no EOF): the message names the line. Anything after 0/EOF is not copied,
+ * so the copy always has whole pairs and ends with 0/EOF.
  */
 public final class DxfMarkupWriter {
 
@@ -53,9 +56,28 @@ public final class DxfMarkupWriter {
                     + "this file is binary DXF");
         }
         String eol = text.contains("\r\n") ? "\r\n" : "\n";
-        DxfLayout layout = DxfLayout.of(DxfPairScanner.scan(text));
+        List<DxfPairScanner.Pair> pairs = DxfPairScanner.scan(text);
+        int eof = -1;
+        for (int i = 0; i < pairs.size() && eof < 0; i++) {
+            if (pairs.get(i).code() == 0 && pairs.get(i).value().equals("EOF")) {
+                eof = i;
+            }
+        }
+        if (eof < 0) {
+            // the pairs are out of step (a code line that is not a number, an unpaired last line) or
+            // the file has no 0/EOF: a copy would carry the break into every reader
+            int at = pairs.isEmpty() ? 0 : end(text, pairs.get(pairs.size() - 1));
+            throw new IOException(result.drawing().file() + ":" + lineOf(text, at) + ": cannot write a marked-up "
+                    + "copy: the group pairs of the drawing are out of step from here on, or it does not end with 0/EOF");
+        }
+        DxfPairScanner.Pair last = pairs.get(eof);
+        // everything after 0/EOF is ignored by readers and is not copied: the copy ends with the EOF line
+        int copyEnd = end(text, last);
+        boolean addEol = copyEnd == 0 || text.charAt(copyEnd - 1) != '\n';
+        DxfLayout layout = DxfLayout.of(pairs.subList(0, eof + 1));
         if (layout.entitiesEnd < 0) {
-            throw new IOException(result.drawing().file() + ": no ENTITIES section to add the markup to");
+            throw new IOException(result.drawing().file() + ":" + lineOf(text, last.offset()) + ": no ENTITIES section "
+                    + "before the end of the drawing to add the markup to");
         }
         String layer = LAYER;
         for (int i = 2; layout.layerNames.contains(layer.toUpperCase(Locale.ROOT)); i++) {
@@ -117,8 +139,34 @@ public final class DxfMarkupWriter {
             out.write(s.text.getBytes(StandardCharsets.ISO_8859_1));
             pos = s.offset + s.remove;
         }
-        out.write(original, pos, original.length - pos);
+        out.write(original, pos, copyEnd - pos);
+        if (addEol) {
+            out.write(eol.getBytes(StandardCharsets.ISO_8859_1));
+        }
         out.flush();
+    }
+
+    /** Offset just past the value line of {@code p}, with its line end. */
+    private static int end(String text, DxfPairScanner.Pair p) {
+        int e = p.valueOffset() + p.valueLength();
+        if (e < text.length() && text.charAt(e) == '\r') {
+            e++;
+        }
+        if (e < text.length() && text.charAt(e) == '\n') {
+            e++;
+        }
+        return e;
+    }
+
+    /** The 1-based line number of the character at {@code offset}. */
+    private static int lineOf(String text, int offset) {
+        int line = 1;
+        for (int i = 0; i < offset && i < text.length(); i++) {
+            if (text.charAt(i) == '\n') {
+                line++;
+            }
+        }
+        return line;
     }
 
     private static double markerSize(DrawingResult r) {

@@ -220,16 +220,19 @@ public final class JsonReportWriter {
 
     /**
      * Principal moments of inertia (ascending), their unit axes (one per moment, right-handed) and
-     * the radii of gyration {@code sqrt(I_k / m)}; all null when the mass is not known.
+     * the radii of gyration {@code sqrt(I_k / m)}; all null when the mass is not known or the inertia is not finite.
      */
     private static void principal(JsonGenerator g, Double massKg, Sym3 inertia) throws IOException {
-        if (massKg == null || !(massKg > 0) || inertia == null) {
+        java.util.Optional<PrincipalAxes> axes = massKg == null || !(massKg > 0) || inertia == null
+                ? java.util.Optional.empty() : PrincipalAxes.tryOf(inertia);
+        if (axes.isEmpty()) {
+            // no mass, or an inertia out of range (non-finite entries): no principal axes to give
             g.writeNullField("principal_moments_kg_m2");
             g.writeNullField("principal_axes");
             g.writeNullField("radii_of_gyration_m");
             return;
         }
-        PrincipalAxes p = PrincipalAxes.of(inertia);
+        PrincipalAxes p = axes.get();
         g.writeArrayFieldStart("principal_moments_kg_m2");
         for (double m : p.moments()) {
             number(g, m);
