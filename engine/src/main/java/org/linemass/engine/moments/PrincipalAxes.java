@@ -34,9 +34,9 @@ public record PrincipalAxes(double[] moments, Vec3[] axes) {
 
     /**
      * The principal moments and axes, or empty when an entry is not finite or the iteration does
-     * not converge. The tensor is divided by its largest entry before the decomposition and the
-     * moments multiplied back, so tensors of any magnitude (up to 1e300, as placed copies of
-     * huge drawings give) converge like tensors of order one.
+     * not converge. When the iteration does not converge on the tensor as given (entries near the
+     * double range, as placed copies of huge drawings give), it is tried once more on the tensor
+     * divided by its largest entry and the moments multiplied back.
      */
     public static java.util.Optional<PrincipalAxes> tryOf(Sym3 tensor) {
         double[][] m = tensor.toMatrix();
@@ -49,19 +49,19 @@ public record PrincipalAxes(double[] moments, Vec3[] axes) {
                 scale = Math.max(scale, Math.abs(x));
             }
         }
-        if (scale > 0) {
+        EigenDecomposition e = decompose(m);
+        if (e == null && scale > 0) {
+            // out of scale for the iteration: decompose the tensor divided by its largest entry
             for (double[] row : m) {
                 for (int j = 0; j < row.length; j++) {
                     row[j] /= scale;
                 }
             }
+            e = decompose(m);
         } else {
             scale = 1;
         }
-        EigenDecomposition e;
-        try {
-            e = new EigenDecomposition(new Array2DRowRealMatrix(m));
-        } catch (org.apache.commons.math3.exception.MathIllegalStateException ex) {
+        if (e == null) {
             return java.util.Optional.empty();
         }
         double[] values = e.getRealEigenvalues().clone();
@@ -84,6 +84,14 @@ public record PrincipalAxes(double[] moments, Vec3[] axes) {
             }
         }
         return java.util.Optional.of(new PrincipalAxes(sorted, axes));
+    }
+
+    private static EigenDecomposition decompose(double[][] m) {
+        try {
+            return new EigenDecomposition(new Array2DRowRealMatrix(m));
+        } catch (org.apache.commons.math3.exception.MathIllegalStateException ex) {
+            return null;
+        }
     }
 
     /** Radii of gyration {@code sqrt(I_k / mass)} for the principal moments (metres). */
