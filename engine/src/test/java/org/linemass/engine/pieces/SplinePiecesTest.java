@@ -15,8 +15,8 @@ import org.linemass.geometry.Vec3;
 /**
  * Pieces with splines: a hanger hook made of a straight shank and a rational quadratic quarter
  * circle (The NURBS Book, example 7.1: weights 1, sqrt(2)/2, 1), copied rigidly. The spline
- * joins the straight tangentially, so the piece has no sharp corner and no arc bend (splines are
- * shaped curves, not bends).
+ * joins the straight tangentially, so the piece has no sharp corner; the spline is one bend of 90
+ * degrees with the circle's radius (a bend is a change of direction through any curved run).
  */
 class SplinePiecesTest {
 
@@ -32,7 +32,7 @@ class SplinePiecesTest {
     }
 
     @Test
-    void shankAndSplineHook_isOnePieceWithoutBends_andCopiesShareAMark() {
+    void shankAndSplineHook_isOnePieceWithOneBend_andCopiesShareAMark() {
         List<Segment> all = new ArrayList<>(hanger(10));
         all.addAll(Shapes.traced(Shapes.moved(hanger(11), Affine.rotationZ(2.0)
                 .andThen(Affine.translation(new Vec3(1, 1, 0))))));
@@ -40,7 +40,12 @@ class SplinePiecesTest {
         assertEquals(2, r.pieces().size());
         for (Piece p : r.pieces()) {
             assertEquals(2, p.segments().size());
-            assertEquals(List.of(), p.bends());
+            // the exact rational quarter circle: 90 degrees and radius r; the angle is a sum of angles
+            // between sampled tangents (exact in a plane up to rounding), the radius |C'|^3/|C' x C''|
+            // at samples of an exact circle, so both agree to rounding (1e-9 relative is ample)
+            assertEquals(1, p.bends().size());
+            assertEquals(90.0, p.bends().get(0).angleDeg(), 1e-7);
+            assertEquals(0.03, p.bends().get(0).centreRadiusM(), 0.03 * 1e-9);
         }
         assertEquals(List.of(), r.findings());
         assertEquals(1, r.groups().size());
