@@ -10,7 +10,7 @@ import java.util.List;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.linemass.drawing.Drawing;
-import org.linemass.engine.AnalysisSettings;
+import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.Analyzer;
 import org.linemass.engine.pieces.Piece;
 import org.linemass.engine.pieces.PieceAnalysis;
