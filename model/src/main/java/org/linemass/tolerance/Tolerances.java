@@ -52,9 +52,18 @@ public record Tolerances(double joinM, double gapLimitM, double noiseM, double g
      */
     public static void requireGapCoversJoin(double gapLimitM, double joinM) {
         if (gapLimitM < joinM) {
-            throw new IllegalArgumentException("gap limit " + gapLimitM + " m is below the join tolerance "
-                    + joinM + " m");
+            throw new IllegalArgumentException("gap limit " + millimetres(gapLimitM) + " is below the join tolerance "
+                    + millimetres(joinM));
         }
+    }
+
+    /** A length for messages in millimetres, the unit these tolerances are typed in: "0.01 mm", not "1.0E-5 m". */
+    static String millimetres(double metres) {
+        if (!Double.isFinite(metres)) {
+            return metres + " m";
+        }
+        return new java.math.BigDecimal(metres * 1000).round(new java.math.MathContext(6)).stripTrailingZeros()
+                .toPlainString() + " mm";
     }
 
     /** Default relative integration error target (dimensionless). */

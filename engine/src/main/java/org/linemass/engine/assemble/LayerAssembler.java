@@ -83,7 +83,7 @@ public final class LayerAssembler {
                 if (!mat.hasMass()) {
                     findings.add(new Finding(FindingKind.NO_SECTION, Severity.WARNING, length.centroid(), null, name,
                             List.of(), null, String.format(Locale.ROOT,
-                                    "layer %s has %.6g m of wire but no section, so its mass is not known", name,
+                                    "layer %s has %.3f m of wire but no section, so its mass is not known", name,
                                     length.mass())));
                 }
             }

@@ -281,7 +281,8 @@ class AnalyzerTest {
                 () -> new AnalysisSettings(java.util.Optional.of(0.01), java.util.Optional.of(0.001),
                         s.groupM(), s.integrationRelative(), false, List.of(), List.of(), false, s.sections(),
                         List.of(), Map.of(), s.maxExpandedSegments()));
-        assertTrue(e.getMessage().contains("gap limit 0.001 m is below the join tolerance 0.01 m"), e.getMessage());
+        // in millimetres, the unit these tolerances are typed in, not "0.001 m" or "1.0E-3 m"
+        assertTrue(e.getMessage().contains("gap limit 1 mm is below the join tolerance 10 mm"), e.getMessage());
         assertThrows(IllegalArgumentException.class, () -> new AnalysisSettings(s.joinM(), s.gapLimitM(),
                 s.groupM(), -1, false, List.of(), List.of(), false, s.sections(), List.of(), Map.of(),
                 s.maxExpandedSegments()));

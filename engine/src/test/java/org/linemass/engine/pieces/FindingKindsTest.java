@@ -156,6 +156,9 @@ class FindingKindsTest {
         assertEquals(1, s.size());
         assertEquals(Severity.WARNING, s.get(0).severity());
         assertTrue(s.get(0).atM().distance(Fixtures.mm(50, 50)) < 1e-15);
+        // the two diagonals are different entities: the message names the other one, never "itself at itself"
+        String m = s.get(0).message();
+        assertTrue(m.contains("crosses itself where it passes"), m);
         assertEquals(List.of(), of(r, FindingKind.CROSSING));
     }
 

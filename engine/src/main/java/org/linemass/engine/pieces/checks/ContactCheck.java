@@ -154,12 +154,17 @@ public final class ContactCheck {
             Severity sev = Severity.INFO;
             switch (h.kind()) {
                 case FindingKind.T_JUNCTION -> message = "The end of " + pa.describe() + " touches "
-                        + pb.describe() + " away from its ends (a T-junction; a weld in welded mesh)." + totals;
+                        + pb.describe() + " away from its ends: a T-junction, counted as one weld or fixing where the "
+                        + "two are joined." + totals;
                 case FindingKind.CROSSING -> message = pa.describe() + " and " + pb.describe()
-                        + " cross without a shared vertex (a weld in welded mesh)." + totals;
+                        + " cross without a shared vertex: a crossing, counted as one weld or fixing where the two "
+                        + "are joined." + totals;
                 default -> {
                     sev = Severity.WARNING;
-                    message = "The piece through " + pa.describe() + " crosses itself at " + pb.describe() + ".";
+                    message = pa.describe().equals(pb.describe())
+                            ? "The piece through " + pa.describe() + " crosses its own path within that entity."
+                            : "The piece through " + pa.describe() + " crosses itself where it passes " + pb.describe()
+                                    + ".";
                 }
             }
             out.add(Findings.of(h.kind(), sev, h.at(), null, pa.layer(), List.of(pa, pb), null, message));
