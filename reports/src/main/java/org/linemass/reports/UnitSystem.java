@@ -124,9 +124,20 @@ public enum UnitSystem {
         return metres == null ? "" : fixed(metres / shortM, shortDecimals + 2);
     }
 
-    /** A mass in kilograms shown in the mass unit, fixed decimals; empty text for null. */
+    /**
+     * A mass in kilograms shown in the mass unit: fixed decimals, or {@value #SMALL_DIGITS}
+     * significant digits when below {@value #SMALL} of the unit, so a 2 g clip reads "0.00216" in
+     * every table and report, never "0.002" in one and "0.00216" in another. Empty text for null.
+     */
     public String mass(Double kg) {
-        return kg == null ? "" : fixed(kg / massKg, massDecimals);
+        if (kg == null) {
+            return "";
+        }
+        double v = kg / massKg;
+        if (v == 0 || Math.abs(v) >= SMALL || !Double.isFinite(v)) {
+            return fixed(v, massDecimals);
+        }
+        return new BigDecimal(v).round(new MathContext(SMALL_DIGITS)).toPlainString();
     }
 
     /**
@@ -142,19 +153,9 @@ public enum UnitSystem {
         return v > 0 && v < SMALL ? s + " (" + shortLength(metres) + " " + shortUnit + ")" : s;
     }
 
-    /**
-     * A mass in the mass unit: fixed decimals, or {@value #SMALL_DIGITS} significant digits when
-     * below {@value #SMALL} of the unit, so a wire clip does not read "0.000". Empty text for null.
-     */
+    /** The same text as {@link #mass}: every mass is shown one way. */
     public String massReadable(Double kg) {
-        if (kg == null) {
-            return "";
-        }
-        double v = kg / massKg;
-        if (v == 0 || Math.abs(v) >= SMALL || !Double.isFinite(v)) {
-            return mass(kg);
-        }
-        return new BigDecimal(v).round(new MathContext(SMALL_DIGITS)).toPlainString();
+        return mass(kg);
     }
 
     /** A number with a fixed count of decimals, Locale.ROOT, no grouping; "-0.000" shown as "0.000". */

@@ -51,6 +51,17 @@ class UnitSystemTest {
     }
 
     @Test
+    void mass_isShownOneWayEverywhere() {
+        // a 2.16 g clip (demo drawing, 38.8 mm of 3 mm wire, testdata/demo/README.md): the same text in
+        // every table, never "0.002" in the bill and "0.00216" in the summary
+        assertEquals("0.00216", UnitSystem.METRIC.mass(0.002157));
+        assertEquals(UnitSystem.METRIC.massReadable(0.002157), UnitSystem.METRIC.mass(0.002157));
+        assertEquals("0.594", UnitSystem.METRIC.mass(0.5941));
+        // 1 lb = 0.45359237 kg exactly (FACTS.md section 0.1): 2.157 g = 0.00476 lb
+        assertEquals("0.00476", UnitSystem.IMPERIAL.mass(0.002157));
+    }
+
+    @Test
     void extraDecimals_growForSmallDrawings() {
         // 7 m of wire: the usual 3 decimals (1 mm); 6.3 mm of wire: 3 more (1 micrometre)
         assertEquals(0, UnitSystem.METRIC.extraDecimalsFor(7.0));
