@@ -97,6 +97,12 @@ final class CurvedRun {
         double minRadius = Double.POSITIVE_INFINITY;
         boolean allArcs = true;
         double sweep = 0;
+        boolean arcsOnly = group.stream().allMatch(e -> e.segment() instanceof CircularArc);
+        double arcSweep = group.stream().mapToDouble(e -> e.t1() - e.t0()).sum();
+        if (arcsOnly && !ring && arcSweep <= Math.PI) {
+            // arcs of one circle turning less than half a turn: exact, no samples needed
+            return arcBend(group, length, who, arcSweep);
+        }
         for (Element e : group) {
             int m = e.samples();
             if (e.segment() instanceof CircularArc arc) {
@@ -170,6 +176,14 @@ final class CurvedRun {
         Double circle = allArcs ? ((CircularArc) first.segment()).radius() : null;
         Vec3 middle = allArcs ? arcMiddle(group) : sampledMiddle(pts);
         return new FormRun.Turn(start, end, middle, angle, axis, tin, tout, length, circle, minRadius, planar, who);
+    }
+
+    private static FormRun.Turn arcBend(List<Element> group, double length, List<Provenance> who, double sweep) {
+        Element first = group.get(0);
+        Element last = group.get(group.size() - 1);
+        CircularArc arc = (CircularArc) first.segment();
+        return new FormRun.Turn(first.start(), last.end(), arcMiddle(group), sweep, arc.normal().unit(),
+                first.startTangent(), last.endTangent(), length, arc.radius(), arc.radius(), true, who);
     }
 
     /** The point half way along arcs of one circle (exact). */

@@ -17,6 +17,7 @@ import org.linemass.engine.pieces.PieceAnalysis;
 import org.linemass.engine.pieces.PieceAnalyzer;
 import org.linemass.engine.section.BuiltInSections;
 import org.linemass.engine.testing.SharedDir;
+import org.linemass.geometry.Vec3;
 import org.linemass.importer.DxfImporter;
 import org.linemass.importer.ImportOptions;
 
@@ -107,6 +108,34 @@ class CorpusBendsTest {
         }
         assertTrue(sawCoil);
         assertEquals(2, rings);
+    }
+
+    /**
+     * Every corpus piece whose bender data is exact (straights, circular arcs, sharp corners in one
+     * plane each) rebuilds from it: length equal to 1e-9 relative, end point within 1e-9 of the piece's
+     * size (the bound the issue sets; rounding is about 1e-15).
+     */
+    @Test
+    void corpusPieces_rebuildFromTheirBenderData() throws Exception {
+        int rebuilt = 0;
+        for (String name : List.of("v03_tubular_handrail_lwpoly_r2018_mm.dxf", "v07_rebar_cage_blocks_r2000_mm.dxf",
+                "v09_tube_chair_frame_r2018_in.dxf", "v02_garden_trellis_arcs_r2000_mm.dxf",
+                "v04_garden_gate_r12.dxf")) {
+            for (Piece p : pieces(name)) {
+                PieceForm form = PieceForms.of(p.segments(), p.closed(), Math.toRadians(0.01), 1e-5);
+                if (!form.program().exact() || !form.coils().isEmpty()) {
+                    continue;
+                }
+                BenderReplay.Rebuilt r = BenderReplay.replay(form.program()).orElseThrow();
+                double drawn = p.segments().stream().mapToDouble(org.linemass.engine.pieces.geom.Curves::length).sum();
+                double size = Math.max(drawn, 1e-3);
+                assertEquals(drawn, r.lengthM(), 1e-9 * drawn, name + " piece at " + p.segments().get(0).start());
+                Vec3 end = p.segments().get(p.segments().size() - 1).end();
+                assertTrue(r.endM().distance(end) <= 1e-9 * size, name + " end " + r.endM() + " vs " + end);
+                rebuilt++;
+            }
+        }
+        assertTrue(rebuilt > 50, "pieces rebuilt: " + rebuilt);
     }
 
     @Test
