@@ -106,9 +106,22 @@ public final class DrawingOptions {
      * command-line rules after them (so the command line wins).
      */
     AnalysisSettings settings(SectionCatalog catalog) throws AnalysisException, InputProblem {
+        return settings(catalog, null, List.of());
+    }
+
+    /**
+     * As {@link #settings(SectionCatalog)}, with the rows of {@code extraTable} (may be null) over
+     * all other sections and {@code extraRules} after all other rules (so they win): the sections and
+     * picks a user of the local page adds on top of the options the server was started with.
+     */
+    AnalysisSettings settings(SectionCatalog catalog, SectionTable extraTable, List<LayerAssignment> extraRules)
+            throws AnalysisException, InputProblem {
         SectionTable table = catalog.builtIn();
         if (sectionTable != null) {
             table = table.overriddenBy(catalog.readTable(sectionTable));
+        }
+        if (extraTable != null) {
+            table = table.overriddenBy(extraTable);
         }
         List<LayerAssignment> rules = new ArrayList<>();
         for (Path p : assignFiles) {
@@ -117,6 +130,7 @@ public final class DrawingOptions {
         for (String a : assign) {
             rules.add(parseAssignment(a));
         }
+        rules.addAll(extraRules);
         java.util.Map<String, String> densities = densities();
         long expansionLimit = checkedExpansionLimit();
         try {

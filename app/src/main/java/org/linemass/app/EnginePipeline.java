@@ -24,20 +24,42 @@ import org.linemass.reports.Report;
  */
 public final class EnginePipeline implements DrawingPipeline {
 
+    /** Told when the engine moves from one stage to the next; may throw to stop the run there. */
+    @FunctionalInterface
+    public interface StageWatch {
+        /** {@code stage} is a few words for a person ("joining and checking pieces"). */
+        void entering(String stage);
+
+        /** A watch that does nothing. */
+        StageWatch NONE = stage -> { };
+    }
+
     @Override
     public Report analyse(Path file, ImportOptions importOptions, AnalysisSettings settings)
             throws DxfInputException, AnalysisException {
         try {
             Drawing drawing = DxfImporter.read(file, importOptions);
-            List<Piece> kept = new ArrayList<>();
-            DrawingResult result = Analyzer.analyze(drawing, settings, (world, tol, lookup, mirror) -> {
-                PieceAnalysis pa = PieceAnalyzer.analyze(world, tol, lookup, mirror);
-                kept.addAll(pa.pieces());
-                return pa;
-            });
-            return new Report(result, PieceShapes.of(result, kept));
+            return report(drawing, settings, StageWatch.NONE);
         } catch (OutOfMemoryError | StackOverflowError e) {
             throw OutOfResources.of(file, e);
         }
+    }
+
+    /**
+     * Runs only the engine on an already imported drawing (new sections or assignments need no
+     * second reading of the file), telling {@code watch} before the piece stage and after it.
+     */
+    public static Report report(Drawing drawing, AnalysisSettings settings, StageWatch watch)
+            throws AnalysisException {
+        List<Piece> kept = new ArrayList<>();
+        watch.entering("expanding blocks and adding up layers");
+        DrawingResult result = Analyzer.analyze(drawing, settings, (world, tol, lookup, mirror) -> {
+            watch.entering("joining and checking pieces");
+            PieceAnalysis pa = PieceAnalyzer.analyze(world, tol, lookup, mirror);
+            kept.addAll(pa.pieces());
+            watch.entering("grouping marks and writing totals");
+            return pa;
+        });
+        return new Report(result, PieceShapes.of(result, kept));
     }
 }

@@ -93,6 +93,38 @@ public final class HtmlReportWriter {
                 + "and the section data; not for lifting or structural decisions on their own. "
                 + "<a href=\"#caution\">Read the caution</a>.</p>\n");
 
+        picture(s, report, ids);
+        tables.bom(s, r);
+        tables.layers(s, r);
+        tables.findings(s, r, ids);
+        tables.sections(s, r);
+        s.append("</section>\n");
+    }
+
+    /**
+     * The picture of one drawing as in the report (legend, then one figure per view), for a page
+     * that shows it among its own tables; {@code ids} prefixes every element id (markers are
+     * {@code ids + "marker-" + n}, linking to {@code ids + "finding-" + n}). The page must load the
+     * report's style and script ({@link #style()}, {@link #script()}).
+     */
+    public String picture(Report report, String ids) {
+        StringBuilder s = new StringBuilder(1 << 14);
+        picture(s, report, ids);
+        return s.toString();
+    }
+
+    /** The report's style sheet, as inlined into every report. */
+    public static String style() {
+        return CSS;
+    }
+
+    /** The report's pan and zoom script, as inlined into every report. */
+    public static String script() {
+        return SCRIPT;
+    }
+
+    private void picture(StringBuilder s, Report report, String ids) {
+        DrawingResult r = report.result();
         Map<String, Integer> markIndex = new LinkedHashMap<>();
         for (MarkResult m : r.groups()) {
             markIndex.putIfAbsent(m.mark(), markIndex.size());
@@ -121,11 +153,6 @@ public final class HtmlReportWriter {
                     .append(SvgView.render(r, lines, owners, v, units, ids, markIndex, primary)).append("</figure>\n");
             primary = false;
         }
-        tables.bom(s, r);
-        tables.layers(s, r);
-        tables.findings(s, r, ids);
-        tables.sections(s, r);
-        s.append("</section>\n");
     }
 
     private static Vec3 extent(Report report) {

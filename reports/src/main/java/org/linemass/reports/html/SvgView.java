@@ -120,7 +120,7 @@ final class SvgView {
         for (int i = 0; i < lines.size(); i++) {
             PieceResult p = owners.get(i);
             int idx = markIndex.getOrDefault(p.mark() == null ? "" : p.mark(), 0);
-            s.append("<polyline class=\"piece\" points=\"");
+            s.append("<polyline class=\"piece\" data-piece=\"").append(p.id()).append("\" points=\"");
             for (Vec3 pt : lines.get(i)) {
                 s.append(num(f.x(pt))).append(',').append(num(f.y(pt))).append(' ');
             }

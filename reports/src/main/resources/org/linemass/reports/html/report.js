@@ -1,6 +1,10 @@
 // Pan and zoom for every picture; markers, the centre of gravity and the scale bar keep their size
 // on screen, and the scale bar is redrawn with a fitting length (the rule of SvgView.ScaleBar).
-document.querySelectorAll('svg.view').forEach(function (svg) {
+// linemassViews(root) sets up the pictures under root once each; svg.linemassCentre(x, y) moves
+// picture point (x, y) to the middle of the view (the local page uses it to show a finding).
+function linemassViews(root) {
+root.querySelectorAll('svg.view').forEach(function (svg) {
+  if (svg.linemassCentre) { return; }
   var vb = svg.viewBox.baseVal, home = [vb.x, vb.y, vb.width, vb.height], drag = null, moved = false;
   var pxPerM = parseFloat(svg.getAttribute('data-px-per-m'));
   var imperial = svg.getAttribute('data-units') === 'imperial';
@@ -52,4 +56,10 @@ document.querySelectorAll('svg.view').forEach(function (svg) {
     vb.x = home[0]; vb.y = home[1]; vb.width = home[2]; vb.height = home[3];
     redraw();
   });
+  svg.linemassCentre = function (x, y) {
+    vb.x = x - vb.width / 2; vb.y = y - vb.height / 2;
+    redraw();
+  };
 });
+}
+linemassViews(document);
