@@ -17,11 +17,13 @@ import org.linemass.reports.csv.PiecesCsvWriter;
 import org.linemass.reports.dxf.DxfMarkupWriter;
 import org.linemass.reports.html.HtmlReportWriter;
 import org.linemass.reports.json.JsonReportWriter;
+import org.linemass.reports.xlsx.CheckSheets;
+import org.linemass.reports.xlsx.XlsxWorkbook;
 
 /**
  * The files a page offers, made by the command line's writers so that they are byte for byte what
- * {@code linemass check} writes for the same drawings and sections: bill, pieces and findings CSV
- * (with the same byte-order mark), the JSON and HTML reports, the marked-up DXF of one drawing, and
+ * {@code linemass check} writes for the same drawings and sections: the spreadsheet (bill, pieces,
+ * findings and layers sheets), bill, pieces and findings CSV (with the same byte-order mark), the JSON and HTML reports, the marked-up DXF of one drawing, and
  * the tab's assignment file (its uploaded rules, then one row per pick) for the next run.
  */
 final class Downloads {
@@ -43,7 +45,7 @@ final class Downloads {
     }
 
     /**
-     * @param kind one of bom.csv, pieces.csv, findings.csv, report.json, report.html, markup.dxf,
+     * @param kind one of report.xlsx, bom.csv, pieces.csv, findings.csv, report.json, report.html, markup.dxf,
      *     assignments.csv
      * @param one the drawing asked for, or null for all of them
      */
@@ -71,6 +73,11 @@ final class Downloads {
             case "findings.csv":
                 return new File(base + "-findings.csv", "text/csv; charset=utf-8",
                         text(true, w -> FindingsCsvWriter.write(reports, units, w)));
+            case "report.xlsx":
+                ByteArrayOutputStream book = new ByteArrayOutputStream();
+                XlsxWorkbook.write(CheckSheets.of(reports, units), book);
+                return new File(base + ".xlsx", "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet",
+                        book.toByteArray());
             case "report.json":
                 return new File(base + ".json", "application/json; charset=utf-8",
                         text(false, w -> JsonReportWriter.write(reports, w)));

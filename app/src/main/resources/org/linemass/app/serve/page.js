@@ -168,8 +168,9 @@
     c.appendChild(bill);
     var dl = el('p', {'class': 'downloads'});
     dl.appendChild(el('span', null, 'Download all: '));
-    [['bom.csv', 'bill (CSV)'], ['pieces.csv', 'pieces (CSV)'], ['findings.csv', 'findings (CSV)'],
-      ['report.json', 'JSON'], ['report.html', 'HTML report'], ['assignments.csv', 'assignment file']].forEach(function (k) {
+    [['report.xlsx', 'spreadsheet (.xlsx)'], ['bom.csv', 'bill (CSV)'], ['pieces.csv', 'pieces (CSV)'],
+      ['findings.csv', 'findings (CSV)'], ['report.json', 'JSON'], ['report.html', 'HTML report'],
+      ['assignments.csv', 'assignment file']].forEach(function (k) {
       dl.appendChild(download(k[0], null, k[1]));
     });
     c.appendChild(dl);
@@ -202,8 +203,9 @@
     box.appendChild(sum);
     var dl = el('p', {'class': 'downloads'});
     dl.appendChild(el('span', null, 'Download: '));
-    [['bom.csv', 'bill (CSV)'], ['pieces.csv', 'pieces (CSV)'], ['findings.csv', 'findings (CSV)'],
-      ['report.json', 'JSON'], ['report.html', 'HTML report'], ['markup.dxf', 'marked-up DXF']].forEach(function (k) {
+    [['report.xlsx', 'spreadsheet (.xlsx)'], ['bom.csv', 'bill (CSV)'], ['pieces.csv', 'pieces (CSV)'],
+      ['findings.csv', 'findings (CSV)'], ['report.json', 'JSON'], ['report.html', 'HTML report'],
+      ['markup.dxf', 'marked-up DXF']].forEach(function (k) {
       dl.appendChild(download(k[0], id, k[1]));
     });
     box.appendChild(dl);

@@ -313,6 +313,10 @@ class ServeHttpTest {
             assertEquals(200, r.statusCode(), k);
             assertTrue(r.body().length > 100, k);
         }
+        HttpResponse<byte[]> book = page.getBytes("/api/download/report.xlsx?session=" + page.session);
+        assertEquals(200, book.statusCode());
+        // an .xlsx file is a ZIP archive (ECMA-376 Part 2): it starts with the local file header "PK\3\4"
+        assertArrayEquals(new byte[] {'P', 'K', 3, 4}, java.util.Arrays.copyOf(book.body(), 4));
         HttpResponse<byte[]> dxf = page.getBytes("/api/download/markup.dxf?session=" + page.session + "&drawing=1");
         assertEquals(200, dxf.statusCode());
         assertTrue(new String(dxf.body(), StandardCharsets.UTF_8).contains("LINEMASS_FINDINGS"));
