@@ -1,6 +1,7 @@
 package org.linemass.engine.resolve;
 
 import java.util.ArrayDeque;
+import java.util.Arrays;
 import java.util.Deque;
 import java.util.HashMap;
 import java.util.LinkedHashSet;
@@ -25,8 +26,10 @@ import org.linemass.tolerance.Tolerances;
  * ({@link Moments#transformedBySimilarity}, mirrors allowed); MINSERT arrays are summed in closed
  * form ({@link LayerTotals#arrayed}). A block bomb whose expansion has 10^12 segments therefore
  * costs the number of distinct blocks. Inserts whose map is not a similarity are integrated on the
- * transformed curves (arcs become elliptical arcs), at most {@code directBudget} segment copies in
- * all; beyond that the remaining copies are left out and an incompleteness reason is recorded.
+ * transformed curves (arcs become elliptical arcs) once per distinct linear map (copies that differ by
+ * a translation share the result, see {@link Key}), at most {@code directBudget} segment copies and
+ * {@code directBudget} distinct maps in all; beyond that the remaining copies are left out and an
+ * incompleteness reason is recorded.
  * Nesting is walked with an explicit stack, so any depth works; an insert that would place a block
  * inside itself is skipped and recorded. Single use, not thread-safe.
  */
@@ -40,8 +43,20 @@ final class BlockInstancer {
     private final Map<String, Integer> active = new HashMap<>();
     private final Set<String> reasons = new LinkedHashSet<>();
     private long directBudget;
+    private final long maxFrames;
+    private long frameBudget;
 
-    private record Key(String block, String inherited) {
+    /**
+     * A memo entry: a block under an inherited layer, in its own frame ({@code linear} null) or under
+     * a linear map that is not a similarity ({@code linear} its nine entries, row-major). Copies
+     * whose placements differ only by a translation share one entry: the translation is applied to
+     * the entry's moments (a rigid motion), so a nest of non-uniformly scaled blocks costs one
+     * integration per distinct linear map instead of one per copy.
+     */
+    private record Key(String block, String inherited, List<Double> linear) {
+        Key(String block, String inherited) {
+            this(block, inherited, null);
+        }
     }
 
     private static final class Frame {
@@ -69,6 +84,8 @@ final class BlockInstancer {
         this.rules = rules;
         this.relative = relative;
         this.directBudget = directBudget;
+        this.maxFrames = directBudget;
+        this.frameBudget = directBudget;
     }
 
     /** Reasons why some content was left out (cycles, unknown blocks, budget), in the order found. */
@@ -177,8 +194,21 @@ final class BlockInstancer {
                 }
                 sub = cached.transformed(composite, s.getAsDouble(), Tolerances.SIMILARITY_SLACK);
             } else {
-                push(stack, new Frame(child, inherited, composite, null, f));
-                return false;
+                Affine linear = Affine.of(composite.linearRowMajor(), Vec3.ZERO);
+                Key key = new Key(child.name(), inherited,
+                        Arrays.stream(composite.linearRowMajor()).boxed().toList());
+                LayerTotals cached = memo.get(key);
+                if (cached == null) {
+                    if (frameBudget <= 0) {
+                        reasons.add("too many distinct non-uniformly scaled placements (more than " + maxFrames
+                                + "); some copies of block " + child.name() + " were left out");
+                        return true;
+                    }
+                    frameBudget--;
+                    push(stack, new Frame(child, inherited, linear, key, f));
+                    return false;
+                }
+                sub = cached.transformed(Affine.translation(composite.translationPart()), 1, 0);
             }
         }
         f.acc.addAll(sub.arrayed(ins.columns(), ins.rows(), cs, rs));

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import org.linemass.drawing.Drawing;
 import org.linemass.drawing.LengthUnit;
 import org.linemass.drawing.UnitSource;
@@ -197,5 +198,69 @@ class ResolverTest {
                 s.sections(), List.of(), Map.of(), s.maxExpandedSegments());
         ResolvedDrawing r = Resolver.resolve(drawing, filtered);
         assertEquals(List.of("A1", "FROZEN", "OFF"), List.copyOf(r.layers().moments().keySet()));
+    }
+
+    @Test
+    void nonUniformNest_oneIntegrationPerDistinctMap() {
+        // six levels each inserting the next 100 times with scale (1.5, 0.8): 10^12 copies of a 10 mm line
+        // along x, each stretched by 1.5^6 (closed form 10 mm x 1.5^6 x 10^12 = 1.1390625e11 m)
+        Drawings d = Drawings.create();
+        d.block("N6").line("0", Vec3.ZERO, new Vec3(10, 0, 0));
+        for (int level = 5; level >= 0; level--) {
+            Drawings.BlockBuilder b = level == 0 ? d.model() : d.block("N" + level);
+            for (int k = 0; k < 100; k++) {
+                b.insert("N" + (level + 1), level == 0 ? "WIRE" : "0",
+                        Affine.scale(1.5, 0.8, 1).andThen(Affine.translation(new Vec3(20 * k, 7 * k, 0))));
+            }
+        }
+        long start = System.nanoTime();
+        ResolvedDrawing r = Resolver.resolve(d.build(), settings());
+        long ms = (System.nanoTime() - start) / 1_000_000;
+        // the memo makes this 6 x 100 steps; walking every copy took over 120 s. 5 s covers a loaded machine.
+        assertTrue(ms < 5_000, "took " + ms + " ms");
+        Moments m = r.layers().moments().get("WIRE");
+        assertEquals(1.1390625e11, m.mass(), 1.1390625e11 * REL);
+        assertEquals(1_000_000_000_000L, r.expandedSegments());
+        assertTrue(r.incompleteReasons().stream().noneMatch(s -> s.contains("left out")), r.incompleteReasons()
+                .toString());
+    }
+
+    @Test
+    void nonUniformNest_sameAsExplicitExpansion() {
+        // small enough to expand: 3 levels of 4 rotated, non-uniformly scaled copies of a line and an arc
+        Drawings d = Drawings.create();
+        d.block("L3").line("0", Vec3.ZERO, new Vec3(10, 0, 0)).arc("0", new Vec3(5, 5, 0), 3, 0, 2);
+        for (int level = 2; level >= 0; level--) {
+            Drawings.BlockBuilder b = level == 0 ? d.model() : d.block("L" + level);
+            for (int k = 0; k < 4; k++) {
+                b.insert("L" + (level + 1), level == 0 ? "WIRE" : "0", Affine.rotationZ(0.3 * (k % 2))
+                        .andThen(Affine.scale(1.5, 0.8, 1)).andThen(Affine.translation(new Vec3(30 * k, 11 * k, 0))));
+            }
+        }
+        ResolvedDrawing r = Resolver.resolve(d.build(), settings());
+        // the expansion integrates every world segment on its own: the instanced totals must agree
+        assertSame(direct(r.worldSegments().orElseThrow()).get("WIRE"), r.layers().moments().get("WIRE"), 1e-9);
+    }
+
+    @Test
+    void nonUniformNest_distinctMapsBeyondBudget_leftOutAndSaid() {
+        // every copy rotated differently: 30^3 distinct maps, more than a budget of 1000
+        Drawings d = Drawings.create();
+        d.block("R3").line("0", Vec3.ZERO, new Vec3(10, 0, 0));
+        for (int level = 2; level >= 0; level--) {
+            Drawings.BlockBuilder b = level == 0 ? d.model() : d.block("R" + level);
+            for (int k = 0; k < 30; k++) {
+                b.insert("R" + (level + 1), level == 0 ? "WIRE" : "0",
+                        Affine.rotationZ(0.01 * k).andThen(Affine.scale(1.5, 0.8, 1)));
+            }
+        }
+        AnalysisSettings small = new AnalysisSettings(Optional.empty(), Optional.empty(), Optional.empty(),
+                1e-10, false, List.of(), List.of(), false, SectionTable.empty(), List.of(), Map.of(), 1000);
+        long start = System.nanoTime();
+        ResolvedDrawing r = Resolver.resolve(d.build(), small);
+        long ms = (System.nanoTime() - start) / 1_000_000;
+        assertTrue(ms < 5_000, "took " + ms + " ms");
+        assertTrue(r.incompleteReasons().stream().anyMatch(s -> s.contains("too many distinct non-uniformly scaled"
+                + " placements (more than 1000)")), r.incompleteReasons().toString());
     }
 }
