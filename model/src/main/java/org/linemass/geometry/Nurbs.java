@@ -11,6 +11,14 @@ import java.util.Arrays;
  */
 public final class Nurbs implements Segment {
 
+    /**
+     * Largest ratio of two weights of one spline. A span whose weights differ by a factor R moves
+     * over parameter widths of about 1/R of the span near its ends; integrators grade their cuts
+     * towards those ends in about log2(R) steps, so the ratio bounds that work. 1e100 is far beyond
+     * any weight a drafting program writes (conic arcs need ratios of a few); no source.
+     */
+    public static final double MAX_WEIGHT_RATIO = 1e100;
+
     private final int degree;
     private final double[] knots;
     private final Vec3[] points;
@@ -55,6 +63,10 @@ public final class Nurbs implements Segment {
             throw new IllegalArgumentException("spline parameter range is empty: knot[" + degree + "] = "
                     + knots[degree] + ", knot[" + points.length + "] = " + knots[points.length]);
         }
+        if (weights != null && weights.length != points.length) {
+            throw new IllegalArgumentException("spline has " + points.length + " control points but "
+                    + weights.length + " weights");
+        }
         double[] w = new double[points.length];
         for (int i = 0; i < points.length; i++) {
             w[i] = weights == null ? 1.0 : weights[i];
@@ -65,9 +77,11 @@ public final class Nurbs implements Segment {
                 throw new IllegalArgumentException("spline control point " + i + " is not finite: " + points[i]);
             }
         }
-        if (weights != null && weights.length != points.length) {
-            throw new IllegalArgumentException("spline has " + points.length + " control points but "
-                    + weights.length + " weights");
+        double wLo = Arrays.stream(w).min().orElse(1);
+        double wHi = Arrays.stream(w).max().orElse(1);
+        if (wHi > MAX_WEIGHT_RATIO * wLo) {
+            throw new IllegalArgumentException("spline weights differ by more than a factor "
+                    + MAX_WEIGHT_RATIO + " (smallest " + wLo + ", largest " + wHi + ")");
         }
         return new Nurbs(degree, knots.clone(), points.clone(), w, source);
     }
@@ -151,10 +165,16 @@ public final class Nurbs implements Segment {
         double[][] ders = basisDerivatives(span, tc, order);
         double[][] a = new double[order + 1][3];
         double[] w = new double[order + 1];
+        // the curve does not change when all weights are scaled: divide by the largest acting on
+        // this span, so that extreme weights (1e50) neither overflow nor swamp the sums
+        double wMax = 0;
+        for (int j = 0; j <= degree; j++) {
+            wMax = Math.max(wMax, weights[span - degree + j]);
+        }
         for (int k = 0; k <= order; k++) {
             for (int j = 0; j <= degree; j++) {
                 int i = span - degree + j;
-                double nw = ders[k][j] * weights[i];
+                double nw = ders[k][j] * (weights[i] / wMax);
                 Vec3 p = points[i];
                 a[k][0] += nw * p.x();
                 a[k][1] += nw * p.y();

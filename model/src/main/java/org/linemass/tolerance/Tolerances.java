@@ -171,4 +171,25 @@ public record Tolerances(double joinM, double gapLimitM, double noiseM, double g
      * exceed 1e11 chords.
      */
     public static final double STRAIGHT_BULGE = 2e-12;
+
+    /**
+     * Relative allowance for rounding in the chord sum and the control polygon's length that
+     * bracket a spline's length (dimensionless): a few hundred units of double rounding. Common
+     * practice, no source.
+     */
+    public static final double LENGTH_BRACKET_ROUNDING = 1e-13;
+
+    /**
+     * Largest weight ratio within one span of a spline integrated on the spline as given
+     * (dimensionless); spans with a larger ratio are integrated half by half on local copies with
+     * graded cuts. Conic arcs written as splines have ratios up to a few; 16 leaves them alone. No
+     * source: chosen to keep ordinary splines on the path they have always taken.
+     */
+    public static final double SPLIT_WEIGHT_RATIO = 16;
+
+    /**
+     * Relative accuracy of a strongly weighted spline's length in the drawing checks
+     * (dimensionless): far below anything they compare. Common practice, no source.
+     */
+    public static final double CHECK_LENGTH_RELATIVE = 1e-9;
 }

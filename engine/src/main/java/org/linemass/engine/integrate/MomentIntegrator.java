@@ -1,6 +1,7 @@
 package org.linemass.engine.integrate;
 
 import java.util.List;
+import java.util.function.DoubleUnaryOperator;
 import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.MomentsAccumulator;
 import org.linemass.engine.moments.Sym3;
@@ -9,6 +10,7 @@ import org.linemass.geometry.Nurbs;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Moments (mass, centroid, central second moment, error bound) of one segment under a linear
@@ -42,7 +44,19 @@ public final class MomentIntegrator {
      */
     public static double[] cuts(Segment seg) {
         // the span limit is an angle for conics; a spline's parameter has no such meaning
-        return SpeedZeros.cuts(seg, seg instanceof Nurbs ? Double.POSITIVE_INFINITY : MAX_SPAN_RAD);
+        if (seg instanceof Nurbs n) {
+            return SplineParts.withGrading(n, SpeedZeros.cuts(seg, Double.POSITIVE_INFINITY));
+        }
+        return SpeedZeros.cuts(seg, MAX_SPAN_RAD);
+    }
+
+    /**
+     * Whether the segment is a spline with a span whose weights differ by more than
+     * {@link SplineParts#RATIO_TO_SPLIT}: such spans are integrated half by half on local copies, and
+     * fixed-rule lengths elsewhere should ask this integrator instead.
+     */
+    public static boolean stronglyWeighted(Segment seg) {
+        return seg instanceof Nurbs n && SplineParts.worstSpanRatio(n) > SplineParts.RATIO_TO_SPLIT;
     }
 
     /**
@@ -84,44 +98,123 @@ public final class MomentIntegrator {
                 return new Result(ArcMoments.of(c), 0, true);
             }
         }
-        ArcLengthMap arc = density.usesArcLength() ? ArcLengthMap.of(seg, relative, maxEvaluations) : null;
-        // the quadrature nodes never touch the ends: evaluate there too, so that a density that fails at
-        // an end (1 / (x - x0) starting at x0) is reported instead of integrated towards infinity
-        density.kgPerM(seg.start(), sOffsetM);
-        density.kgPerM(seg.end(), sOffsetM + (arc == null ? 0 : arc.length()));
-        double extent = seg.bounds().diagonal();
-        MomentIntegrand f = new MomentIntegrand(seg, density, arc, sOffsetM, extent > 0 ? extent : 1);
-        double[] cuts = cuts(seg);
-        AdaptiveGaussKronrod.Result r = AdaptiveGaussKronrod.integrate(f, cuts, relative, 0,
-                budget(maxEvaluations, cuts.length - 1));
-        MomentsAccumulator acc = new MomentsAccumulator();
-        List<AdaptiveGaussKronrod.Piece> pieces = r.pieces();
-        for (AdaptiveGaussKronrod.Piece p : pieces) {
-            acc.add(f.pieceMoments(p));
+        List<SplineParts.Part> parts = seg instanceof Nurbs n ? SplineParts.of(n) : null;
+        Sums sums = new Sums();
+        double length;
+        if (parts == null) {
+            ArcLengthMap arc = density.usesArcLength() ? ArcLengthMap.of(seg, relative, maxEvaluations) : null;
+            length = arc == null ? 0 : arc.length();
+            checkEnds(seg, density, sOffsetM, length);
+            double[] cuts = cuts(seg);
+            sums.add(seg, cuts, density, arc == null ? null : t -> sOffsetM + arc.at(t), relative,
+                    budget(maxEvaluations, cuts.length - 1));
+        } else {
+            length = integrateParts(parts, density, sOffsetM, relative, maxEvaluations, sums);
+            checkEnds(seg, density, sOffsetM, length);
         }
-        Moments m = acc.result();
-        double bound = r.reportedBound(relative);
+        Moments m = sums.acc.result();
+        double bound = sums.bound;
+        if (density == LinearDensity.UNIT && seg instanceof Nurbs n) {
+            bound = bracketed(m.mass(), bound, sums.chords, SplineParts.polygonLength(n));
+        }
         m = m.mass() == 0 ? new Moments(0, seg.start(), Sym3.ZERO, bound)
                 : new Moments(m.mass(), m.centroid(), m.covariance(), bound);
-        return new Result(m, r.evaluations(), r.converged());
+        return new Result(m, sums.evaluations, sums.converged);
+    }
+
+    /**
+     * The length bound, widened so that it holds for sure when the integrated length {@code m} falls
+     * outside [sum of chords between piece ends, length of the control polygon], which holds the true
+     * length of any spline with positive weights (corner cutting never lengthens a polygon).
+     */
+    static double bracketed(double m, double bound, double chords, double polygon) {
+        double lower = chords * (1 - Tolerances.LENGTH_BRACKET_ROUNDING);
+        double upper = polygon * (1 + Tolerances.LENGTH_BRACKET_ROUNDING);
+        if (m > upper) {
+            return Math.max(bound, m - lower);
+        }
+        if (m < lower) {
+            return Math.max(bound, upper - m);
+        }
+        return bound;
+    }
+
+    // the quadrature nodes never touch the ends: evaluate there too, so that a density that fails at
+    // an end (1 / (x - x0) starting at x0) is reported instead of integrated towards infinity
+    private static void checkEnds(Segment seg, LinearDensity density, double sOffsetM, double length) {
+        density.kgPerM(seg.start(), sOffsetM);
+        density.kgPerM(seg.end(), sOffsetM + length);
+    }
+
+    /**
+     * Integrates the parts of a spline ({@link SplineParts}) in order; returns the length measured
+     * along the way when the density needs arc length (else 0).
+     */
+    private static double integrateParts(List<SplineParts.Part> parts, LinearDensity density, double sOffsetM,
+            double relative, long maxEvaluations, Sums sums) {
+        long perPart = Math.max(1, maxEvaluations / parts.size());
+        double base = sOffsetM;
+        for (int i = 0; i + 1 < parts.size(); i += 2) {
+            SplineParts.Part fwd = parts.get(i);
+            SplineParts.Part back = parts.get(i + 1);
+            DoubleUnaryOperator sFwd = null;
+            DoubleUnaryOperator sBack = null;
+            double spanLength = 0;
+            if (density.usesArcLength()) {
+                ArcLengthMap af = ArcLengthMap.of(fwd.curve(), relative, perPart);
+                ArcLengthMap ab = ArcLengthMap.of(back.curve(), relative, perPart);
+                double half = fwd.cuts()[fwd.cuts().length - 1];
+                double halfBack = back.cuts()[back.cuts().length - 1];
+                double span = af.at(half) + ab.at(halfBack);
+                double from = base;
+                sFwd = t -> from + af.at(t);
+                sBack = t -> from + span - ab.at(t);
+                spanLength = span;
+            }
+            sums.add(fwd.curve(), fwd.cuts(), density, sFwd, relative, budget(perPart, fwd.cuts().length - 1));
+            sums.add(back.curve(), back.cuts(), density, sBack, relative, budget(perPart, back.cuts().length - 1));
+            base += spanLength;
+        }
+        return base - sOffsetM;
+    }
+
+    /** Moments, bound, chord sum and work summed over the ranges integrated so far. Not thread-safe. */
+    private static final class Sums {
+        final MomentsAccumulator acc = new MomentsAccumulator();
+        double bound;
+        double chords;
+        long evaluations;
+        boolean converged = true;
+
+        void add(Segment seg, double[] cuts, LinearDensity density, DoubleUnaryOperator sOf, double relative,
+                long budget) {
+            double extent = seg.bounds().diagonal();
+            MomentIntegrand f = new MomentIntegrand(seg, density, sOf, extent > 0 ? extent : 1);
+            AdaptiveGaussKronrod.Result r = AdaptiveGaussKronrod.integrate(f, cuts, relative, 0, budget);
+            for (AdaptiveGaussKronrod.Piece p : r.pieces()) {
+                acc.add(f.pieceMoments(p));
+                chords += seg.point(p.b()).minus(seg.point(p.a())).norm();
+            }
+            bound += r.reportedBound(relative);
+            evaluations += r.evaluations();
+            converged &= r.converged();
+        }
     }
 
     /** The integrand {@code lambda |C'| [1, d, d d^T]} with {@code d = C(t) - C(mid of piece)}. */
     private static final class MomentIntegrand implements Integrand {
         private final Segment seg;
         private final LinearDensity density;
-        private final ArcLengthMap arc;
-        private final double sOffset;
+        private final DoubleUnaryOperator sOf;
         private final double extent;
         private double lastA = Double.NaN;
         private double lastB = Double.NaN;
         private Vec3 reference;
 
-        MomentIntegrand(Segment seg, LinearDensity density, ArcLengthMap arc, double sOffset, double extent) {
+        MomentIntegrand(Segment seg, LinearDensity density, DoubleUnaryOperator sOf, double extent) {
             this.seg = seg;
             this.density = density;
-            this.arc = arc;
-            this.sOffset = sOffset;
+            this.sOf = sOf;
             this.extent = extent;
         }
 
@@ -143,7 +236,7 @@ public final class MomentIntegrator {
         public void evaluate(double a, double b, double t, double[] out) {
             Vec3 ref = referenceFor(a, b);
             Vec3 p = seg.point(t);
-            double lambda = density.kgPerM(p, arc == null ? 0 : sOffset + arc.at(t));
+            double lambda = density.kgPerM(p, sOf == null ? 0 : sOf.applyAsDouble(t));
             double w = lambda * seg.derivative(t).norm();
             double dx = p.x() - ref.x();
             double dy = p.y() - ref.y();

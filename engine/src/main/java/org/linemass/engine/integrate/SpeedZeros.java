@@ -70,9 +70,12 @@ final class SpeedZeros {
 
     /** The cuts for a segment: range ends, breakpoints, and near-zero-speed points of every span. */
     static double[] cuts(Segment seg, double maxSpan) {
+        return cuts(seg, seg.tStart(), seg.tEnd(), maxSpan);
+    }
+
+    /** The cuts of the parameter range [t0, t1] of a segment (see {@link #cuts(Segment, double)}). */
+    static double[] cuts(Segment seg, double t0, double t1, double maxSpan) {
         double[] bp = seg.breakpoints();
-        double t0 = seg.tStart();
-        double t1 = seg.tEnd();
         List<Double> base = new ArrayList<>();
         base.add(t0);
         for (double k : bp) {

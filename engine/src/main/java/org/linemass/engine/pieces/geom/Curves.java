@@ -1,5 +1,6 @@
 package org.linemass.engine.pieces.geom;
 
+import org.linemass.engine.integrate.MomentIntegrator;
 import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Straight;
@@ -36,6 +37,10 @@ public final class Curves {
         }
         if (s instanceof CircularArc arc) {
             return arc.length();
+        }
+        if (MomentIntegrator.stronglyWeighted(s)) {
+            // the fixed rule misses the steps of extreme weights; the adaptive path resolves them
+            return MomentIntegrator.lengthMoments(s, Tolerances.CHECK_LENGTH_RELATIVE).mass();
         }
         return lengthBetween(s, s.tStart(), s.tEnd());
     }
