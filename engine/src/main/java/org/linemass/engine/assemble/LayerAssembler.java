@@ -16,6 +16,7 @@ import org.linemass.engine.result.SectionUse;
 import org.linemass.engine.result.Severity;
 import org.linemass.engine.result.Totals;
 import org.linemass.engine.section.Section;
+import org.linemass.geometry.Vec3;
 
 /**
  * Per-layer results and drawing totals. A layer's length moments are the drawn moments minus those
@@ -77,6 +78,19 @@ public final class LayerAssembler {
                 mass = length.scaledDensity(mat.section().get().kgPerM());
             }
             mat.section().ifPresent(s -> used.put(s.id(), s));
+            String overflow = Overflow.describe(name, raw, length, mass, mat.section().orElse(null));
+            if (overflow != null) {
+                findings.add(new Finding(FindingKind.OVERFLOW, Severity.ERROR, null, null, name, List.of(), null,
+                        overflow));
+                reasons.add("layer " + name + " was left out of the totals: its moments exceed the range of numbers"
+                        + " (see the overflow finding)");
+                massComplete = false;
+                Vec3 c = length.centroid().isFinite() ? length.centroid() : null;
+                layers.add(new LayerResult(name, length.mass(), raw.mass(), c, null,
+                        mat.section().map(Section::id).orElse(null), null, null, null,
+                        pieces.getOrDefault(name, 0), length.errorBound(), drawing.layer(name).visible()));
+                continue;
+            }
             boolean hasGeometry = raw.mass() > 0;
             if (mass == null && hasGeometry) {
                 massComplete = false;
@@ -100,6 +114,15 @@ public final class LayerAssembler {
         }
         Moments tl = totalLength.result();
         Moments tm = anyMass ? totalMass.result() : null;
+        if (!Overflow.finite(tl) || (tm != null && !Overflow.finite(tm))) {
+            findings.add(new Finding(FindingKind.OVERFLOW, Severity.ERROR, null, null, null, List.of(), null,
+                    "the drawing's totals exceed the range of numbers although each layer's do not (the layers lie"
+                            + " too far apart); check the drawing's units and coordinates. The totals are left out."));
+            reasons.add("the drawing's totals exceed the range of numbers (see the overflow finding)");
+            tl = Moments.ZERO;
+            tm = null;
+            massComplete = false;
+        }
         Totals totals = new Totals(tl.mass(), drawnTotal, tl.centroid(), tl.inertia(), tm == null ? null : tm.mass(),
                 tm == null ? null : tm.centroid(), tm == null ? null : tm.inertia(), massComplete, tl.errorBound());
         List<SectionUse> sections = new ArrayList<>();

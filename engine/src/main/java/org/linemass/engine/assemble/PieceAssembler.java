@@ -79,6 +79,10 @@ public final class PieceAssembler {
             } else if (mat.section().isPresent()) {
                 mass = lm.scaledDensity(mat.section().get().kgPerM());
             }
+            if (mass != null && !Overflow.finite(mass)) {
+                // beyond the range of numbers: the layer's overflow finding says so; no mass for the piece
+                mass = null;
+            }
             computed.add(new Computed(i, p, lm, mass, mat.section()));
         }
         computed.sort(Comparator.comparing((Computed c) -> c.piece().layer())

@@ -27,6 +27,12 @@ public final class FindingKind {
     /** A layer filter, section assignment or density rule that matches no layer of the drawing (a warning). */
     public static final String UNMATCHED_RULE = "unmatched_rule";
 
+    /**
+     * A layer whose moments exceed the range of double numbers (an error: implausible units,
+     * coordinates or section data); the layer is left out of the totals.
+     */
+    public static final String OVERFLOW = "overflow";
+
     private FindingKind() {
     }
 }

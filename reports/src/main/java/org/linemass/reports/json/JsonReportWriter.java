@@ -41,6 +41,8 @@ public final class JsonReportWriter {
     private static final JsonFactory FACTORY = JsonFactory.builder()
             .enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
             .disable(StreamWriteFeature.AUTO_CLOSE_TARGET)
+            // a report cut short by a failure must not be closed into valid-looking JSON
+            .disable(StreamWriteFeature.AUTO_CLOSE_CONTENT)
             .build();
 
     private JsonReportWriter() {
