@@ -18,7 +18,8 @@ import org.linemass.reports.UnitSystem;
  * mark, a marker at each finding (a ring exactly at the place, a leader line and a numbered
  * balloon placed by {@link MarkerLayout}) linking to its row of the findings table, the centre
  * of gravity (or, without mass, the length centroid) as a quartered circle whose tooltip gives
- * its coordinates, and a scale bar. Picture units are pixels of the initial view. When the page
+ * its coordinates, and a scale bar (not in the isometric view, where lengths are foreshortened).
+ * The view is fitted to the pieces alone (markers outside them are reached by panning). Picture units are pixels of the initial view. When the page
  * is zoomed, strokes keep their width, and markers, the centre of gravity and the scale bar keep
  * their size on screen: their groups carry {@code data-x}/{@code data-y} anchors that the page's
  * script re-scales, and the scale bar is redrawn with a fitting length.
@@ -59,16 +60,10 @@ final class SvgView {
         double minV = Double.POSITIVE_INFINITY;
         double maxU = Double.NEGATIVE_INFINITY;
         double maxV = Double.NEGATIVE_INFINITY;
+        // the view fits the geometry only: tens of thousands of notes, or a finding far from the wire,
+        // must not shrink the drawing to a corner of a blank picture
         List<Vec3> all = new ArrayList<>();
         lines.forEach(all::addAll);
-        for (Finding f : r.findings()) {
-            if (f.atM() != null) {
-                all.add(f.atM());
-            }
-        }
-        if (cog != null) {
-            all.add(cog);
-        }
         for (Vec3 p : all) {
             if (p.isFinite()) {
                 minU = Math.min(minU, view.u(p));
@@ -96,7 +91,7 @@ final class SvgView {
         }
         // balloons near the edge may reach past the padding: the picture grows to show them whole
         double[] reach = {0, 0, w, h};
-        markers(body, r, f, ids, view, primary, reach);
+        markers(body, r, f, ids, view, primary, reach, w, h);
         double x0 = reach[0];
         double y0 = reach[1];
         double vw = reach[2] - x0;
@@ -110,7 +105,10 @@ final class SvgView {
                 .append("\" data-units=\"").append(units.name().toLowerCase(Locale.ROOT)).append("\">\n");
         s.append("<rect class=\"paper\" x=\"-100000\" y=\"-100000\" width=\"200000\" height=\"200000\"/>\n");
         s.append(body);
-        scaleBar(s, units, k, x0, reach[3]);
+        if (view != View.ISO) {
+            // the isometric view foreshortens every axis: no single length per pixel holds in it
+            scaleBar(s, units, k, x0, reach[3]);
+        }
         s.append("</svg>\n");
         return s.toString();
     }
@@ -155,7 +153,7 @@ final class SvgView {
      * every balloon with a margin.
      */
     private static void markers(StringBuilder s, DrawingResult r, Frame f, String ids, View view, boolean primary,
-            double[] reach) {
+            double[] reach, double w, double h) {
         List<Integer> numbers = new ArrayList<>();
         List<Finding> placed = new ArrayList<>();
         int n = 0;
@@ -188,10 +186,14 @@ final class SvgView {
             double br = fd.severity() == Severity.INFO ? (wide ? BALLOON_R : NOTE_BALLOON_R)
                     : wide ? WIDE_BALLOON_R : BALLOON_R;
             double margin = br + EDGE_MARGIN_PX;
-            reach[0] = Math.min(reach[0], xs[i] + o.dx() - margin);
-            reach[1] = Math.min(reach[1], ys[i] + o.dy() - margin);
-            reach[2] = Math.max(reach[2], xs[i] + o.dx() + margin);
-            reach[3] = Math.max(reach[3], ys[i] + o.dy() + margin);
+            // only a marker on the drawing widens the picture to show its balloon whole; one outside
+            // it is reached by panning, so it cannot push the drawing into a corner
+            if (xs[i] >= 0 && xs[i] <= w && ys[i] >= 0 && ys[i] <= h) {
+                reach[0] = Math.min(reach[0], xs[i] + o.dx() - margin);
+                reach[1] = Math.min(reach[1], ys[i] + o.dy() - margin);
+                reach[2] = Math.max(reach[2], xs[i] + o.dx() + margin);
+                reach[3] = Math.max(reach[3], ys[i] + o.dy() + margin);
+            }
             double len = Math.hypot(o.dx(), o.dy());
             double lead = Math.max(0, len - br) / Math.max(len, 1);
             s.append("<a class=\"marker fixed ").append(fd.severity().jsonName()).append("\" id=\"").append(marker)
