@@ -161,15 +161,19 @@ class PageBrowserTest {
             String v = d.findElement(By.id("combined-mass")).getAttribute("data-value");
             return v != null && Double.parseDouble(v) == cliMass;
         });
-        WebElement layerMass = browser.findElement(By.xpath("//input[@data-layer='" + LAYER
-                + "']/ancestor::tr/td[contains(@class, 'layer-mass')]"));
         double cliLayer = 0;
         for (JsonNode l : picked.get("layers")) {
             if (LAYER.equals(l.get("name").asText())) {
                 cliLayer = l.get("mass_kg").asDouble();
             }
         }
-        assertEquals(cliLayer, Double.parseDouble(layerMass.getAttribute("data-value")), 0.0);
+        final double expected = cliLayer;
+        // the drawing's own tables are redrawn when its new report arrives, a moment after the totals
+        waiting().until(d -> {
+            String v = d.findElement(By.xpath("//input[@data-layer='" + LAYER
+                    + "']/ancestor::tr/td[contains(@class, 'layer-mass')]")).getAttribute("data-value");
+            return v != null && !v.equals("null") && Double.parseDouble(v) == expected;
+        });
 
         // the bill, downloaded by the browser, is the command line's with that assignment
         Path cliBom = Files.createTempFile(downloads.getParent(), "cli-bom", ".csv");
