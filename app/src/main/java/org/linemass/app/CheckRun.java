@@ -14,9 +14,11 @@ import org.linemass.importer.ImportOptions;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
 import org.linemass.reports.console.ConsoleReport;
+import org.linemass.reports.csv.BenderCsvWriter;
 import org.linemass.reports.csv.BomCsvWriter;
 import org.linemass.reports.csv.FindingsCsvWriter;
 import org.linemass.reports.csv.PiecesCsvWriter;
+import org.linemass.reports.csv.ScheduleCsvWriter;
 import org.linemass.reports.dxf.DxfMarkupWriter;
 import org.linemass.reports.html.HtmlReportWriter;
 import org.linemass.reports.json.JsonReportWriter;
@@ -119,6 +121,8 @@ final class CheckRun {
             sink.text(outputs.bomCsv, reports, (r, w) -> BomCsvWriter.write(r, units, w), true);
             sink.text(outputs.piecesCsv, reports, (r, w) -> PiecesCsvWriter.write(r, units, w), true);
             sink.text(outputs.findingsCsv, reports, (r, w) -> FindingsCsvWriter.write(r, units, w), true);
+            sink.text(outputs.scheduleCsv, reports, ScheduleCsvWriter::write, true);
+            sink.text(outputs.benderCsv, reports, BenderCsvWriter::write, true);
             if (outputs.xlsx != null) {
                 List<XlsxSheet> sheets = CheckSheets.of(reports, units);
                 sink.bytes(Path.of(outputs.xlsx), os -> XlsxWorkbook.write(sheets, os));

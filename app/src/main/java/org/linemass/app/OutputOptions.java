@@ -22,6 +22,14 @@ public final class OutputOptions {
     @Option(names = "--findings-csv", paramLabel = "FILE", description = "Write the drawing findings as CSV.")
     String findingsCsv;
 
+    @Option(names = "--schedule-csv", paramLabel = "FILE",
+            description = "Write the bar bending schedule (BS 8666 shape codes, dimensions, lengths) as CSV.")
+    String scheduleCsv;
+
+    @Option(names = "--bender-csv", paramLabel = "FILE",
+            description = "Write the bender data of every piece (feed, rotation, bend angle, radius, corner points) as CSV.")
+    String benderCsv;
+
     @Option(names = "--xlsx", paramLabel = "FILE",
             description = "Write a spreadsheet workbook (bill of materials, pieces, findings, layers) with numeric cells.")
     String xlsx;
@@ -41,7 +49,7 @@ public final class OutputOptions {
     /** The report targets given, in a fixed order. */
     List<String> targets() {
         List<String> t = new ArrayList<>();
-        for (String s : new String[] {json, bomCsv, piecesCsv, findingsCsv, xlsx, html, markupDxf}) {
+        for (String s : new String[] {json, bomCsv, piecesCsv, findingsCsv, scheduleCsv, benderCsv, xlsx, html, markupDxf}) {
             if (s != null) {
                 t.add(s);
             }

@@ -7,7 +7,6 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import org.linemass.engine.AnalysisException;
-import org.linemass.engine.bender.PieceForms;
 import org.linemass.engine.field.FieldDensity;
 import org.linemass.engine.integrate.LinearDensity;
 import org.linemass.engine.integrate.MomentIntegrator;
@@ -140,7 +139,8 @@ public final class PieceAssembler {
                     c.mass() == null ? c.length().centroid() : c.mass().centroid(), c.length().inertia(),
                     c.mass() == null ? null : c.mass().inertia(), start, end, p.closed(), p.segments().size(),
                     markOf[k + 1], p.bends(), sources, c.length().errorBound(),
-                    PieceForms.of(p.segments(), p.closed(), tol.angleRad(), tol.joinM())));
+                    PieceForms.of(p.segments(), p.closed(), c.section().map(Section::diameterM).orElse(null),
+                            c.length().mass(), tol.angleRad(), tol.joinM())));
         }
         Map<String, Moments> fm = new TreeMap<>();
         fieldMass.forEach((l, a) -> fm.put(l, a.result()));

@@ -1,7 +1,6 @@
 package org.linemass.engine.result;
 
 import java.util.List;
-import org.linemass.engine.bender.PieceForm;
 import org.linemass.engine.moments.Sym3;
 import org.linemass.geometry.Vec3;
 

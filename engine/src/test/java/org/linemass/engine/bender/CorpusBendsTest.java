@@ -15,6 +15,8 @@ import org.linemass.engine.Analyzer;
 import org.linemass.engine.pieces.Piece;
 import org.linemass.engine.pieces.PieceAnalysis;
 import org.linemass.engine.pieces.PieceAnalyzer;
+import org.linemass.engine.assemble.PieceForms;
+import org.linemass.engine.result.PieceForm;
 import org.linemass.engine.section.BuiltInSections;
 import org.linemass.engine.testing.SharedDir;
 import org.linemass.geometry.Vec3;
@@ -122,7 +124,7 @@ class CorpusBendsTest {
                 "v09_tube_chair_frame_r2018_in.dxf", "v02_garden_trellis_arcs_r2000_mm.dxf",
                 "v04_garden_gate_r12.dxf")) {
             for (Piece p : pieces(name)) {
-                PieceForm form = PieceForms.of(p.segments(), p.closed(), Math.toRadians(0.01), 1e-5);
+                PieceForm form = PieceForms.of(p.segments(), p.closed(), null, 0, Math.toRadians(0.01), 1e-5);
                 if (!form.program().exact() || !form.coils().isEmpty()) {
                     continue;
                 }

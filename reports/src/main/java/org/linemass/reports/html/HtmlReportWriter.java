@@ -95,6 +95,7 @@ public final class HtmlReportWriter {
 
         picture(s, report, ids);
         tables.bom(s, r);
+        BendingTables.write(s, r);
         tables.layers(s, r);
         tables.findings(s, r, ids);
         tables.sections(s, r);
