@@ -23,6 +23,9 @@ final class CheckCommand implements Callable<Integer> {
     @Mixin
     OutputOptions outputs;
 
+    @Mixin
+    PlanOptions plan;
+
     @Parameters(arity = "1..*", paramLabel = "DRAWING|FOLDER",
             description = "DXF files, or folders searched for *.dxf (any case, recursively).")
     List<Path> inputs;
@@ -35,6 +38,6 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        return new CheckRun(ctx, common, drawing, outputs).run(inputs);
+        return new CheckRun(ctx, common, drawing, outputs, plan).run(inputs);
     }
 }

@@ -22,6 +22,16 @@ import org.linemass.reports.csv.ScheduleCsvWriter;
 import org.linemass.reports.dxf.DxfMarkupWriter;
 import org.linemass.reports.html.HtmlReportWriter;
 import org.linemass.reports.json.JsonReportWriter;
+import org.linemass.plan.JobPlan;
+import org.linemass.plan.JobPlanner;
+import org.linemass.plan.cutting.CutSettings;
+import org.linemass.plan.stock.StockTable;
+import org.linemass.reports.plan.PlanConsole;
+import org.linemass.reports.plan.PlanCsv;
+import org.linemass.reports.plan.PlanHtml;
+import org.linemass.reports.plan.PlanSheets;
+import org.linemass.reports.plan.PlanTable;
+import org.linemass.reports.plan.PlanTables;
 import org.linemass.reports.xlsx.CheckSheets;
 import org.linemass.reports.xlsx.XlsxSheet;
 import org.linemass.reports.xlsx.XlsxWorkbook;
@@ -40,19 +50,21 @@ final class CheckRun {
     private final CommonOptions common;
     private final DrawingOptions drawing;
     private final OutputOptions outputs;
+    private final PlanOptions plan;
 
-    CheckRun(AppContext ctx, CommonOptions common, DrawingOptions drawing, OutputOptions outputs) {
+    CheckRun(AppContext ctx, CommonOptions common, DrawingOptions drawing, OutputOptions outputs, PlanOptions plan) {
         this.ctx = ctx;
         this.common = common;
         this.drawing = drawing;
         this.outputs = outputs;
+        this.plan = plan == null ? new PlanOptions() : plan;
     }
 
     /** Runs and returns the exit code; single-drawing input errors propagate as exceptions (exit 2). */
     int run(List<Path> args) throws InputProblem, AnalysisException, DxfInputException, IOException {
-        ReportFiles.removeStale(outputs.targets());
+        ReportFiles.removeStale(java.util.stream.Stream.concat(outputs.targets().stream(), plan.targets().stream()).toList());
         List<Path> files = InputFiles.collect(args);
-        long toStdout = outputs.targets().stream().filter(OutputOptions.STDOUT::equals).count();
+        long toStdout = java.util.stream.Stream.concat(outputs.targets().stream(), plan.targets().stream()).filter(OutputOptions.STDOUT::equals).count();
         if (toStdout > 1) {
             throw new InputProblem("only one report can go to standard output ('-')");
         }
@@ -69,7 +81,9 @@ final class CheckRun {
         }
         ReportFiles sink = new ReportFiles(ctx.out(), drawing.protectedFiles(files));
         java.util.Set<Path> seen = new java.util.HashSet<>();
-        for (String t : outputs.targets()) {
+        List<String> allTargets = new ArrayList<>(outputs.targets());
+        allTargets.addAll(plan.targets());
+        for (String t : allTargets) {
             boolean folder = t.equals(outputs.markupDxf) && (files.size() > 1 || Files.isDirectory(Path.of(t)));
             if (folder) {
                 // a folder of marked-up copies: each file is guarded when it is written
@@ -83,6 +97,8 @@ final class CheckRun {
                 throw new InputProblem("two reports would be written to the same file " + t);
             }
         }
+        StockTable stock = plan.planning() || !plan.targets().isEmpty() ? plan.table() : null;
+        CutSettings cutSettings = plan.settings();
         ImportOptions io = drawing.importOptions();
         AnalysisSettings settings = drawing.settings(ctx.sections());
 
@@ -115,6 +131,15 @@ final class CheckRun {
                     + "be read (see above); correct them or leave them out");
         }
         UnitSystem units = common.units();
+        List<PlanTable> planTables = List.of();
+        JobPlan job = null;
+        if (stock != null) {
+            job = JobPlanner.plan(reports.stream().map(Report::result).toList(), stock, cutSettings);
+            PlanTables pt = new PlanTables(units);
+            planTables = List.of(pt.summary(job), pt.order(job), pt.patterns(job));
+        }
+        List<PlanTable> tablesForReports = planTables;
+        List<String> htmlExtra = tablesForReports.isEmpty() ? List.of() : List.of(PlanHtml.section(tablesForReports));
         List<String> marked = new ArrayList<>();
         try {
             sink.text(outputs.json, reports, JsonReportWriter::write);
@@ -123,11 +148,17 @@ final class CheckRun {
             sink.text(outputs.findingsCsv, reports, (r, w) -> FindingsCsvWriter.write(r, units, w), true);
             sink.text(outputs.scheduleCsv, reports, ScheduleCsvWriter::write, true);
             sink.text(outputs.benderCsv, reports, BenderCsvWriter::write, true);
+            if (!tablesForReports.isEmpty()) {
+                sink.text(plan.planCsv, reports, (r, w) -> PlanCsv.write(tablesForReports.get(0), w), true);
+                sink.text(plan.orderCsv, reports, (r, w) -> PlanCsv.write(tablesForReports.get(1), w), true);
+                sink.text(plan.cuttingCsv, reports, (r, w) -> PlanCsv.write(tablesForReports.get(2), w), true);
+            }
             if (outputs.xlsx != null) {
                 List<XlsxSheet> sheets = CheckSheets.of(reports, units);
+                tablesForReports.forEach(t -> sheets.add(PlanSheets.of(t)));
                 sink.bytes(Path.of(outputs.xlsx), os -> XlsxWorkbook.write(sheets, os));
             }
-            sink.text(outputs.html, reports, (r, w) -> new HtmlReportWriter(units).write(r, w));
+            sink.text(outputs.html, reports, (r, w) -> new HtmlReportWriter(units).write(r, htmlExtra, w));
             if (outputs.markupDxf != null) {
                 marked = markup(sink, reports, analysed);
             }
@@ -136,11 +167,15 @@ final class CheckRun {
             throw e;
         }
         sink.commit();
-        if (!outputs.usesStdout()) {
+        boolean quietStdout = outputs.usesStdout() || plan.targets().contains(OutputOptions.STDOUT);
+        if (!quietStdout) {
             new ConsoleReport(units, ctx.terminal(), common.quiet, common.listNotes).print(reports, ctx.out());
             if (!common.quiet) {
                 marked.forEach(m -> ctx.out().println("marked-up drawing: " + m));
             }
+        }
+        if (job != null && !quietStdout && !common.quiet) {
+            PlanConsole.print(job, units, ctx.out());
         }
         ctx.out().flush();
         List<Finding> all = new ArrayList<>();

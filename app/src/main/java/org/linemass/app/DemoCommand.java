@@ -66,7 +66,7 @@ final class DemoCommand implements Callable<Integer> {
         o.html = dir.resolve("garden-planter-report.html").toString();
         o.json = dir.resolve("garden-planter-report.json").toString();
         o.failAt = FailThreshold.NEVER;
-        int code = new CheckRun(ctx, common, d, o).run(List.of(dxf));
+        int code = new CheckRun(ctx, common, d, o, null).run(List.of(dxf));
         String off = offCourse(Path.of(o.json));
         if (!off.isEmpty()) {
             throw new IllegalStateException("the demo did not come out as intended: " + off);

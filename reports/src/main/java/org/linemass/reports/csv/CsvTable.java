@@ -5,7 +5,7 @@ import java.io.Writer;
 import java.util.List;
 
 /** Writes rows of already-formatted cells as RFC 4180 records ending in "\n". */
-final class CsvTable {
+public final class CsvTable {
 
     private final Writer out;
     private final int columns;
@@ -14,7 +14,7 @@ final class CsvTable {
      * A table whose header is {@code columns}, preceded by a {@code drawing} column when the run
      * covers several drawings (the combined files name each row's drawing).
      */
-    static CsvTable withDrawingColumn(Writer out, boolean severalDrawings, List<String> columns) throws IOException {
+    public static CsvTable withDrawingColumn(Writer out, boolean severalDrawings, List<String> columns) throws IOException {
         List<String> header = new java.util.ArrayList<>(columns.size() + 1);
         if (severalDrawings) {
             header.add("drawing");
@@ -23,13 +23,13 @@ final class CsvTable {
         return new CsvTable(out, header);
     }
 
-    CsvTable(Writer out, List<String> header) throws IOException {
+    public CsvTable(Writer out, List<String> header) throws IOException {
         this.out = out;
         this.columns = header.size();
         row(header);
     }
 
-    void row(List<String> cells) throws IOException {
+    public void row(List<String> cells) throws IOException {
         if (cells.size() != columns) {
             throw new IllegalArgumentException("CSV row has " + cells.size() + " cells, header has " + columns);
         }

@@ -40,6 +40,14 @@ public final class HtmlReportWriter {
     }
 
     public void write(List<Report> reports, Writer out) throws IOException {
+        write(reports, List.of(), out);
+    }
+
+    /**
+     * Like {@link #write(List, Writer)}, with {@code extraSections} (ready, escaped HTML, such as
+     * the cutting plan) placed after the drawings and before the caution.
+     */
+    public void write(List<Report> reports, List<String> extraSections, Writer out) throws IOException {
         StringBuilder s = new StringBuilder(1 << 16);
         String title = reports.size() == 1 ? "linemass report: " + reports.get(0).result().drawing().file()
                 : "linemass report: " + reports.size() + " drawings";
@@ -67,6 +75,7 @@ public final class HtmlReportWriter {
             }
             s.append("</section>\n");
         }
+        extraSections.forEach(s::append);
         s.append("<section class=\"caution\" id=\"caution\">\n<h2>Caution</h2>\n<p>").append(Html.escape(Caution.TEXT))
                 .append("</p>\n</section>\n<script>\n").append(SCRIPT).append("</script>\n</body>\n</html>\n");
         out.write(s.toString());
