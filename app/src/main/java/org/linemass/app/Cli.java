@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.lang.reflect.Constructor;
 import java.util.List;
 import org.linemass.engine.AnalysisException;
+import org.linemass.errors.InternalException;
 import org.linemass.importer.DxfInputException;
 import picocli.CommandLine;
 import picocli.CommandLine.IExecutionExceptionHandler;
@@ -15,7 +16,10 @@ import picocli.CommandLine.ParseResult;
  * Builds the picocli command tree for an {@link AppContext} and runs it. Usage errors, bad input
  * ({@link DxfInputException}, {@link AnalysisException}, {@link InputProblem}, I/O failures) give
  * one line on stderr and exit 2, as does running out of heap or stack on a drawing too large for
- * the JVM's limits; anything else is a bug: one line asking for a report, exit 3.
+ * the JVM's limits; anything else is a bug ({@link InternalException}, and also an
+ * {@link IllegalArgumentException} that reaches this far: the commands turn every bad value a user
+ * gives into an {@link InputProblem} first, so one left over was a bad argument between two parts
+ * of linemass): one line asking for a report, exit 3.
  * With {@code --debug} the stack trace follows the line.
  */
 public final class Cli {
@@ -71,12 +75,14 @@ public final class Cli {
     private static IExecutionExceptionHandler failure(AppContext ctx) {
         return (Exception e, CommandLine cmd, ParseResult parsed) -> {
             boolean bad = e instanceof DxfInputException || e instanceof AnalysisException
-                    || e instanceof InputProblem || e instanceof IOException || e instanceof IllegalArgumentException;
+                    || e instanceof InputProblem || e instanceof IOException;
             if (bad) {
                 ctx.err().println("linemass: " + oneLine(describe(e)));
             } else {
-                ctx.err().println("linemass: internal error (" + e.getClass().getSimpleName() + ": "
-                        + oneLine(e.getMessage()) + "); please report it with the drawing and the command line");
+                String what = e instanceof InternalException ? oneLine(e.getMessage())
+                        : e.getClass().getSimpleName() + ": " + oneLine(e.getMessage());
+                ctx.err().println("linemass: internal error (" + what
+                        + "); please report it with the drawing and the command line");
             }
             if (debug(parsed.originalArgs().toArray(new String[0]))) {
                 e.printStackTrace(ctx.err());

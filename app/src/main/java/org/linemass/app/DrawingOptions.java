@@ -133,6 +133,18 @@ public final class DrawingOptions {
         rules.addAll(extraRules);
         java.util.Map<String, String> densities = densities();
         long expansionLimit = checkedExpansionLimit();
+        for (String g : onlyLayers) {
+            requirePattern("--only-layer", g);
+        }
+        for (String g : skipLayers) {
+            requirePattern("--skip-layer", g);
+        }
+        for (LayerAssignment r : rules) {
+            requirePattern("--assign", r.layerGlob());
+        }
+        for (String g : densities.keySet()) {
+            requirePattern("--density", g);
+        }
         try {
             // the settings check the tolerances themselves (the gap limit covers the join tolerance)
             return new AnalysisSettings(Optional.ofNullable(joinM), Optional.ofNullable(gapLimitM), Optional.empty(),
@@ -154,6 +166,16 @@ public final class DrawingOptions {
             m.put(d.substring(0, eq).trim(), d.substring(eq + 1).trim());
         }
         return m;
+    }
+
+    /**
+     * A layer pattern the user gave is bad input when it is empty: checked here so that the engine,
+     * which compiles the patterns, never sees one (an argument error there would be a bug).
+     */
+    private static void requirePattern(String option, String glob) throws InputProblem {
+        if (glob == null || glob.isEmpty()) {
+            throw new InputProblem(option + ": empty layer pattern");
+        }
     }
 
     private long checkedExpansionLimit() throws InputProblem {

@@ -56,7 +56,8 @@ final class AppFixtures {
 
     /**
      * A pipeline keyed on file names: "bad*" fails with an input error, "warn*" has a warning,
-     * "gap*" an error finding, "crash*" a bug, "huge*" and "deep*" run out of heap and stack,
+     * "gap*" an error finding, "crash*" a bug, "argbug*" an argument error between two parts
+     * of linemass, "invariant*" a broken invariant ({@code InternalException}), "huge*" and "deep*" run out of heap and stack,
      * anything else is clean. Records the settings it was given.
      */
     static final class FakePipeline implements DrawingPipeline {
@@ -74,6 +75,12 @@ final class AppFixtures {
             }
             if (n.startsWith("crash")) {
                 throw new IllegalStateException("bug");
+            }
+            if (n.startsWith("argbug")) {
+                throw new IllegalArgumentException("radius must be positive, got -1");
+            }
+            if (n.startsWith("invariant")) {
+                throw new org.linemass.errors.InternalException("layer W lost more length than was drawn");
             }
             if (n.startsWith("huge")) {
                 throw new OutOfMemoryError("Java heap space");

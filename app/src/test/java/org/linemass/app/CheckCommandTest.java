@@ -117,6 +117,35 @@ class CheckCommandTest {
     }
 
     @Test
+    void check_argumentErrorFromInside_isABugNotBadInput() throws IOException {
+        // every bad value a user gives is turned into an input problem before it reaches the engine,
+        // so an IllegalArgumentException arriving at the command line is a bug: exit 3, not 2
+        Run r = check(file("argbug.dxf").toString());
+        assertEquals(3, r.code(), r.err());
+        assertTrue(r.err().contains("internal error (IllegalArgumentException: radius must be positive"), r.err());
+        assertTrue(r.err().contains("please report"), r.err());
+        assertEquals(1, r.err().strip().lines().count(), r.err());
+    }
+
+    @Test
+    void check_internalException_exit3WithItsMessage() throws IOException {
+        Run r = check(file("invariant.dxf").toString());
+        assertEquals(3, r.code(), r.err());
+        assertTrue(r.err().startsWith("linemass: internal error (layer W lost more length than was drawn); please "
+                + "report"), r.err());
+    }
+
+    @Test
+    void check_emptyLayerPattern_exit2NamingTheOption() throws IOException {
+        String[][] cases = {{"--only-layer", ""}, {"--skip-layer", ""}, {"--assign", " =B8"}, {"--density", " =1"}};
+        for (String[] c : cases) {
+            Run r = check(c[0], c[1], file("ok.dxf").toString());
+            assertEquals(2, r.code(), c[0] + ": " + r.err());
+            assertTrue(r.err().contains(c[0] + ": empty layer pattern"), r.err());
+        }
+    }
+
+    @Test
     void check_outOfHeapOrStack_oneLineExit2() throws IOException {
         for (String name : new String[] {"huge.dxf", "deep.dxf"}) {
             Run r = check(file(name).toString());

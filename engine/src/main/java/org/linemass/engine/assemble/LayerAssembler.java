@@ -16,6 +16,7 @@ import org.linemass.engine.result.SectionUse;
 import org.linemass.engine.result.Severity;
 import org.linemass.engine.result.Totals;
 import org.linemass.engine.section.Section;
+import org.linemass.errors.InternalException;
 import org.linemass.geometry.Vec3;
 
 /**
@@ -62,8 +63,8 @@ public final class LayerAssembler {
             try {
                 length = removed.containsKey(name) ? raw.minus(removed.get(name)) : raw;
             } catch (IllegalArgumentException bug) {
-                throw new IllegalStateException("internal error, please report: the piece stage removed more length "
-                        + "from layer " + name + " than was drawn (" + bug.getMessage() + ")", bug);
+                throw new InternalException("the piece stage removed more length from layer " + name
+                        + " than was drawn (" + bug.getMessage() + ")", bug);
             }
             LayerMaterial mat = plan.forLayer(name);
             Moments mass = null;
