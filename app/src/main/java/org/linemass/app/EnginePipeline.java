@@ -1,26 +1,22 @@
 package org.linemass.app;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import org.linemass.drawing.Drawing;
 import org.linemass.engine.AnalysisException;
 import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.Analyzer;
-import org.linemass.engine.pieces.Piece;
 import org.linemass.engine.pieces.PieceAnalysis;
 import org.linemass.engine.pieces.PieceAnalyzer;
 import org.linemass.engine.result.DrawingResult;
 import org.linemass.importer.DxfImporter;
 import org.linemass.importer.DxfInputException;
 import org.linemass.importer.ImportOptions;
-import org.linemass.reports.PieceShapes;
 import org.linemass.reports.Report;
 
 /**
  * The real pipeline: {@link DxfImporter#read} then {@link Analyzer#analyze} with the standard piece
- * stage, keeping each piece's exact segments so the picture can draw them (sampled within a chord
- * tolerance; no number is computed from the samples).
+ * stage; the report's piece pictures are sampled from the exact segments the result carries
+ * (within a chord tolerance; no number is computed from the samples).
  */
 public final class EnginePipeline implements DrawingPipeline {
 
@@ -51,15 +47,14 @@ public final class EnginePipeline implements DrawingPipeline {
      */
     public static Report report(Drawing drawing, AnalysisSettings settings, StageWatch watch)
             throws AnalysisException {
-        List<Piece> kept = new ArrayList<>();
         watch.entering("expanding blocks and adding up layers");
+        // the standard piece stage, wrapped only to tell the watch when it starts and ends
         DrawingResult result = Analyzer.analyze(drawing, settings, (world, tol, lookup, mirror) -> {
             watch.entering("joining and checking pieces");
             PieceAnalysis pa = PieceAnalyzer.analyze(world, tol, lookup, mirror);
-            kept.addAll(pa.pieces());
             watch.entering("grouping marks and writing totals");
             return pa;
         });
-        return new Report(result, PieceShapes.of(result, kept));
+        return Report.of(result);
     }
 }

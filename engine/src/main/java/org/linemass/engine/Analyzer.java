@@ -22,7 +22,6 @@ import org.linemass.engine.field.PieceValue;
 import org.linemass.engine.integrate.MomentIntegrator;
 import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.MomentsAccumulator;
-import org.linemass.engine.pieces.Piece;
 import org.linemass.engine.pieces.PieceAnalysis;
 import org.linemass.engine.pieces.PieceAnalyzer;
 import org.linemass.engine.pieces.SectionLookup;
@@ -60,30 +59,13 @@ public final class Analyzer {
     }
 
     /**
-     * Analyses a drawing with the given piece stage.
+     * Analyses a drawing with the given piece stage. The result carries each piece's exact segments
+     * by piece id ({@link DrawingResult#pieceSegments}), so writers need nothing else from the engine.
      *
      * @throws AnalysisException for unknown sections, bad density expressions or tolerances, or a density
      *     that cannot be evaluated along a wire
      */
     public static DrawingResult analyze(Drawing drawing, AnalysisSettings settings, PieceStage stage)
-            throws AnalysisException {
-        return analyzeWithPieces(drawing, settings, stage).result();
-    }
-
-    /**
-     * The result together with the stage's pieces in piece-id order ({@code pieces.get(id - 1)} is the
-     * piece behind {@code PieceResult} {@code id}), for writers that draw each piece's true curves.
-     * Empty when no pieces were formed.
-     */
-    public record Detailed(DrawingResult result, List<Piece> pieces) {
-
-        public Detailed {
-            pieces = List.copyOf(pieces);
-        }
-    }
-
-    /** As {@link #analyze(Drawing, AnalysisSettings, PieceStage)}, also returning the pieces by id. */
-    public static Detailed analyzeWithPieces(Drawing drawing, AnalysisSettings settings, PieceStage stage)
             throws AnalysisException {
         MaterialPlan plan = MaterialPlan.of(settings);
         ResolvedDrawing resolved = Resolver.resolve(drawing, settings);
@@ -103,7 +85,7 @@ public final class Analyzer {
         Map<String, Moments> removed = Map.of();
         PieceAssembler.Output pieces = PieceAssembler.Output.EMPTY;
         List<Finding> stageFindings = List.of();
-        List<Piece> byId = List.of();
+        Map<Integer, List<Segment>> byId = Map.of();
         try {
             Optional<List<Segment>> world = resolved.worldSegments();
             if (world.isPresent()) {
@@ -112,11 +94,11 @@ public final class Analyzer {
                 removed = removedMoments(pa.removed(), tol);
                 pieces = PieceAssembler.assemble(pa, plan, tol);
                 stageFindings = pa.findings();
-                Piece[] ordered = new Piece[pa.pieces().size()];
-                for (int i = 0; i < ordered.length; i++) {
-                    ordered[pieces.idByStageIndex().get(i) - 1] = pa.pieces().get(i);
+                Map<Integer, List<Segment>> ordered = new TreeMap<>();
+                for (int i = 0; i < pa.pieces().size(); i++) {
+                    ordered.put(pieces.idByStageIndex().get(i), pa.pieces().get(i).segments());
                 }
-                byId = List.of(ordered);
+                byId = ordered;
             } else {
                 findings.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
                         String.format(Locale.ROOT, "the drawing expands to more than %d segments; lengths and masses "
@@ -138,9 +120,9 @@ public final class Analyzer {
             // order within a severity (import notes, layers, then the piece stage's order) stays
             findings.sort(java.util.Comparator.comparing(Finding::severity).reversed());
             reasons.addAll(layers.incompleteReasons());
-            return new Detailed(new DrawingResult(new DrawingInfo(drawing.file(), drawing.dxfVersion(),
-                    drawing.binary(), drawing.unit(), drawing.unitSource()), resolved.entities(), layers.layers(),
-                    pieces.pieces(), pieces.marks(), findings, layers.totals(), layers.sections(), reasons), byId);
+            return new DrawingResult(new DrawingInfo(drawing.file(), drawing.dxfVersion(), drawing.binary(),
+                    drawing.unit(), drawing.unitSource()), resolved.entities(), layers.layers(), pieces.pieces(),
+                    pieces.marks(), findings, layers.totals(), layers.sections(), reasons, byId);
         } catch (FieldException e) {
             throw new AnalysisException(drawing.file() + ": " + e.getMessage());
         }

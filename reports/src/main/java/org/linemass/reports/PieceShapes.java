@@ -1,26 +1,20 @@
 package org.linemass.reports;
 
-import java.util.ArrayDeque;
-import java.util.Deque;
-import java.util.HashMap;
+import java.util.Collection;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import org.linemass.engine.pieces.Piece;
 import org.linemass.engine.result.DrawingResult;
-import org.linemass.engine.result.PieceResult;
-import org.linemass.engine.result.SourceRef;
 import org.linemass.geometry.Box3;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Vec3;
 
 /**
- * Builds the {@link Report#pieceShapes} of a result from the engine's pieces (their segments in
- * world metres): each piece is matched to its {@link PieceResult} by layer, exact start and end
- * point and source entities (the engine copies these from the piece unchanged), then sampled with
- * {@link ShapeSampler} to a chord tolerance of {@value #CHORD_SHARE} of the drawing's extent, well
- * below a pixel of the picture. Pieces that match no result are left out; results without a piece
- * are drawn from start to end by the writers.
+ * Builds the {@link Report#pieceShapes} of a result from the exact piece segments it carries by
+ * piece id ({@link DrawingResult#pieceSegments}, world metres): each is sampled with
+ * {@link ShapeSampler} to a chord tolerance of {@value #CHORD_SHARE} of the extent of all the
+ * pieces, well below a pixel of the picture. Results without segments for a piece are drawn from
+ * start to end by the writers. No number is computed from the samples.
  */
 public final class PieceShapes {
 
@@ -32,35 +26,24 @@ public final class PieceShapes {
     private PieceShapes() {
     }
 
-    /** The sampled shapes of {@code pieces} keyed by the id of the matching piece result. */
-    public static Map<Integer, List<Vec3>> of(DrawingResult result, List<Piece> pieces) {
-        Map<Key, Deque<Integer>> ids = new HashMap<>();
-        for (PieceResult p : result.pieces()) {
-            ids.computeIfAbsent(new Key(p.layer(), p.startM(), p.endM(), p.sources()), k -> new ArrayDeque<>())
-                    .add(p.id());
-        }
-        double chord = Math.max(CHORD_SHARE * diagonal(pieces), MIN_CHORD_M);
+    /** The sampled shape of every piece of {@code result} that has segments, by piece id. */
+    public static Map<Integer, List<Vec3>> of(DrawingResult result) {
+        Map<Integer, List<Segment>> byId = result.pieceSegments();
+        double chord = Math.max(CHORD_SHARE * diagonal(byId.values()), MIN_CHORD_M);
         Map<Integer, List<Vec3>> shapes = new TreeMap<>();
-        for (Piece piece : pieces) {
-            if (piece.segments().isEmpty()) {
-                continue;
+        byId.forEach((id, segs) -> {
+            if (!segs.isEmpty()) {
+                shapes.put(id, ShapeSampler.sample(segs, chord));
             }
-            List<Segment> segs = piece.segments();
-            Key key = new Key(piece.layer(), segs.get(0).start(), segs.get(segs.size() - 1).end(),
-                    segs.stream().map(s -> SourceRef.of(s.source())).toList());
-            Deque<Integer> q = ids.get(key);
-            if (q != null && !q.isEmpty()) {
-                shapes.put(q.poll(), ShapeSampler.sample(segs, chord));
-            }
-        }
+        });
         return shapes;
     }
 
-    private static double diagonal(List<Piece> pieces) {
+    private static double diagonal(Collection<List<Segment>> pieces) {
         double[] lo = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY};
         double[] hi = {Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
-        for (Piece p : pieces) {
-            for (Segment s : p.segments()) {
+        for (List<Segment> p : pieces) {
+            for (Segment s : p) {
                 Box3 b = s.bounds();
                 for (int a = 0; a < 3; a++) {
                     lo[a] = Math.min(lo[a], b.min().get(a));
@@ -73,8 +56,5 @@ public final class PieceShapes {
         }
         double d = new Vec3(hi[0] - lo[0], hi[1] - lo[1], hi[2] - lo[2]).norm();
         return Double.isFinite(d) ? d : 0;
-    }
-
-    private record Key(String layer, Vec3 start, Vec3 end, List<SourceRef> sources) {
     }
 }

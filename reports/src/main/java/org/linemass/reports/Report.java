@@ -8,7 +8,7 @@ import org.linemass.geometry.Vec3;
 
 /**
  * What the writers print for one drawing: the engine's result plus, for pictures, a sampled
- * centre-line polyline per piece id (world metres). Pieces without a shape are drawn from their
+ * centre-line polyline per piece id (world metres), made from the result itself by {@link #of}. Pieces without a shape are drawn from their
  * start to their end point; an empty map is allowed.
  */
 public record Report(DrawingResult result, Map<Integer, List<Vec3>> pieceShapes) {
@@ -22,9 +22,9 @@ public record Report(DrawingResult result, Map<Integer, List<Vec3>> pieceShapes)
         pieceShapes = java.util.Collections.unmodifiableMap(copy);
     }
 
-    /** A report without piece shapes. */
+    /** The report of a result: its pieces' shapes sampled from the segments it carries ({@link PieceShapes}). */
     public static Report of(DrawingResult result) {
-        return new Report(result, Map.of());
+        return new Report(result, PieceShapes.of(result));
     }
 
     /** The shape of one piece, or an empty list when none was supplied. */

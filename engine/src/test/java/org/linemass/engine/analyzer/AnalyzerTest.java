@@ -153,12 +153,13 @@ class AnalyzerTest {
         assertEquals("M02", r.pieces().get(0).mark());
         assertEquals("M01", r.pieces().get(4).mark());
         assertTrue(r.pieces().get(1).centroidM().y() < r.pieces().get(2).centroidM().y());
-        // the detailed call hands back the stage's piece behind every id
-        Analyzer.Detailed detailed = Analyzer.analyzeWithPieces(d.build(), settings("LINKS=RB8"), SimpleStages.CHAIN);
-        for (var p : detailed.result().pieces()) {
-            var piece = detailed.pieces().get(p.id() - 1);
-            assertEquals(p.segments(), piece.segments().size());
-            assertEquals(p.startM(), piece.segments().get(0).start());
+        // the result carries the stage's piece segments behind every id
+        assertEquals(r.pieces().size(), r.pieceSegments().size());
+        for (var p : r.pieces()) {
+            var segs = r.pieceSegments(p.id());
+            assertEquals(p.segments(), segs.size());
+            assertEquals(p.startM(), segs.get(0).start());
+            assertEquals(p.endM(), segs.get(segs.size() - 1).end());
         }
         assertEquals(List.of(1, 2, 3, 4), links.pieceIds());
     }

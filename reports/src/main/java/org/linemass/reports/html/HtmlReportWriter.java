@@ -12,7 +12,7 @@ import org.linemass.engine.result.PieceResult;
 import org.linemass.engine.result.Totals;
 import org.linemass.geometry.Vec3;
 import org.linemass.reports.Caution;
-import org.linemass.reports.CombinedTotals;
+import org.linemass.engine.result.CombinedTotals;
 import org.linemass.reports.Report;
 import org.linemass.reports.Words;
 import org.linemass.reports.UnitSystem;

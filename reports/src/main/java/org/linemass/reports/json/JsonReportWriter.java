@@ -23,7 +23,7 @@ import org.linemass.engine.moments.PrincipalAxes;
 import org.linemass.engine.moments.Sym3;
 import org.linemass.geometry.Vec3;
 import org.linemass.reports.Caution;
-import org.linemass.reports.CombinedTotals;
+import org.linemass.engine.result.CombinedTotals;
 import org.linemass.reports.Report;
 
 /**

@@ -1,4 +1,4 @@
-package org.linemass.reports;
+package org.linemass.engine.result;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -8,17 +8,26 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.Sym3;
-import org.linemass.engine.result.Totals;
 import org.linemass.geometry.Vec3;
 import org.junit.jupiter.api.Test;
 
 class CombinedTotalsTest {
 
+    /** Linear density of a 10 mm bar, kg/m (a sample value; any positive density shows the combination). */
+    private static final double B10_KG_PER_M = 0.617;
+
+    /** Moments of a thin straight rod of unit density: L, midpoint, (L/12) d d^T (Beer and Johnston, ch. 9). */
+    private static Moments rod(Vec3 a, Vec3 b) {
+        Vec3 d = b.minus(a);
+        double l = d.norm();
+        return new Moments(l, a.plus(b).times(0.5), Sym3.outer(d).times(l / 12.0), 0);
+    }
+
     /** Sums of a few doubles of order 1: a few ulps (1e-15) are expected; 1e-12 leaves room. */
     private static final double TOL = 1e-12;
 
     private static Totals rodTotals(double y, Double kgPerM) {
-        Moments m = Fixtures.rod(new Vec3(0, y, 0), new Vec3(1, y, 0));
+        Moments m = rod(new Vec3(0, y, 0), new Vec3(1, y, 0));
         Moments mass = kgPerM == null ? null : m.scaledDensity(kgPerM);
         return new Totals(m.mass(), m.mass(), m.centroid(), m.inertia(), mass == null ? null : mass.mass(),
                 mass == null ? null : mass.centroid(), mass == null ? null : mass.inertia(), kgPerM != null, 1e-15);
@@ -44,8 +53,8 @@ class CombinedTotalsTest {
     @Test
     void of_oneDrawingWithoutMass_givesPartialMassOfTheOther() {
         // the B10 bar: 0.617 kg/m (FACTS.md section 1.1)
-        Totals t = CombinedTotals.of(List.of(rodTotals(0, Fixtures.B10_KG_PER_M), rodTotals(1, null)));
-        assertEquals(Fixtures.B10_KG_PER_M, t.massKg(), TOL);
+        Totals t = CombinedTotals.of(List.of(rodTotals(0, B10_KG_PER_M), rodTotals(1, null)));
+        assertEquals(B10_KG_PER_M, t.massKg(), TOL);
         assertFalse(t.massComplete());
         assertTrue(t.centroidM().closeTo(new Vec3(0.5, 0, 0), TOL));
         assertEquals(2.0, t.lengthM(), TOL);

@@ -1,9 +1,8 @@
-package org.linemass.reports;
+package org.linemass.engine.result;
 
 import java.util.List;
 import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.Sym3;
-import org.linemass.engine.result.Totals;
 import org.linemass.geometry.Vec3;
 
 /**
@@ -12,7 +11,9 @@ import org.linemass.geometry.Vec3;
  * inertia-form tensors J of the results are turned back into covariances with
  * {@code C = (trace(J)/2) I - J} (since {@code J = trace(C) I - C}). Mass values are combined over
  * the drawings that have a mass; the combined mass is complete only when every drawing's is.
- * An empty list gives zero length and null mass.
+ * An empty list gives zero length and null mass. This is the engine's moment algebra, so the
+ * writers print combined totals without doing any of it themselves
+ * ({@link DrawingResult#combinedTotals}).
  */
 public final class CombinedTotals {
 
