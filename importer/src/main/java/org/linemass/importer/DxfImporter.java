@@ -42,7 +42,7 @@ public final class DxfImporter {
     public static Drawing read(Path file, ImportOptions options) throws DxfInputException {
         String name = file.toString();
         try (FileChannel ch = FileChannel.open(file, StandardOpenOption.READ)) {
-            byte[] head = new byte[BinaryGroupSource.SENTINEL.length];
+            byte[] head = new byte[BinaryGroupSource.sentinelLength()];
             ByteBuffer hb = ByteBuffer.wrap(head);
             while (hb.hasRemaining() && ch.read(hb) >= 0) {
                 // keep reading until the head is full or the file ends
@@ -50,7 +50,7 @@ public final class DxfImporter {
             int got = hb.position();
             GroupSource src;
             if (BinaryGroupSource.startsWithSentinel(head, got)) {
-                ch.position(BinaryGroupSource.SENTINEL.length);
+                ch.position(BinaryGroupSource.sentinelLength());
                 src = BinaryGroupSource.of(name, ch, options.maxLineBytes());
             } else {
                 ch.position(startsWithBom(head, got) ? UTF8_BOM.length : 0);

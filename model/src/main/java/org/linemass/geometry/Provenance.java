@@ -25,10 +25,10 @@ public final class Provenance {
 
     /**
      * Recently used scopes, so the provenances of one file, layer, type and block path share one
-     * scope object. Direct-mapped and unsynchronised: a slot holds an immutable record, and a lost
-     * race only costs a duplicate scope. Bounded, so it keeps at most a few hundred small values.
+     * scope object. Direct-mapped, one table per thread: imports or analyses running side by side
+     * share no mutable state. Bounded, so each thread keeps at most a few hundred small values.
      */
-    private static final Scope[] SCOPES = new Scope[SCOPE_SLOTS];
+    private static final ThreadLocal<Scope[]> SCOPES = ThreadLocal.withInitial(() -> new Scope[SCOPE_SLOTS]);
 
     /** The components many provenances have in common. */
     record Scope(String file, String layer, String entityType, List<String> blockPath) {
@@ -62,13 +62,14 @@ public final class Provenance {
         int h = 31 * (31 * (31 * Objects.hashCode(file) + Objects.hashCode(layer)) + Objects.hashCode(entityType))
                 + blockPath.hashCode();
         int slot = (h ^ (h >>> 16)) & (SCOPE_SLOTS - 1);
-        Scope s = SCOPES[slot];
+        Scope[] scopes = SCOPES.get();
+        Scope s = scopes[slot];
         if (s != null && Objects.equals(s.file(), file) && Objects.equals(s.layer(), layer)
                 && Objects.equals(s.entityType(), entityType) && s.blockPath().equals(blockPath)) {
             return s;
         }
         s = new Scope(file, layer, entityType, blockPath);
-        SCOPES[slot] = s;
+        scopes[slot] = s;
         return s;
     }
 

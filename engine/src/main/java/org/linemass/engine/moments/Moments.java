@@ -81,11 +81,6 @@ public record Moments(double mass, Vec3 centroid, Sym3 covariance, double errorB
         return new Moments(m, g, c, errorBound + o.errorBound);
     }
 
-    /** The moments of the same curve seen with its centroid moved by {@code shift} (a pure translation). */
-    public Moments translated(Vec3 shift) {
-        return new Moments(mass, centroid.plus(shift), covariance, errorBound);
-    }
-
     /** Second moment about the centroid in inertia form: {@code trace(C) I - C}. */
     public Sym3 inertia() {
         return covariance.inertiaFromCovariance();

@@ -19,11 +19,6 @@ public enum Shape {
         this.dimensions = dimensions;
     }
 
-    /** Number of dimensions the shape takes. */
-    public int dimensions() {
-        return dimensions;
-    }
-
     public String id() {
         return name().toLowerCase(Locale.ROOT);
     }

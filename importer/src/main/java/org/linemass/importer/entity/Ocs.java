@@ -25,12 +25,17 @@ public final class Ocs {
     record Frame(Vec3 extrusion, Affine map, Vec3 x, Vec3 y, Vec3 minusY) {
     }
 
-    /** The frame of the last extrusion asked for (an immutable value; drawings mostly use one). */
-    private static volatile Frame last = new Frame(Vec3.Z, Affine.IDENTITY, Vec3.X, Vec3.Y, new Vec3(0, -1, 0));
+    /**
+     * The frame of the last extrusion asked for on this thread (an immutable value; drawings mostly
+     * use one). Confined to the thread, so imports running side by side share nothing.
+     */
+    private static final ThreadLocal<Frame[]> LAST = ThreadLocal.withInitial(
+            () -> new Frame[] {new Frame(Vec3.Z, Affine.IDENTITY, Vec3.X, Vec3.Y, new Vec3(0, -1, 0))});
 
     /** {@link #of(Vec3)} with its axes, reusing the previous frame's objects for an equal extrusion. */
     static Frame frame(Vec3 extrusion) throws EntitySkip {
-        Frame f = last;
+        Frame[] last = LAST.get();
+        Frame f = last[0];
         if (f.extrusion().equals(extrusion)) {
             return f;
         }
@@ -40,7 +45,7 @@ public final class Ocs {
         CircularArc plus = CircularArc.of(Vec3.ZERO, 1, x, map.applyLinear(Vec3.Y), 0, 1, null);
         CircularArc minus = CircularArc.of(Vec3.ZERO, 1, plus.u(), map.applyLinear(Vec3.Y).negate(), 0, 1, null);
         f = new Frame(extrusion, map, plus.u(), plus.v(), minus.v());
-        last = f;
+        last[0] = f;
         return f;
     }
 

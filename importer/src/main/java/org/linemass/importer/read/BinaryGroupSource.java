@@ -15,8 +15,8 @@ import org.linemass.importer.DxfInputException;
  */
 public final class BinaryGroupSource extends GroupSource {
 
-    /** The sentinel: "AutoCAD Binary DXF" CR LF SUB NUL. */
-    public static final byte[] SENTINEL =
+    /** The sentinel: "AutoCAD Binary DXF" CR LF SUB NUL. Private: an array cannot be made read-only. */
+    private static final byte[] SENTINEL =
             "AutoCAD Binary DXF\r\n\u001a\u0000".getBytes(StandardCharsets.ISO_8859_1);
 
     private final ByteWindow w;
@@ -51,6 +51,12 @@ public final class BinaryGroupSource extends GroupSource {
         return new BinaryGroupSource(file, w, maxStringBytes);
     }
 
+    /** Length of the sentinel in bytes, where the groups of a binary file start. */
+    public static int sentinelLength() {
+        return SENTINEL.length;
+    }
+
+    /** Whether the first {@code length} bytes of {@code head} start with the sentinel. */
     public static boolean startsWithSentinel(byte[] head, int length) {
         if (length < SENTINEL.length) {
             return false;

@@ -30,7 +30,6 @@ public final class Record {
     long badPosition = -1;
     int badCode;
     String badText = "";
-    boolean endOfInput;
     boolean keepSubclassMarkers;
     boolean keepAll = true;
     boolean lwpolyline;
@@ -58,7 +57,6 @@ public final class Record {
         handleBits = -1;
         layer = "0";
         badPosition = -1;
-        endOfInput = false;
     }
 
     void add(int code, double num) {
@@ -122,11 +120,6 @@ public final class Record {
 
     public String layer() {
         return layer;
-    }
-
-    /** True when the input ended right after this record (no following 0 group). */
-    public boolean endOfInput() {
-        return endOfInput;
     }
 
     public int size() {

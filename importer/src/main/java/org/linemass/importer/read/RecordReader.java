@@ -76,14 +76,12 @@ public final class RecordReader {
         if (rec.type.equals("EOF")) {
             // nothing after EOF is read: trailing bytes may be anything
             atEnd = true;
-            rec.endOfInput = true;
             return true;
         }
         try {
             while (true) {
                 if (!src.next()) {
                     atEnd = true;
-                    rec.endOfInput = true;
                     return true;
                 }
                 int code = src.code();

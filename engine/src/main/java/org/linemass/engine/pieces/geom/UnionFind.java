@@ -41,9 +41,4 @@ public final class UnionFind {
         parent[rb] = ra;
         size[ra] += size[rb];
     }
-
-    /** Size of the set containing {@code i}. */
-    public int sizeOf(int i) {
-        return size[find(i)];
-    }
 }
