@@ -6,7 +6,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.result.Finding;
 import org.linemass.importer.DxfInputException;

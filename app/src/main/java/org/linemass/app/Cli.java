@@ -3,7 +3,7 @@ package org.linemass.app;
 import java.io.IOException;
 import java.lang.reflect.Constructor;
 import java.util.List;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 import org.linemass.errors.InternalException;
 import org.linemass.importer.DxfInputException;
 import picocli.CommandLine;

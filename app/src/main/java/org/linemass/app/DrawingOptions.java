@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.linemass.drawing.LengthUnit;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.section.LayerAssignment;
 import org.linemass.engine.section.SectionTable;

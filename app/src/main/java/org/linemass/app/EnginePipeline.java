@@ -2,7 +2,7 @@ package org.linemass.app;
 
 import java.nio.file.Path;
 import org.linemass.drawing.Drawing;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.Analyzer;
 import org.linemass.engine.pieces.PieceAnalysis;

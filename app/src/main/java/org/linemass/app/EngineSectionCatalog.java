@@ -2,7 +2,7 @@ package org.linemass.app;
 
 import java.nio.file.Path;
 import java.util.List;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.section.AssignmentReader;
 import org.linemass.engine.section.BuiltInSections;
 import org.linemass.engine.section.LayerAssignment;

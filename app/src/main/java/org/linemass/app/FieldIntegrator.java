@@ -2,7 +2,7 @@ package org.linemass.app;
 
 import java.nio.file.Path;
 import java.util.List;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.importer.DxfInputException;
 import org.linemass.importer.ImportOptions;

@@ -2,7 +2,7 @@ package org.linemass.app;
 
 import java.nio.file.Path;
 import java.util.Locale;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 
 /**
  * Turns the JVM running out of heap or stack while a drawing is read or analysed into the one-line

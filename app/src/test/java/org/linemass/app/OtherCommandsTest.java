@@ -11,7 +11,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.linemass.app.AppFixtures.FakePipeline;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.section.LayerAssignment;
 import org.linemass.engine.section.Section;
 import org.linemass.engine.section.SectionTable;

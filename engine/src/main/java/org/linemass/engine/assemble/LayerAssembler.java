@@ -6,7 +6,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
 import org.linemass.drawing.Drawing;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.MomentsAccumulator;
 import org.linemass.engine.result.Finding;

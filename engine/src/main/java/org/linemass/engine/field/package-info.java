@@ -3,6 +3,6 @@
  * and s, metres along the piece from its start) for tapered, graded or coated members, and the
  * line integral of any expression over each piece and layer with its error bound (the
  * {@code integrate} command). Expressions are parsed with exp4j. The entry point for integrals is
- * {@link org.linemass.engine.Analyzer#integrateField}.
+ * {@code Analyzer.integrateField}.
  */
 package org.linemass.engine.field;

@@ -1,6 +1,7 @@
 package org.linemass.engine.pieces;
 
 import java.util.List;
+import org.linemass.engine.piece.Piece;
 import org.linemass.engine.result.Finding;
 import org.linemass.geometry.Segment;
 

@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
+import org.linemass.engine.piece.Piece;
+import org.linemass.engine.piece.SectionLookup;
 import org.linemass.engine.pieces.checks.BendCheck;
 import org.linemass.engine.pieces.checks.BendFinder;
 import org.linemass.engine.pieces.checks.ContactCheck;

@@ -8,7 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 
 /**
  * Layer-to-section assignments: a CSV file with a header row and columns {@code layer} (a glob with

@@ -4,7 +4,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 
 /**
  * Decides the section of each layer: the last assignment whose glob matches the layer wins; its id

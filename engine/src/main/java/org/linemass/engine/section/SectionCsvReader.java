@@ -11,7 +11,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 
 /**
  * Reads a user section table in CSV. Format: a header row, then one section per row.

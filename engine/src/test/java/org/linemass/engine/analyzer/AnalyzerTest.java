@@ -11,7 +11,7 @@ import java.util.Map;
 import org.linemass.drawing.ImportNote;
 import org.linemass.drawing.LengthUnit;
 import org.linemass.drawing.UnitSource;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.Analyzer;
 import org.linemass.engine.field.FieldIntegralResult;

@@ -12,7 +12,7 @@ import org.junit.jupiter.api.Test;
 import org.linemass.drawing.Drawing;
 import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.Analyzer;
-import org.linemass.engine.pieces.Piece;
+import org.linemass.engine.piece.Piece;
 import org.linemass.engine.pieces.PieceAnalysis;
 import org.linemass.engine.pieces.PieceAnalyzer;
 import org.linemass.engine.assemble.PieceForms;

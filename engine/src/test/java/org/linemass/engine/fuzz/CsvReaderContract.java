@@ -8,7 +8,7 @@ import java.io.ByteArrayInputStream;
 import java.io.InputStreamReader;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 
 /**
  * What the CSV readers promise for any file content: they return a result or throw

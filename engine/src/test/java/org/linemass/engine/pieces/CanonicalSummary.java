@@ -3,6 +3,7 @@ package org.linemass.engine.pieces;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.linemass.engine.piece.Piece;
 import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.engine.result.Bend;
 import org.linemass.engine.result.Finding;

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.linemass.engine.piece.Piece;
 import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.FindingKind;

@@ -1,6 +1,7 @@
 package org.linemass.engine.pieces;
 
 import java.util.Optional;
+import org.linemass.engine.piece.SectionLookup;
 import org.linemass.tolerance.Tolerances;
 import org.linemass.engine.section.Section;
 import org.linemass.geometry.CircularArc;

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.linemass.engine.piece.Piece;
 import org.linemass.tolerance.Tolerances;
 import org.linemass.geometry.Affine;
 import org.linemass.geometry.Segment;

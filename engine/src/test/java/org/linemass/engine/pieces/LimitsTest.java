@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import java.util.List;
 import java.util.Optional;
 import org.junit.jupiter.api.Test;
+import org.linemass.engine.piece.Piece;
 import org.linemass.tolerance.Tolerances;
 import org.linemass.engine.result.Bend;
 import org.linemass.engine.result.Finding;

@@ -10,6 +10,7 @@ import java.util.Map;
 import java.util.TreeMap;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.linemass.engine.piece.Piece;
 import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.FindingKind;

@@ -9,6 +9,7 @@ import java.util.TreeMap;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
+import org.linemass.engine.piece.Piece;
 import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.engine.result.Finding;
 import org.linemass.geometry.Affine;

@@ -3,7 +3,7 @@ package org.linemass.engine.testing;
 import java.util.ArrayList;
 import java.util.List;
 import org.linemass.engine.Analyzer;
-import org.linemass.engine.pieces.Piece;
+import org.linemass.engine.piece.Piece;
 import org.linemass.engine.pieces.PieceAnalysis;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.FindingKind;

@@ -3,7 +3,7 @@ package org.linemass.engine.pieces.checks;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.Optional;
-import org.linemass.engine.pieces.SectionLookup;
+import org.linemass.engine.piece.SectionLookup;
 import org.linemass.engine.section.Section;
 
 /**

@@ -6,7 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.linemass.tolerance.Tolerances;
-import org.linemass.engine.pieces.Piece;
+import org.linemass.engine.piece.Piece;
 
 /**
  * Groups identical pieces. Candidates share a bucket: the same section key, open or closed, and

@@ -2,7 +2,7 @@ package org.linemass.engine.pieces.marks;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.linemass.engine.pieces.Piece;
+import org.linemass.engine.piece.Piece;
 import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.EllipticalArc;

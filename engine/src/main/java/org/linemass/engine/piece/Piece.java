@@ -1,4 +1,4 @@
-package org.linemass.engine.pieces;
+package org.linemass.engine.piece;
 
 import java.util.List;
 import org.linemass.engine.result.Bend;

@@ -1,4 +1,4 @@
-package org.linemass.engine.pieces;
+package org.linemass.engine.piece;
 
 import java.util.Optional;
 import org.linemass.engine.section.Section;

@@ -1,4 +1,4 @@
-package org.linemass.engine;
+package org.linemass.engine.error;
 
 /**
  * Settings or data that make an analysis impossible (unknown section id, a density expression that
