@@ -5,7 +5,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import org.linemass.tolerance.Tolerances;
-import org.linemass.engine.pieces.geom.PointGrid;
+import org.linemass.engine.pieces.index.PointGrid;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.FindingKind;
 import org.linemass.engine.result.Severity;

@@ -3,7 +3,7 @@ package org.linemass.engine.pieces.checks;
 import java.util.ArrayList;
 import java.util.List;
 import org.linemass.tolerance.Tolerances;
-import org.linemass.engine.pieces.geom.BoxIndex;
+import org.linemass.engine.pieces.index.BoxIndex;
 import org.linemass.engine.pieces.geom.ClosestPoints;
 import org.linemass.engine.pieces.geom.Contact;
 import org.linemass.engine.pieces.geom.Curves;

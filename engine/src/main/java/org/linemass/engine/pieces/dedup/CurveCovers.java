@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.Map;
 import org.linemass.engine.pieces.checks.Findings;
 import org.linemass.engine.pieces.checks.SectionCache;
-import org.linemass.engine.pieces.geom.CandidatePairs;
+import org.linemass.engine.pieces.index.CandidatePairs;
 import org.linemass.engine.pieces.geom.ClosestPoints;
 import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.engine.result.Finding;

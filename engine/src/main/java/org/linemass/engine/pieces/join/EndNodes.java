@@ -1,8 +1,8 @@
 package org.linemass.engine.pieces.join;
 
 import java.util.List;
-import org.linemass.engine.pieces.geom.PointGrid;
-import org.linemass.engine.pieces.geom.UnionFind;
+import org.linemass.engine.pieces.index.PointGrid;
+import org.linemass.engine.pieces.index.UnionFind;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Vec3;
 

@@ -13,6 +13,7 @@ import org.linemass.geometry.Nurbs;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
+import org.linemass.engine.pieces.index.PointGrid;
 
 /** Lengths, tangents and closest points against closed forms and brute-force references. */
 class CurvesAndClosestPointsTest {

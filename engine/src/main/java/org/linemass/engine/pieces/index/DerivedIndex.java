@@ -1,4 +1,4 @@
-package org.linemass.engine.pieces.geom;
+package org.linemass.engine.pieces.index;
 
 import java.util.List;
 import java.util.function.IntConsumer;

@@ -1,4 +1,4 @@
-package org.linemass.engine.pieces.geom;
+package org.linemass.engine.pieces.index;
 
 /**
  * Disjoint sets over {@code 0..n-1} with path halving and union by size (Tarjan); near-constant
