@@ -3,7 +3,7 @@ package org.linemass.app;
 import java.io.StringReader;
 import java.util.List;
 import org.linemass.app.serve.AnalysisSetup;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.section.AssignmentReader;
 import org.linemass.engine.section.LayerAssignment;

@@ -1,7 +1,7 @@
 package org.linemass.app.serve;
 
 import java.util.List;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.section.LayerAssignment;
 import org.linemass.engine.section.SectionTable;

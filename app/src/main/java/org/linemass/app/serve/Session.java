@@ -8,7 +8,7 @@ import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutorService;
 import org.linemass.app.EnginePipeline;
 import org.linemass.drawing.Drawing;
-import org.linemass.engine.AnalysisException;
+import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.section.LayerAssignment;
 import org.linemass.engine.section.SectionTable;
