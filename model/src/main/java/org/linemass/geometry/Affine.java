@@ -87,6 +87,11 @@ public final class Affine {
         return m00 * (m11 * m22 - m12 * m21) - m01 * (m10 * m22 - m12 * m20) + m02 * (m10 * m21 - m11 * m20);
     }
 
+    /** The translation column: where the map sends the origin. */
+    public Vec3 translationPart() {
+        return new Vec3(tx, ty, tz);
+    }
+
     public Vec3 column(int j) {
         return switch (j) {
             case 0 -> new Vec3(m00, m10, m20);
