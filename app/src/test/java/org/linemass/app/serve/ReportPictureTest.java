@@ -76,6 +76,21 @@ class ReportPictureTest {
     }
 
     @Test
+    void everyMark_isLabelledOnItsPieces_atAFixedScreenSize() throws Exception {
+        Report r = demo();
+        // the first view's picture only (the demo has elevations too, each labelled the same)
+        String plain = new HtmlReportWriter(UnitSystem.METRIC).picture(r, "").split("<svg class=\"view\"")[1];
+        for (var g : r.result().groups()) {
+            // one label per piece of the mark (the demo has fewer pieces than the per-mark threshold)
+            int labels = plain.split("<g class=\"mark-label fixed\"[^>]*><text x=\"4\" y=\"-4\">"
+                    + Pattern.quote(g.mark()) + "</text>", -1).length - 1;
+            assertEquals(g.quantity(), labels, "labels of mark " + g.mark());
+        }
+        assertTrue(HtmlReportWriter.style().contains(".mark-label text{font-size:11px"),
+                "the labels are sized in screen pixels, kept while zooming by the fixed class");
+    }
+
+    @Test
     void isometricView_hasNoScaleBar() throws Exception {
         Path shelf = PageBrowserTest.corpus().resolve("v01_wire_shelf_lines_r2000_mm.dxf");
         assumeTrue(Files.isRegularFile(shelf), "../shared/corpus is not beside this checkout: test skipped");

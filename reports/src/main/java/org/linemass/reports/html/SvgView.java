@@ -39,6 +39,10 @@ final class SvgView {
     private static final double WIDE_BALLOON_R = 13;
     /** Notes (welds, junctions) get smaller balloons so errors and warnings stand out. */
     private static final double NOTE_BALLOON_R = 8;
+    /** Height of the mark labels on the pieces, px on screen (the style sheet's font size). */
+    static final int LABEL_PX = 11;
+    /** Up to this many pieces every piece is labelled with its mark; beyond, one piece per mark. */
+    static final int LABEL_EVERY_PIECE_UP_TO = 60;
     /** Ring drawn exactly at the finding's place, px. */
     private static final double RING_R = 5;
     /** Room kept between a balloon and the picture's edge, px. */
@@ -86,6 +90,7 @@ final class SvgView {
 
         StringBuilder body = new StringBuilder();
         pieces(body, lines, owners, f, units, markIndex);
+        markLabels(body, lines, owners, f);
         if (cog != null && cog.isFinite()) {
             cog(body, r, cog, f, units, ids, view);
         }
@@ -132,6 +137,54 @@ final class SvgView {
                     .append(units.shortLength(p.lengthM())).append(' ').append(units.shortUnit())
                     .append("</title></polyline>\n");
         }
+    }
+
+    /**
+     * The mark of each piece written beside it at a fixed screen size ({@value #LABEL_PX} px, kept
+     * while zooming like the markers), halfway along its polyline; on a drawing of more
+     * than {@value #LABEL_EVERY_PIECE_UP_TO} pieces only the first piece of each mark is labelled,
+     * so the labels stay readable.
+     */
+    private static void markLabels(StringBuilder s, List<List<Vec3>> lines, List<PieceResult> owners, Frame f) {
+        boolean every = lines.size() <= LABEL_EVERY_PIECE_UP_TO;
+        java.util.Set<String> done = new java.util.HashSet<>();
+        for (int i = 0; i < lines.size(); i++) {
+            PieceResult p = owners.get(i);
+            if (p.mark() == null || p.mark().isEmpty() || !every && !done.add(p.mark())) {
+                continue;
+            }
+            double[] at = halfway(lines.get(i), f);
+            if (at == null) {
+                continue;
+            }
+            s.append("<g class=\"mark-label fixed\"");
+            anchor(s, at[0], at[1]);
+            s.append("><text x=\"4\" y=\"-4\">").append(Html.escape(p.mark())).append("</text></g>\n");
+        }
+    }
+
+    /** The picture point halfway along a polyline (by its length in the picture), or null. */
+    private static double[] halfway(List<Vec3> pts, Frame f) {
+        double total = 0;
+        for (int k = 1; k < pts.size(); k++) {
+            total += Math.hypot(f.x(pts.get(k)) - f.x(pts.get(k - 1)), f.y(pts.get(k)) - f.y(pts.get(k - 1)));
+        }
+        if (!Double.isFinite(total)) {
+            return null;
+        }
+        double left = total / 2;
+        for (int k = 1; k < pts.size(); k++) {
+            double x0 = f.x(pts.get(k - 1));
+            double y0 = f.y(pts.get(k - 1));
+            double x1 = f.x(pts.get(k));
+            double y1 = f.y(pts.get(k));
+            double d = Math.hypot(x1 - x0, y1 - y0);
+            if (d >= left && d > 0) {
+                return new double[] {x0 + (x1 - x0) * left / d, y0 + (y1 - y0) * left / d};
+            }
+            left -= d;
+        }
+        return new double[] {f.x(pts.get(0)), f.y(pts.get(0))};
     }
 
     private static void cog(StringBuilder s, DrawingResult r, Vec3 cog, Frame f, UnitSystem units, String ids,
