@@ -42,6 +42,10 @@ public final class DrawingOptions {
             + "into model space; by default only model space counts and paper-space entities are only counted.")
     boolean paperSpace;
 
+    @Option(names = "--invisible", description = "Also read invisible entities (group code 60 = 1, drawn by no CAD "
+            + "program; dynamic-block states are stored this way); by default they are left out and counted.")
+    boolean invisible;
+
     @Option(names = "--section-table", paramLabel = "CSV",
             description = "Extra section rows (CSV); they replace built-in rows with the same id.")
     Path sectionTable;
@@ -95,7 +99,7 @@ public final class DrawingOptions {
     ImportOptions importOptions() throws InputProblem {
         try {
             return new ImportOptions(java.util.Optional.ofNullable(units), maxBlockDepth, maxLineBytes,
-                    maxControlPoints, maxVertices, paperSpace);
+                    maxControlPoints, maxVertices, paperSpace, invisible);
         } catch (IllegalArgumentException e) {
             throw new InputProblem(e.getMessage());
         }

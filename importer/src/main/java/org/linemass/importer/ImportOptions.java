@@ -15,10 +15,12 @@ import org.linemass.drawing.LengthUnit;
  * @param maxVertices largest allowed vertex count of one polyline
  * @param paperSpace read paper-space entities as well, into model space (by default only model
  *     space counts and paper-space entities are only counted)
+ * @param invisible read invisible entities (group 60 = 1) as well; by default they are left out and
+ *     counted, as no CAD program draws them (dynamic-block states are stored this way)
  * @throws IllegalArgumentException when a limit is below its minimum (depth 0, the others 1)
  */
 public record ImportOptions(Optional<LengthUnit> unitOverride, int maxBlockDepth, int maxLineBytes,
-        int maxControlPoints, int maxVertices, boolean paperSpace) {
+        int maxControlPoints, int maxVertices, boolean paperSpace, boolean invisible) {
 
     public static final ImportOptions DEFAULTS =
             new ImportOptions(Optional.empty(), 64, 1 << 20, 1_000_000, 10_000_000);
@@ -29,8 +31,15 @@ public record ImportOptions(Optional<LengthUnit> unitOverride, int maxBlockDepth
         this(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, false);
     }
 
+    /** Invisible entities left out, paper space as given. */
+    public ImportOptions(Optional<LengthUnit> unitOverride, int maxBlockDepth, int maxLineBytes, int maxControlPoints,
+            int maxVertices, boolean paperSpace) {
+        this(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, paperSpace, false);
+    }
+
     public ImportOptions {
         Objects.requireNonNull(unitOverride, "unitOverride");
+
         if (maxBlockDepth < 0 || maxLineBytes < 1 || maxControlPoints < 1 || maxVertices < 1) {
             throw new IllegalArgumentException("import limits out of range: maxBlockDepth=" + maxBlockDepth
                     + " (at least 0), maxLineBytes=" + maxLineBytes + ", maxControlPoints=" + maxControlPoints
@@ -40,11 +49,19 @@ public record ImportOptions(Optional<LengthUnit> unitOverride, int maxBlockDepth
 
     public ImportOptions withUnit(LengthUnit unit) {
         return new ImportOptions(Optional.ofNullable(unit), maxBlockDepth, maxLineBytes, maxControlPoints,
-                maxVertices, paperSpace);
+                maxVertices, paperSpace, invisible);
     }
 
     /** These options, reading paper space as well ({@code true}) or model space only. */
     public ImportOptions withPaperSpace(boolean read) {
-        return new ImportOptions(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, read);
+        return new ImportOptions(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, read,
+                invisible);
     }
+
+    /** These options, reading invisible entities (group 60 = 1) as well ({@code true}) or leaving them out. */
+    public ImportOptions withInvisible(boolean read) {
+        return new ImportOptions(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, paperSpace,
+                read);
+    }
+
 }

@@ -96,10 +96,10 @@ final class Dxf {
             } else if ((code >= 60 && code <= 79) || (code >= 170 && code <= 179) || (code >= 270 && code <= 289)
                     || (code >= 370 && code <= 389) || (code >= 400 && code <= 409) || (code >= 1060 && code <= 1070)) {
                 out.writeBytes(le(Long.parseLong(v.trim()), 2));
-            } else if ((code >= 90 && code <= 99) || (code >= 420 && code <= 429) || (code >= 440 && code <= 449)
+            } else if ((code >= 90 && code <= 99) || (code >= 420 && code <= 429) || (code >= 440 && code <= 459)
                     || code == 1071) {
                 out.writeBytes(le(Long.parseLong(v.trim()), 4));
-            } else if ((code >= 160 && code <= 169) || (code >= 450 && code <= 459)) {
+            } else if (code >= 160 && code <= 169) {
                 out.writeBytes(le(Long.parseLong(v.trim()), 8));
             } else if (code >= 290 && code <= 299) {
                 out.write(Integer.parseInt(v.trim()));

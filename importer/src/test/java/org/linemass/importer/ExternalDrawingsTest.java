@@ -64,10 +64,7 @@ class ExternalDrawingsTest {
 
     /** Classes of the issue not yet fixed: these files are expected to fail until they are. */
     static final Map<String, String> KNOWN_FAILURES = new TreeMap<>(Map.of(
-            "gdal__block-hidden-entities.dxf", "invisible entities (60 = 1) are counted",
-            "librecad__screw.dxf", "stray ENDSEC inside HEADER refuses the file",
-            "trimesh__insert.dxf", "INSERT with z scale 0 on flat blocks is skipped",
-            "trimesh__spline_1.dxf", "LWPOLYLINE without group 90 is skipped"));
+            "librecad__screw.dxf", "stray ENDSEC inside HEADER refuses the file"));
 
     static Path external() {
         return SharedFiles.repo().resolve("..").resolve("shared").resolve("external").normalize();

@@ -253,9 +253,9 @@ class HostileInputTest {
 
     @Test
     void zeroScaleInsert() throws Exception {
-        assertEquals("scale factor is zero (41/42/43 = 0.0, 1.0, 1.0)",
-                skipped(blocks(0, "BLOCK", 2, "A", 0, "ENDBLK").entities().add(0, "INSERT", 2, "A", 41, 0).end())
-                        .message());
+        assertEquals("x scale (group code 41) is 0 but block 'A' extends along its x axis (0.0 to 1.0): the insert "
+                + "would flatten it and change its lengths", skipped(blocks(0, "BLOCK", 2, "A", 0, "LINE", 11, 1,
+                        0, "ENDBLK").entities().add(0, "INSERT", 2, "A", 41, 0).end()).message());
     }
 
     @Test

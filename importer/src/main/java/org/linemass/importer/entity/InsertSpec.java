@@ -17,7 +17,11 @@ public record InsertSpec(String blockName, Vec3 insertion, double sx, double sy,
 
     private static final double QUARTER_TURN_DEGREES = 90.0;
 
-    /** Reads and validates an INSERT record; {@link EntitySkip} for a zero scale or bad numbers. */
+    /**
+     * Reads and validates an INSERT record; {@link EntitySkip} for bad numbers. A zero scale factor
+     * is kept: whether it collapses anything depends on the block, so the resolver decides (see
+     * {@link #flattened}).
+     */
     public static InsertSpec read(Record r, Provenance p) throws EntitySkip {
         String name = r.str(2, "");
         if (name.isEmpty()) {
@@ -27,9 +31,6 @@ public record InsertSpec(String blockName, Vec3 insertion, double sx, double sy,
         double sx = Values.real(r, 41, 1, "x scale");
         double sy = Values.real(r, 42, 1, "y scale");
         double sz = Values.real(r, 43, 1, "z scale");
-        if (sx == 0 || sy == 0 || sz == 0) {
-            throw new EntitySkip("scale factor is zero (41/42/43 = " + sx + ", " + sy + ", " + sz + ")");
-        }
         double rot = Values.real(r, 50, 0, "rotation");
         int cols = Values.integer(r, 70, 1, "column count");
         int rows = Values.integer(r, 71, 1, "row count");
@@ -44,6 +45,34 @@ public record InsertSpec(String blockName, Vec3 insertion, double sx, double sy,
         Vec3 n = Values.extrusion(r);
         Ocs.of(n);
         return new InsertSpec(name, ins, sx, sy, sz, rot, Math.max(cols, 1), Math.max(rows, 1), cs, rs, n, p);
+    }
+
+    /** The scale factor of block axis {@code axis} (0 x, 1 y, 2 z). */
+    public double scale(int axis) {
+        return axis == 0 ? sx : axis == 1 ? sy : sz;
+    }
+
+    /** True when some scale factor is zero. */
+    public boolean hasZeroScale() {
+        return sx == 0 || sy == 0 || sz == 0;
+    }
+
+    /**
+     * This insert with each zero scale factor replaced by 1, for a block whose content lies in the
+     * plane {@code coordinate[axis]} of each such axis: a zero scale maps that plane onto the base
+     * plane, which is what scale 1 does with the base point moved into the plane, so the caller
+     * places the block with {@link #flatBase} instead of its base point. Exact: every point of the
+     * block keeps its other coordinates, and its coordinate on the axis becomes 0 either way.
+     */
+    public InsertSpec flattened() {
+        return new InsertSpec(blockName, insertion, sx == 0 ? 1 : sx, sy == 0 ? 1 : sy, sz == 0 ? 1 : sz,
+                rotationDeg, columns, rows, columnSpacing, rowSpacing, extrusion, source);
+    }
+
+    /** The base point to place a block with after {@link #flattened}: on each zero axis, the content's plane. */
+    public Vec3 flatBase(Vec3 basePoint, Vec3 plane) {
+        return new Vec3(sx == 0 ? plane.x() : basePoint.x(), sy == 0 ? plane.y() : basePoint.y(),
+                sz == 0 ? plane.z() : basePoint.z());
     }
 
     /** Block definition coordinates to owner coordinates, for a block with {@code basePoint}. */

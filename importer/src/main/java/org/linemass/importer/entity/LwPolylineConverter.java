@@ -8,7 +8,9 @@ import org.linemass.importer.read.Record;
 /**
  * LWPOLYLINE: vertices 10/20 in the OCS of 210/220/230 at elevation 38, each followed by its
  * optional bulge 42 for the piece to the next vertex; flag 70 bit 1 closes the polyline with the
- * last vertex's bulge (FACTS.md §7.2). Widths are ignored. The vertex count 90 must match.
+ * last vertex's bulge (FACTS.md §7.2). Widths are ignored. The vertex count 90, when given, must
+ * match the vertices present; some writers leave it out, and then the vertices present are read
+ * (a missing count is not a count of zero).
  */
 final class LwPolylineConverter {
 
@@ -16,6 +18,7 @@ final class LwPolylineConverter {
     }
 
     static void convert(Record r, Provenance p, int maxVertices, List<Segment> out) throws EntitySkip {
+        boolean counted = r.indexOf(90) >= 0;
         int declared = Values.count(r, 90, "vertex count");
         if (declared > maxVertices) {
             throw new EntitySkip("declares " + declared + " vertices, more than the limit " + maxVertices);
@@ -29,7 +32,12 @@ final class LwPolylineConverter {
                 given++;
             }
         }
-        if (given != declared) {
+        if (!counted) {
+            if (given > maxVertices) {
+                throw new EntitySkip("has " + given + " vertices, more than the limit " + maxVertices);
+            }
+            declared = given;
+        } else if (given != declared) {
             throw new EntitySkip("declares " + declared + " vertices but has " + given);
         }
         // validate every value before the first piece, then emit pieces straight from the record

@@ -81,6 +81,21 @@ final class SplineConverter {
                 }
             }
         }
+        // a count group left out is not a count of zero: read what the record holds
+        if (r.indexOf(72) < 0) {
+            nKnots = hasKnots;
+        }
+        if (r.indexOf(73) < 0) {
+            nCtrl = hasCtrl;
+        }
+        if (r.indexOf(74) < 0) {
+            nFit = hasFit;
+        }
+        for (int[] c : new int[][] {{nKnots, 72}, {nCtrl, 73}, {nFit, 74}}) {
+            if (c[0] > maxPoints) {
+                throw new EntitySkip("has " + c[0] + " " + what(c[1]) + ", more than the limit " + maxPoints);
+            }
+        }
         if (hasKnots != nKnots) {
             throw new EntitySkip("declares " + nKnots + " knots but has " + hasKnots);
         }

@@ -79,7 +79,7 @@ public final class DrawingReader {
             if (!r.type().equals("SECTION")) {
                 throw in.error(r, "expected '0 SECTION' or '0 EOF' between sections");
             }
-            String name = r.str(2, "");
+            String name = r.str(2, "").trim();
             switch (name) {
                 case "HEADER" -> readHeader(r);
                 case "TABLES" -> readTables();
@@ -165,7 +165,7 @@ public final class DrawingReader {
                 case "ENDSEC" -> {
                     return;
                 }
-                case "TABLE" -> table = r.str(2, "");
+                case "TABLE" -> table = r.str(2, "").trim();
                 case "ENDTAB" -> table = "";
                 case "LAYER" -> {
                     if (table.equals("LAYER")) {
@@ -295,6 +295,7 @@ public final class DrawingReader {
         UnitChoice u = UnitChoice.of(header, options, file);
         u.note().ifPresent(n -> notes.add(0, n));
         paperSpaceNote().ifPresent(notes::add);
+        invisibleNote().ifPresent(notes::add);
         return new Drawing(file, header.acadVer(), src.binary(), u.unit(), u.source(), allLayers, built,
                 handler.paperSpaceEntities, notes);
     }
@@ -312,6 +313,22 @@ public final class DrawingReader {
                             + "--paper-space reads them too)"));
         }
         return java.util.Optional.empty();
+    }
+
+    /** How many invisible entities (group 60 = 1) were left out, per type, and the option that reads them. */
+    private java.util.Optional<ImportNote> invisibleNote() {
+        if (handler.invisible.isEmpty()) {
+            return java.util.Optional.empty();
+        }
+        long total = 0;
+        StringBuilder types = new StringBuilder();
+        for (Map.Entry<String, Integer> e : handler.invisible.entrySet()) {
+            total += e.getValue();
+            types.append(types.length() == 0 ? "" : ", ").append(e.getKey()).append(' ').append(e.getValue());
+        }
+        return java.util.Optional.of(Notes.of("info", "ignored_entity", file, 0, "", "", "", total
+                + " invisible entities (group code 60 = 1: " + types + ") were not read; no CAD program draws them"
+                + " (--invisible reads them too)"));
     }
 
     /** The unit, where it came from, and the note that says it was guessed. */

@@ -42,6 +42,8 @@ final class EntityHandler {
     private final List<String> converterWarnings = new java.util.ArrayList<>();
     /** Layer names used by entities read into blocks (pooled strings, so lookups are cheap). */
     final java.util.Set<String> usedLayers = new java.util.HashSet<>();
+    /** Invisible entities (group 60 = 1) left out, per DXF type (sorted, for a stable note). */
+    final java.util.Map<String, Integer> invisible = new java.util.TreeMap<>();
     /** The layer name last added to {@link #usedLayers}. */
     private String lastLayer;
 
@@ -63,6 +65,10 @@ final class EntityHandler {
         boolean paper = target == null;
         int line = lineOf(r.position());
         String layer = r.layer();
+        if (!paper && !options.invisible() && r.num(60, 0) == 1) {
+            leaveOutInvisible(r, in);
+            return;
+        }
         if (type.equals("POLYLINE")) {
             handlePolyline(r, in, paper ? null : target, provenance(r, layer, line, type, fromPaper));
             return;
@@ -111,6 +117,35 @@ final class EntityHandler {
             }
         } catch (EntitySkip e) {
             notes.add(Notes.of("error", "skipped_entity", file, line, type, r.handle(), layer, e.getMessage()));
+        }
+    }
+
+    /**
+     * Counts an invisible entity and reads past the records that belong to it (the vertices of a
+     * POLYLINE, the attributes of an INSERT), so that none of it reaches the block.
+     */
+    private void leaveOutInvisible(Record r, RecordStream in) throws DxfInputException, IOException {
+        String type = r.type();
+        invisible.merge(type.isEmpty() ? "(unnamed)" : type, 1, Integer::sum);
+        if (type.equals("POLYLINE")) {
+            long startPos = r.position();
+            String handle = r.handle();
+            while (true) {
+                Record v = in.next();
+                if (v == null) {
+                    throw in.source().error(startPos, type, handle,
+                            "file ends before the SEQEND that closes this POLYLINE");
+                }
+                if (!v.type().equals("VERTEX")) {
+                    if (!v.type().equals("SEQEND")) {
+                        in.pushBack();
+                    }
+                    return;
+                }
+            }
+        }
+        if (type.equals("INSERT") && r.num(66, 0) == 1) {
+            skipFollowers(in, "ATTRIB", null);
         }
     }
 

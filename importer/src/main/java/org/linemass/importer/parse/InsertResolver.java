@@ -11,7 +11,9 @@ import org.linemass.drawing.Drawing;
 import org.linemass.drawing.ImportNote;
 import org.linemass.drawing.Insert;
 import org.linemass.geometry.Affine;
+import org.linemass.geometry.Box3;
 import org.linemass.geometry.Provenance;
+import org.linemass.geometry.Vec3;
 import org.linemass.importer.entity.InsertSpec;
 
 /**
@@ -21,6 +23,13 @@ import org.linemass.importer.entity.InsertSpec;
  * connected component, found with an iterative Tarjan search, so 100000-deep chains cannot
  * overflow the stack), inserts whose placement is not finite, and inserts that would nest deeper
  * than the limit below model space (longest path, iterative topological order).
+ *
+ * <p>An insert with a zero scale factor (several writers put 43 = 0 on 2D block references) is
+ * read when the block's content, nested inserts included, lies in one plane across that axis:
+ * the zero scale then only moves that plane onto the base plane, and the insert is placed with
+ * scale 1 and the base point moved into the content's plane ({@link InsertSpec#flattened}),
+ * which gives the same points. A zero scale across content that extends along the axis would
+ * flatten it and change its lengths: that insert is skipped with an error naming the axis.
  */
 final class InsertResolver {
 
@@ -34,7 +43,91 @@ final class InsertResolver {
         this.notes = notes;
     }
 
-    private record Edge(int from, int to, InsertSpec spec) {
+    /** A reference from block {@code from} to {@code to}; {@code base} overrides the target's base point. */
+    private record Edge(int from, int to, InsertSpec spec, Vec3 base) {
+
+        Edge(int from, int to, InsertSpec spec) {
+            this(from, to, spec, null);
+        }
+    }
+
+    private static final String[] AXES = {"x", "y", "z"};
+
+    /**
+     * The edge placed with scale 1 and a base point in the content's plane on each zero axis, or a
+     * null-spec edge (removed by the caller, with an error note here) when the content extends
+     * along a zero axis.
+     */
+    private Edge flatten(Edge e, List<BlockBuilder> blocks, List<List<Edge>> kept, Box3[] boxes) {
+        BlockBuilder target = blocks.get(e.to);
+        Box3 box = box(e.to, blocks, kept, boxes, 0);
+        if (box.isEmpty()) {
+            return new Edge(e.from, e.to, e.spec.flattened(), e.spec.flatBase(target.basePoint, target.basePoint));
+        }
+        double size = box.diagonal();
+        double[] lo = box.min().toArray();
+        double[] hi = box.max().toArray();
+        double[] plane = new double[3];
+        for (int a = 0; a < 3; a++) {
+            plane[a] = 0.5 * (lo[a] + hi[a]);
+            if (e.spec.scale(a) == 0 && !(hi[a] - lo[a] <= FLAT_REL * size)) {
+                skip(e.spec.source(), AXES[a] + " scale (group code " + (41 + a) + ") is 0 but block '" + target.name
+                        + "' extends along its " + AXES[a] + " axis (" + lo[a] + " to " + hi[a]
+                        + "): the insert would flatten it and change its lengths");
+                return new Edge(e.from, e.to, null, null);
+            }
+        }
+        return new Edge(e.from, e.to, e.spec.flattened(),
+                e.spec.flatBase(target.basePoint, new Vec3(plane[0], plane[1], plane[2])));
+    }
+
+    /**
+     * Content extent across which a block counts as flat, relative to the content's diagonal: the
+     * rounding of bounds of arcs in a plane (about 1e-16 relative), with room; a block this thin
+     * loses nothing measurable when flattened.
+     */
+    private static final double FLAT_REL = 1e-12;
+
+    /**
+     * Bounds of block {@code b}'s content in its own coordinates, nested inserts included (their
+     * boxes' corners placed; empty when unknown beyond the depth limit), memoised. Only blocks
+     * reached from a zero-scale insert are measured.
+     */
+    private Box3 box(int b, List<BlockBuilder> blocks, List<List<Edge>> kept, Box3[] boxes, int depth) {
+        if (boxes[b] != null) {
+            return boxes[b];
+        }
+        BlockBuilder blk = blocks.get(b);
+        Box3 box = Box3.EMPTY;
+        for (int i = 0; i < blk.segments.size(); i++) {
+            box = box.union(blk.segments.get(i).bounds());
+        }
+        if (depth <= maxDepth) {
+            for (Edge e : kept.get(b)) {
+                if (e.spec == null) {
+                    continue;
+                }
+                Box3 inner = box(e.to, blocks, kept, boxes, depth + 1);
+                if (inner.isEmpty()) {
+                    continue;
+                }
+                InsertSpec spec = e.spec.hasZeroScale() ? e.spec.flattened() : e.spec;
+                Affine m = spec.placement(e.spec.hasZeroScale()
+                        ? e.spec.flatBase(blocks.get(e.to).basePoint, inner.centre()) : blocks.get(e.to).basePoint);
+                Vec3 lastCol = e.spec.columnStep().times(e.spec.columns() - 1);
+                Vec3 lastRow = e.spec.rowStep().times(e.spec.rows() - 1);
+                for (int c = 0; c < 8; c++) {
+                    Vec3 p = new Vec3((c & 1) == 0 ? inner.min().x() : inner.max().x(),
+                            (c & 2) == 0 ? inner.min().y() : inner.max().y(),
+                            (c & 4) == 0 ? inner.min().z() : inner.max().z());
+                    Vec3 q = m.apply(p);
+                    box = box.including(q).including(q.plus(lastCol)).including(q.plus(lastRow))
+                            .including(q.plus(lastCol).plus(lastRow));
+                }
+            }
+        }
+        boxes[b] = box;
+        return box;
     }
 
     void resolve(List<BlockBuilder> blocks) {
@@ -80,6 +173,25 @@ final class InsertResolver {
             }
             kept.add(k);
         }
+        Box3[] boxes = new Box3[n];
+        for (int i = 0; i < n; i++) {
+            List<Edge> k = kept.get(i);
+            for (int j = 0; j < k.size(); j++) {
+                Edge e = k.get(j);
+                if (e.spec.hasZeroScale()) {
+                    Edge flat = flatten(e, blocks, kept, boxes);
+                    k.set(j, flat);
+                }
+            }
+        }
+        for (List<Edge> k : kept) {
+            k.removeIf(e -> {
+                if (e.spec == null) {
+                    indeg[e.to]--;
+                }
+                return e.spec == null;
+            });
+        }
         int[] depth = new int[n];
         Arrays.fill(depth, -1);
         Integer model = exact.get(Drawing.MODEL_SPACE);
@@ -105,7 +217,7 @@ final class InsertResolver {
                             + maxDepth + " levels");
                     continue;
                 }
-                Affine placement = e.spec.placement(target.basePoint);
+                Affine placement = e.spec.placement(e.base != null ? e.base : target.basePoint);
                 if (!placement.isFinite() || !e.spec.columnStep().isFinite() || !e.spec.rowStep().isFinite()) {
                     skip(e.spec.source(), "placement of block '" + target.name + "' is not finite");
                     continue;

@@ -90,6 +90,11 @@ public final class BinaryGroupSource extends GroupSource {
             }
             code = c;
         }
+        if (!defined(code)) {
+            throw error(codePos, "", "", "group code " + code + " is not a DXF group code, so the width of its"
+                    + " value is unknown; the binary stream cannot be followed from here (a damaged file, or one"
+                    + " written with a wrong value width for an earlier group)");
+        }
         kind = kind(code);
         switch (kind) {
             case DOUBLE -> {
@@ -114,9 +119,32 @@ public final class BinaryGroupSource extends GroupSource {
                 valEnd = w.pos + len;
                 w.pos += len;
             }
-            default -> readString();
+            default -> {
+                readString();
+                if (code == 0) {
+                    checkType();
+                }
+            }
         }
         return true;
+    }
+
+    /**
+     * A record type (the value of a 0 group) is a name of printable ASCII characters; anything
+     * else means the stream slipped on an earlier value width, and reading on would invent
+     * entity types.
+     */
+    private void checkType() throws DxfInputException {
+        boolean ok = valEnd > valStart;
+        for (int i = valStart; i < valEnd && ok; i++) {
+            int c = w.buf[i] & 0xff;
+            ok = c > ' ' && c < 0x7f;
+        }
+        if (!ok) {
+            throw error(codePos, "", "", "group code 0 holds '" + valueExcerpt() + "', which is not a record type;"
+                    + " the binary stream cannot be followed from here (a damaged file, or one written with a"
+                    + " wrong value width for an earlier group)");
+        }
     }
 
     private void readString() throws DxfInputException, IOException {

@@ -140,15 +140,31 @@ public abstract class GroupSource {
         return Kind.STRING;
     }
 
-    /** Byte width of an integer value in binary DXF. */
+    /**
+     * Byte width of an integer value in binary DXF (DXF Reference, "Group Code Value Types"):
+     * 90-99, 420-429, 440-449, 450-459 (long) and 1071 are 32-bit; 160-169 are 64-bit; the other
+     * integer ranges (60-79, 170-179, 270-289, 370-389, 400-409, 1060-1070) are 16-bit.
+     */
     static int intWidth(int code) {
-        if ((code >= 90 && code <= 99) || (code >= 420 && code <= 429) || (code >= 440 && code <= 449)
+        if ((code >= 90 && code <= 99) || (code >= 420 && code <= 429) || (code >= 440 && code <= 459)
                 || code == 1071) {
             return 4;
         }
-        if ((code >= 160 && code <= 169) || (code >= 450 && code <= 459)) {
+        if (code >= 160 && code <= 169) {
             return 8;
         }
         return 2;
+    }
+
+    /**
+     * True for the group codes the DXF Reference's table of value types defines: 0-79, 90-102,
+     * 105, 110-149, 160-179, 210-239, 270-481, 999 and 1000-1071. A binary reader cannot know the
+     * width of any other code's value, so meeting one means the stream has slipped (or the file
+     * is not what it claims) and nothing after it can be trusted.
+     */
+    public static boolean defined(int code) {
+        return (code >= 0 && code <= 79) || (code >= 90 && code <= 102) || code == 105
+                || (code >= 110 && code <= 149) || (code >= 160 && code <= 179) || (code >= 210 && code <= 239)
+                || (code >= 270 && code <= 481) || code == 999 || (code >= 1000 && code <= 1071);
     }
 }

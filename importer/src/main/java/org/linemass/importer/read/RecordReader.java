@@ -165,7 +165,8 @@ public final class RecordReader {
             case STRING -> {
                 String s = null;
                 if (code == 8) {
-                    s = src.pooledValue().trim();
+                    // layer names keep their blanks: ' 1' and '1' are different layers
+                    s = src.pooledValue();
                     rec.layer = s;
                 } else if (code == 5) {
                     long v = src.hexValue();
@@ -178,7 +179,10 @@ public final class RecordReader {
                         rec.handle = s;
                         rec.handleBits = -1;
                     }
-                } else if (code == 2 || code == 9 || code == 100) {
+                } else if (code == 2) {
+                    // names (layers in the LAYER table, blocks) keep their blanks, as layer names in 8 do
+                    s = src.pooledValue();
+                } else if (code == 9 || code == 100) {
                     s = src.pooledValue().trim();
                 } else if (code >= 1 && code <= 7) {
                     s = src.stringValue();
