@@ -64,7 +64,7 @@ class ExternalDrawingsTest {
 
     /** Classes of the issue not yet fixed: these files are expected to fail until they are. */
     static final Map<String, String> KNOWN_FAILURES = new TreeMap<>(Map.of(
-            "librecad__screw.dxf", "stray ENDSEC inside HEADER refuses the file"));
+));
 
     static Path external() {
         return SharedFiles.repo().resolve("..").resolve("shared").resolve("external").normalize();

@@ -96,11 +96,13 @@ class HostileEntityTest {
     }
 
     @Test
-    void structureRejections() {
+    void structureRejections() throws DxfInputException {
         assertEquals("t.dxf:5: LINE: expected '0 ENDSEC' to close the HEADER section",
                 fails(Dxf.create().add(0, "SECTION", 2, "HEADER", 0, "LINE").entities().end()));
-        assertEquals("t.dxf:1: SECTION: file ends inside the HEADER section (0 ENDSEC missing)",
-                fails(Dxf.create().add(0, "SECTION", 2, "HEADER", 9, "$ACADVER", 1, "AC1015")));
+        // a HEADER the file ends in is read, with a warning naming the line (structure recovery)
+        assertEquals(java.util.List.of("file structure repaired at line 1: the file ends inside the HEADER section (no"
+                + " '0 ENDSEC'); nothing follows it"), warnings(Dxf.create().add(0, "SECTION", 2, "HEADER", 9,
+                        "$ACADVER", 1, "AC1015")));
         assertEquals("t.dxf:7: HEADER: value of group code 70 is not a number: 'mm'",
                 fails(Dxf.create().add(0, "SECTION", 2, "HEADER", 9, "$INSUNITS", 70, "mm", 0, "ENDSEC")));
         assertEquals("t.dxf:13: LAYER: value of group code 62 is not a number: 'red'",
@@ -109,8 +111,14 @@ class HostileEntityTest {
         assertEquals("t.dxf:5: BLOCK: block 'A' has a base point that is not finite: Vec3[x=NaN, y=0.0, z=0.0]",
                 fails(Dxf.create().add(0, "SECTION", 2, "BLOCKS", 0, "BLOCK", 2, "A", 10, "NaN", 0, "ENDBLK",
                         0, "ENDSEC")));
-        assertEquals("t.dxf:7: LINE: file ends inside the OBJECTS section (0 ENDSEC missing)",
-                fails(Dxf.create().add(0, "SECTION", 2, "OBJECTS", 0, "DICTIONARY", 0, "LINE", 0, "EOF")));
+        assertEquals(java.util.List.of("file structure repaired at line 9: '0 EOF' inside the OBJECTS section (no"
+                + " '0 ENDSEC' before it); the section was closed there"), warnings(Dxf.create().add(0, "SECTION", 2,
+                        "OBJECTS", 0, "DICTIONARY", 0, "LINE", 0, "EOF")));
+    }
+
+    private static java.util.List<String> warnings(Dxf dxf) throws DxfInputException {
+        return dxf.read().notes().stream().filter(n -> n.kind().equals("structure_repaired"))
+                .map(org.linemass.drawing.ImportNote::message).toList();
     }
 
     @Test

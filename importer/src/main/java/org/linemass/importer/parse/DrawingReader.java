@@ -69,56 +69,127 @@ public final class DrawingReader {
         if (r == null) {
             throw src.error(0, "", "", "empty file: no DXF group codes");
         }
-        if (!r.type().equals("SECTION")) {
+        if (!r.type().equals("SECTION") && !(r.type().equals("ENDSEC") && r.indexOf(2) >= 0)) {
             throw in.error(r, "not a DXF file: expected '0 SECTION' at the start, got '0 " + r.type() + "'");
         }
-        while (r != null) {
+        while (true) {
+            if (r == null) {
+                repaired(lastPosition, "the file ends without '0 EOF'; everything before it was read");
+                break;
+            }
             if (r.type().equals("EOF")) {
                 break;
             }
-            if (!r.type().equals("SECTION")) {
+            String name;
+            if (r.type().equals("SECTION")) {
+                name = r.str(2, "").trim();
+            } else if (r.type().equals("ENDSEC") && r.indexOf(2) >= 0) {
+                name = r.str(2, "").trim();
+                repaired(r.position(), "'2 " + name + "' follows this '0 ENDSEC' without a '0 SECTION' before it;"
+                        + " read as the start of the " + name + " section");
+            } else if (r.type().equals("ENDSEC")) {
+                repaired(r.position(), "'0 ENDSEC' outside any section; ignored");
+                lastPosition = r.position();
+                r = in.next();
+                continue;
+            } else {
                 throw in.error(r, "expected '0 SECTION' or '0 EOF' between sections");
             }
-            String name = r.str(2, "").trim();
-            switch (name) {
+            lastPosition = r.position();
+            Record close = switch (name) {
                 case "HEADER" -> readHeader(r);
                 case "TABLES" -> readTables();
                 case "BLOCKS" -> readBlocks();
                 case "ENTITIES" -> readEntities();
                 default -> skipSection(name);
+            };
+            if (ended) {
+                break;
             }
-            r = in.next();
+            if (close != null) {
+                lastPosition = close.position();
+            }
+            // a closing ENDSEC that carries a section name starts that section (its 0 SECTION was left out)
+            r = close != null && close.indexOf(2) >= 0 ? close : in.next();
         }
         return build();
     }
 
-    private void readHeader(Record r) throws DxfInputException, IOException {
+    /**
+     * Set when the input ended inside a section (a warning has said so): nothing more to read.
+     * Section readers return their closing {@code 0 ENDSEC} record, or null when the input ended
+     * or the section was closed by a record pushed back for the caller.
+     */
+    private boolean ended;
+
+    /** Position of the last record read (for "the file ends after line N"). */
+    private long lastPosition;
+
+    /** A {@code warning} note about a structure defect that was repaired, naming the line. */
+    private void repaired(long position, String message) {
+        String where = src.binary() ? "at byte " + position : "at line " + position;
+        notes.add(Notes.of("warning", STRUCTURE_REPAIRED, file, (int) Math.min(position, Integer.MAX_VALUE), "", "", "",
+                "file structure repaired " + where + ": " + message));
+    }
+
+    /** Note kind of a repaired structure defect. */
+    static final String STRUCTURE_REPAIRED = "structure_repaired";
+
+    /**
+     * Reads HEADER: its variables are the groups of the SECTION record. Repaired with a warning:
+     * a stray {@code 0 ENDSEC} followed by more variables (they are read too), a HEADER closed by
+     * the next {@code 0 SECTION} or by the end of the file.
+     */
+    private Record readHeader(Record r) throws DxfInputException, IOException {
         if (r.hasBadValue()) {
             throw src.error(r.badPosition(), "HEADER", "", "value of group code " + r.badCode()
                     + " is not a number: '" + r.badText() + "'");
         }
         header = HeaderData.read(r);
+        applyCodePage();
+        while (true) {
+            long pos = r.position();
+            Record n = in.next();
+            if (n == null || n.type().equals("EOF")) {
+                repaired(pos, "the file ends inside the HEADER section (no '0 ENDSEC'); nothing follows it");
+                ended = true;
+                return null;
+            }
+            if (n.type().equals("SECTION")) {
+                repaired(n.position(), "the HEADER section is not closed before this '0 SECTION'; closed it here");
+                in.pushBack();
+                return null;
+            }
+            if (!n.type().equals("ENDSEC")) {
+                throw in.error(n, "expected '0 ENDSEC' to close the HEADER section");
+            }
+            if (n.indexOf(9) < 0) {
+                return n;
+            }
+            if (n.hasBadValue()) {
+                throw src.error(n.badPosition(), "HEADER", "", "value of group code " + n.badCode()
+                        + " is not a number: '" + n.badText() + "'");
+            }
+            repaired(n.position(), "a '0 ENDSEC' inside the HEADER section is followed by more header variables;"
+                    + " read them as part of HEADER");
+            header = header.then(HeaderData.read(n));
+            applyCodePage();
+            r = n;
+        }
+    }
+
+    private void applyCodePage() {
         if (header.utf8()) {
             src.charset(StandardCharsets.UTF_8);
         } else if (!header.codePage().isEmpty()) {
             CodePages.of(header.codePage()).ifPresent(src::charset);
         }
-        expectEndsec("HEADER", r);
     }
 
-    private void expectEndsec(String section, Record last) throws DxfInputException, IOException {
-        long pos = last.position();
-        String type = last.type();
-        String handle = last.handle();
-        Record r = in.next();
-        if (r == null) {
-            throw src.error(pos, type, handle, "file ends inside the " + section + " section (0 ENDSEC missing)");
-        }
-        if (!r.type().equals("ENDSEC")) {
-            throw in.error(r, "expected '0 ENDSEC' to close the " + section + " section");
-        }
-    }
-
+    /**
+     * The next record of a section, or null when the input ends inside it ({@code 0 EOF} or the
+     * end of the file before {@code 0 ENDSEC}): a warning names the line and says what was read.
+     */
     private Record nextInSection(String section, long lastPos, String lastType, String lastHandle)
             throws DxfInputException, IOException {
         return nextInSection(section, lastPos, lastType, lastHandle, -1);
@@ -132,21 +203,32 @@ public final class DrawingReader {
             long lastHandleValue) throws DxfInputException, IOException {
         Record r = in.next();
         if (r == null || r.type().equals("EOF")) {
-            String handle = lastHandle != null ? lastHandle : Record.hexText(lastHandleValue);
-            throw src.error(lastPos, lastType, handle, "file ends inside the " + section
-                    + " section (0 ENDSEC missing)");
+            ended = true;
+        }
+        if (r == null) {
+            repaired(lastPos, "the file ends inside the " + section + " section (no '0 ENDSEC', no '0 EOF');"
+                    + " the section was read up to there");
+            return null;
+        }
+        if (r.type().equals("EOF")) {
+            repaired(r.position(), "'0 EOF' inside the " + section + " section (no '0 ENDSEC' before it); the"
+                    + " section was closed there");
+            return null;
         }
         return r;
     }
 
-    private void skipSection(String name) throws DxfInputException, IOException {
-        long pos = 0;
+    private Record skipSection(String name) throws DxfInputException, IOException {
+        long pos = lastPosition;
         String type = "SECTION";
         String handle = "";
         while (true) {
             Record r = nextInSection(name.isEmpty() ? "unnamed" : name, pos, type, handle);
+            if (r == null) {
+                return null;
+            }
             if (r.type().equals("ENDSEC")) {
-                return;
+                return r;
             }
             pos = r.position();
             type = r.type();
@@ -154,16 +236,19 @@ public final class DrawingReader {
         }
     }
 
-    private void readTables() throws DxfInputException, IOException {
+    private Record readTables() throws DxfInputException, IOException {
         String table = "";
-        long pos = 0;
+        long pos = lastPosition;
         String type = "SECTION";
         String handle = "";
         while (true) {
             Record r = nextInSection("TABLES", pos, type, handle);
+            if (r == null) {
+                return null;
+            }
             switch (r.type()) {
                 case "ENDSEC" -> {
-                    return;
+                    return r;
                 }
                 case "TABLE" -> table = r.str(2, "").trim();
                 case "ENDTAB" -> table = "";
@@ -193,17 +278,23 @@ public final class DrawingReader {
         layers.put(name, new Layer(name, colour >= 0, (((long) flags) & 1) != 0, c, true));
     }
 
-    private void readBlocks() throws DxfInputException, IOException {
-        long pos = 0;
+    private Record readBlocks() throws DxfInputException, IOException {
+        long pos = lastPosition;
         String type = "SECTION";
         String handle = "";
         while (true) {
             Record r = nextInSection("BLOCKS", pos, type, handle);
+            if (r == null) {
+                return null;
+            }
             if (r.type().equals("ENDSEC")) {
-                return;
+                return r;
             }
             if (r.type().equals("BLOCK")) {
                 readBlock(r);
+                if (ended) {
+                    return null;
+                }
                 continue;
             }
             // stray records between blocks (ENDBLK without BLOCK, entities): ignored but counted
@@ -248,6 +339,9 @@ public final class DrawingReader {
         long handleValue = -1;
         while (true) {
             Record e = nextInSection("BLOCKS", pos, type, handle, handleValue);
+            if (e == null) {
+                return;
+            }
             if (e.type().equals("ENDBLK")) {
                 return;
             }
@@ -258,26 +352,46 @@ public final class DrawingReader {
             type = e.type();
             handleValue = e.handleValue();
             handle = e.numericHandle() ? null : e.handle();
-            handler.handle(e, in, target);
+            if (!cutOff(e)) {
+                handler.handle(e, in, target);
+            }
         }
     }
 
-    private void readEntities() throws DxfInputException, IOException {
+    /**
+     * True (with an error note) for a record that the end of the input cut short: its groups may
+     * be incomplete (a LINE without its end point), so it is not read; everything before it is.
+     */
+    private boolean cutOff(Record e) {
+        if (!e.endOfInput()) {
+            return false;
+        }
+        notes.add(Notes.of("error", "skipped_entity", file, (int) Math.min(e.position(), Integer.MAX_VALUE),
+                e.type(), e.handle(), e.layer(), "the file ends inside this record, which may be cut off; not read"));
+        return true;
+    }
+
+    private Record readEntities() throws DxfInputException, IOException {
         BlockBuilder model = blocks.get(Drawing.MODEL_SPACE);
-        long pos = 0;
+        long pos = lastPosition;
         String type = "SECTION";
         String handle = "";
         long handleValue = -1;
         while (true) {
             Record e = nextInSection("ENTITIES", pos, type, handle, handleValue);
+            if (e == null) {
+                return null;
+            }
             if (e.type().equals("ENDSEC")) {
-                return;
+                return e;
             }
             pos = e.position();
             type = e.type();
             handleValue = e.handleValue();
             handle = e.numericHandle() ? null : e.handle();
-            handler.handle(e, in, e.num(67, 0) == 1 ? null : model);
+            if (!cutOff(e)) {
+                handler.handle(e, in, e.num(67, 0) == 1 ? null : model);
+            }
         }
     }
 

@@ -51,6 +51,13 @@ record HeaderData(String acadVer, int insunits, int measurement, String codePage
         return new HeaderData(ver, ins, meas, cp);
     }
 
+    /** These variables, each replaced by {@code later}'s where that one gives it (a HEADER read in parts). */
+    HeaderData then(HeaderData later) {
+        return new HeaderData(later.acadVer.isEmpty() ? acadVer : later.acadVer,
+                later.insunits < 0 ? insunits : later.insunits, later.measurement < 0 ? measurement : later.measurement,
+                later.codePage.isEmpty() ? codePage : later.codePage);
+    }
+
     /** True for AC1021 (2007) and later, whose strings are UTF-8. */
     boolean utf8() {
         if (acadVer.length() == 6 && acadVer.startsWith("AC")) {

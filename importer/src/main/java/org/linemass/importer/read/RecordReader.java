@@ -114,7 +114,8 @@ public final class RecordReader {
         boolean lw = type.equals("LWPOLYLINE");
         int flags = (helix ? SUBCLASS_MARKERS : 0) | (IDENTITY_ONLY.contains(type) ? 0 : KEEP_ALL)
                 | (lw ? LWPOLYLINE : 0)
-                | (lw || helix || type.equals("SPLINE") || type.equals("SECTION") ? MANY_GROUPS : 0);
+                | (lw || helix || type.equals("SPLINE") || type.equals("SECTION")
+                        || type.equals("ENDSEC") ? MANY_GROUPS : 0);
         cachedTypes[slot] = type;
         cachedFlags[slot] = flags;
         return flags;
