@@ -10,6 +10,7 @@ import org.linemass.drawing.Drawing;
 import org.linemass.importer.parse.DrawingReader;
 import org.linemass.importer.read.AsciiGroupSource;
 import org.linemass.importer.read.BinaryGroupSource;
+import org.linemass.importer.read.ForeignFormat;
 import org.linemass.importer.read.GroupSource;
 
 /**
@@ -48,6 +49,10 @@ public final class DxfImporter {
                 // keep reading until the head is full or the file ends
             }
             int got = hb.position();
+            java.util.Optional<String> foreign = ForeignFormat.of(head, got);
+            if (foreign.isPresent()) {
+                throw new DxfInputException(name, 0, "", "", foreign.get());
+            }
             GroupSource src;
             if (BinaryGroupSource.startsWithSentinel(head, got)) {
                 ch.position(BinaryGroupSource.sentinelLength());
@@ -71,6 +76,10 @@ public final class DxfImporter {
      * @throws DxfInputException when the content cannot be read as a drawing
      */
     public static Drawing read(String displayName, byte[] content, ImportOptions options) throws DxfInputException {
+        java.util.Optional<String> foreign = ForeignFormat.of(content, content.length);
+        if (foreign.isPresent()) {
+            throw new DxfInputException(displayName, 0, "", "", foreign.get());
+        }
         GroupSource src;
         if (BinaryGroupSource.startsWithSentinel(content, content.length)) {
             src = BinaryGroupSource.of(displayName, content, options.maxLineBytes());

@@ -10,7 +10,8 @@ import org.linemass.importer.DxfInputException;
 
 /**
  * Tokenizer for ASCII DXF: lines end in LF or CRLF; a group code line may be padded with spaces;
- * 999 comments are skipped. Works on a byte window (never a whole-file String, no regular
+ * 999 comments, and values the reader does not want, are stepped over without being held, so only
+ * the lines that are read are limited in length. Works on a byte window (never a whole-file String, no regular
  * expressions); numbers are parsed straight from the bytes. A line longer than the configured
  * limit, a code line that is not an integer, or a code without a value line is an input error.
  */
@@ -83,6 +84,27 @@ public final class AsciiGroupSource extends GroupSource {
         return true;
     }
 
+    /** Steps over one line of any length without holding it; false at end of input. */
+    private boolean skipLine() throws IOException {
+        if (w.pos >= w.limit && (!w.fill() || w.pos >= w.limit)) {
+            return false;
+        }
+        while (true) {
+            int i = findNewline(w.buf, w.pos, w.limit);
+            if (i < w.limit) {
+                w.pos = i + 1;
+                lineNo++;
+                return true;
+            }
+            // no line end in the window: drop what was scanned and read on
+            w.pos = w.limit;
+            if (!w.fill()) {
+                lineNo++;
+                return true;
+            }
+        }
+    }
+
     /**
      * Index of the first LF in b[from, limit), or limit. Eight bytes at a time: the classic
      * zero-byte test ((x - 0x01..) & ~x & 0x80..) on the bytes XOR LF; its lowest set bit marks the
@@ -112,6 +134,18 @@ public final class AsciiGroupSource extends GroupSource {
             }
             codeLine = lineNo;
             code = parseCode();
+            if (code == 999 || (code != 0 && unwanted.test(code))) {
+                if (!skipLine()) {
+                    throw error(codeLine, "", "", "group code " + code
+                            + " has no value line (odd number of lines: file truncated?)");
+                }
+                if (code == 999) {
+                    continue;
+                }
+                lineStart = w.pos;
+                lineEnd = w.pos;
+                return true;
+            }
             if (!readLine()) {
                 throw error(codeLine, "", "", "group code " + code
                         + " has no value line (odd number of lines: file truncated?)");

@@ -120,6 +120,10 @@ public final class BinaryGroupSource extends GroupSource {
                 w.pos += len;
             }
             default -> {
+                if (code != 0 && unwanted.test(code)) {
+                    skipString();
+                    return true;
+                }
                 readString();
                 if (code == 0) {
                     checkType();
@@ -171,6 +175,26 @@ public final class BinaryGroupSource extends GroupSource {
         valStart = w.pos;
         valEnd = i;
         w.pos = i + 1;
+    }
+
+    /** Steps over a NUL-terminated string of any length without holding it; it reads as empty. */
+    private void skipString() throws DxfInputException, IOException {
+        while (true) {
+            int i = w.pos;
+            while (i < w.limit && w.buf[i] != 0) {
+                i++;
+            }
+            if (i < w.limit) {
+                w.pos = i + 1;
+                valStart = w.pos;
+                valEnd = w.pos;
+                return;
+            }
+            w.pos = w.limit;
+            if (!w.fill()) {
+                throw error(codePos, "", "", "file ends inside the string value of group code " + code);
+            }
+        }
     }
 
     private void need(int n, String what) throws DxfInputException, IOException {

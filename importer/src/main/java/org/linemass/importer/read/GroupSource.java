@@ -19,6 +19,18 @@ public abstract class GroupSource {
 
     private long lastErrorPosition;
 
+    /**
+     * Group codes whose values the reader will not look at (set by the record reader for the
+     * record being read): such a value is stepped over without being held, so its length is not
+     * limited, and reads as empty text. Code 0 is always read.
+     */
+    java.util.function.IntPredicate unwanted = c -> false;
+
+    /** Sets the codes whose values are stepped over unread (see {@link #unwanted}). */
+    public final void unwanted(java.util.function.IntPredicate codes) {
+        this.unwanted = codes;
+    }
+
     GroupSource(String file) {
         this.file = file;
     }

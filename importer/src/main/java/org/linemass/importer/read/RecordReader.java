@@ -39,9 +39,23 @@ public final class RecordReader {
     private boolean started;
     private boolean atEnd;
 
+    /** The record being read, for {@link #unwanted}. */
+    private Record current;
+
     public RecordReader(GroupSource src, int maxGroups) {
         this.src = src;
         this.maxGroups = maxGroups;
+        src.unwanted(this::unwanted);
+    }
+
+    /**
+     * True for a group of the record being read whose value will not be kept: the source then
+     * steps over the value without holding it (so a long comment or extended-data string costs
+     * nothing and hits no line limit).
+     */
+    private boolean unwanted(int code) {
+        Record rec = current;
+        return rec != null && (!keep(rec, code) || !(rec.n < SMALL_RECORD_GROUPS || rec.manyGroups));
     }
 
     public GroupSource source() {
@@ -67,6 +81,7 @@ public final class RecordReader {
         }
         rec.clear();
         rec.type = src.pooledValue().trim();
+        current = rec;
         rec.position = src.position();
         int flags = typeFlags(rec.type);
         rec.keepSubclassMarkers = (flags & SUBCLASS_MARKERS) != 0;
