@@ -46,6 +46,14 @@ public final class DrawingOptions {
             + "program; dynamic-block states are stored this way); by default they are left out and counted.")
     boolean invisible;
 
+    @Option(names = "--face-edges", description = "Also read the visible edges of 3DFACE entities as wire (wireframe "
+            + "models written as faces); by default faces are listed per layer as material that was not weighed.")
+    boolean faceEdges;
+
+    @Option(names = "--mlines-and-leaders", description = "Also read MLINE element lines and LEADER paths as wire; by "
+            + "default these drafting entities are counted in a note, not weighed.")
+    boolean mlinesAndLeaders;
+
     @Option(names = "--section-table", paramLabel = "CSV",
             description = "Extra section rows (CSV); they replace built-in rows with the same id.")
     Path sectionTable;
@@ -99,7 +107,7 @@ public final class DrawingOptions {
     ImportOptions importOptions() throws InputProblem {
         try {
             return new ImportOptions(java.util.Optional.ofNullable(units), maxBlockDepth, maxLineBytes,
-                    maxControlPoints, maxVertices, paperSpace, invisible);
+                    maxControlPoints, maxVertices, paperSpace, invisible, faceEdges, mlinesAndLeaders);
         } catch (IllegalArgumentException e) {
             throw new InputProblem(e.getMessage());
         }

@@ -17,10 +17,15 @@ import org.linemass.drawing.LengthUnit;
  *     space counts and paper-space entities are only counted)
  * @param invisible read invisible entities (group 60 = 1) as well; by default they are left out and
  *     counted, as no CAD program draws them (dynamic-block states are stored this way)
+ * @param faceEdges read the visible edges of 3DFACE entities as wire (wireframe models written as
+ *     faces); by default faces are listed per layer as material that was not weighed
+ * @param mlinesAndLeaders read MLINE element lines and LEADER paths as wire; by default these
+ *     drafting entities (walls drawn as double lines, arrows to notes) are counted, not weighed
  * @throws IllegalArgumentException when a limit is below its minimum (depth 0, the others 1)
  */
 public record ImportOptions(Optional<LengthUnit> unitOverride, int maxBlockDepth, int maxLineBytes,
-        int maxControlPoints, int maxVertices, boolean paperSpace, boolean invisible) {
+        int maxControlPoints, int maxVertices, boolean paperSpace, boolean invisible, boolean faceEdges,
+        boolean mlinesAndLeaders) {
 
     public static final ImportOptions DEFAULTS =
             new ImportOptions(Optional.empty(), 64, 1 << 20, 1_000_000, 10_000_000);
@@ -31,10 +36,10 @@ public record ImportOptions(Optional<LengthUnit> unitOverride, int maxBlockDepth
         this(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, false);
     }
 
-    /** Invisible entities left out, paper space as given. */
+    /** Invisible entities and face edges left out, paper space as given. */
     public ImportOptions(Optional<LengthUnit> unitOverride, int maxBlockDepth, int maxLineBytes, int maxControlPoints,
             int maxVertices, boolean paperSpace) {
-        this(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, paperSpace, false);
+        this(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, paperSpace, false, false, false);
     }
 
     public ImportOptions {
@@ -49,19 +54,31 @@ public record ImportOptions(Optional<LengthUnit> unitOverride, int maxBlockDepth
 
     public ImportOptions withUnit(LengthUnit unit) {
         return new ImportOptions(Optional.ofNullable(unit), maxBlockDepth, maxLineBytes, maxControlPoints,
-                maxVertices, paperSpace, invisible);
+                maxVertices, paperSpace, invisible, faceEdges, mlinesAndLeaders);
     }
 
     /** These options, reading paper space as well ({@code true}) or model space only. */
     public ImportOptions withPaperSpace(boolean read) {
         return new ImportOptions(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, read,
-                invisible);
+                invisible, faceEdges, mlinesAndLeaders);
     }
 
     /** These options, reading invisible entities (group 60 = 1) as well ({@code true}) or leaving them out. */
     public ImportOptions withInvisible(boolean read) {
         return new ImportOptions(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, paperSpace,
-                read);
+                read, faceEdges, mlinesAndLeaders);
+    }
+
+    /** These options, reading 3DFACE edges as wire ({@code true}) or listing faces as not weighed. */
+    public ImportOptions withFaceEdges(boolean read) {
+        return new ImportOptions(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, paperSpace,
+                invisible, read, mlinesAndLeaders);
+    }
+
+    /** These options, reading MLINE element lines and LEADER paths as wire ({@code true}) or only counting them. */
+    public ImportOptions withMlinesAndLeaders(boolean read) {
+        return new ImportOptions(unitOverride, maxBlockDepth, maxLineBytes, maxControlPoints, maxVertices, paperSpace,
+                invisible, faceEdges, read);
     }
 
 }

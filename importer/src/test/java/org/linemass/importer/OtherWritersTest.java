@@ -85,4 +85,58 @@ class OtherWritersTest {
         // README: 3-4-5 on ' 1', 6-8-10 on '1'
         assertEquals(Map.of(" 1", 5.0, "1", 10.0), lengths);
     }
+
+    @Test
+    void threeDLine_theOldSpellingOfLine_isRead() throws Exception {
+        Drawing d = read("old_3dline_r10.dxf", ImportOptions.DEFAULTS);
+        // README: (0,0,0)-(2,3,6): sqrt(4 + 9 + 36) = 7
+        assertEquals(7.0, LineIntegrals.of(d.modelSpace().segments()).length, 0.0);
+        assertEquals(Map.of("3DLINE", 1), d.modelSpace().curveEntityCounts());
+    }
+
+    @Test
+    void mline_eachElementLineOnRequest() throws Exception {
+        Drawing counted = read("mline_wall.dxf", ImportOptions.DEFAULTS);
+        assertTrue(counted.modelSpace().segments().isEmpty(), "by default MLINE is drafting, not wire");
+        assertTrue(counted.notes().stream().anyMatch(n -> n.message().startsWith("1 MLINE (drafting")));
+        Drawing d = read("mline_wall.dxf", ImportOptions.DEFAULTS.withMlinesAndLeaders(true));
+        assertEquals(List.of(), errors(d));
+        List<Segment> s = d.modelSpace().segments();
+        assertEquals(4, s.size());
+        // README: element +0.5 runs (0,0.5)-(9.5,0.5)-(9.5,10): 19; element -0.5 (0,-0.5)-(10.5,-0.5)-(10.5,10): 21
+        assertEquals(19, LineIntegrals.of(s.subList(0, 2)).length, EXACT * 40);
+        assertEquals(21, LineIntegrals.of(s.subList(2, 4)).length, EXACT * 40);
+        assertEquals(9.5, s.get(0).end().x(), EXACT * 40);
+        assertEquals(0.5, s.get(0).end().y(), EXACT * 40);
+        assertEquals("WALL", s.get(0).source().layer());
+    }
+
+    @Test
+    void leader_vertexPathOnRequest() throws Exception {
+        Drawing d = read("leader_note.dxf", ImportOptions.DEFAULTS.withMlinesAndLeaders(true));
+        assertEquals(List.of(), errors(d));
+        Map<String, List<Segment>> layers = ExternalDrawingsTest.visibleByLayer(d);
+        // README: straight path (0,0)-(3,4)-(9,12): 5 + 10
+        assertEquals(15, LineIntegrals.of(layers.get("NOTES")).length, EXACT * 15);
+        // README: spline path through collinear (0,20), (1,20), (3,20): the interpolating cubic of points on a
+        // line with chord-length parameters is that line, length 3
+        assertEquals(3, LineIntegrals.of(layers.get("CURVED")).length, 1e-9 * 3);
+        assertTrue(read("leader_note.dxf", ImportOptions.DEFAULTS).modelSpace().segments().isEmpty());
+    }
+
+    @Test
+    void facesAndBodies_areListedNotWeighed_faceEdgesOnRequest() throws Exception {
+        Drawing d = read("faces_and_bodies.dxf", ImportOptions.DEFAULTS);
+        List<String> notes = d.notes().stream().filter(n -> n.kind().equals("not_weighed"))
+                .map(n -> n.severity() + ": " + n.message()).toList();
+        assertEquals(List.of("warning: layer 'PANEL' carries wire and also 2 3DSOLID, 1 REGION that cannot be weighed"
+                + " (solids, regions, surfaces, proxies, meshes, faces and filled outlines are not read as wire): the"
+                + " layer's totals may be missing material", "info: layer 'SHEET' holds 3 3DFACE that cannot be"
+                + " weighed and no wire; nothing on it was counted"), notes);
+        Drawing e = read("faces_and_bodies.dxf", ImportOptions.DEFAULTS.withFaceEdges(true));
+        LineIntegrals sheet = LineIntegrals.of(ExternalDrawingsTest.visibleByLayer(e).get("SHEET"));
+        // README: rectangle 4 x 3 all edges 14; the same with its second edge (3) invisible 11; triangle 3-4-5: 12
+        assertEquals(37, sheet.length, EXACT * 37);
+        assertEquals(Map.of("3DFACE", 3, "LINE", 1), e.modelSpace().curveEntityCounts());
+    }
 }

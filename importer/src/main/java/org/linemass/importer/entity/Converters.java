@@ -7,8 +7,9 @@ import org.linemass.geometry.Segment;
 import org.linemass.importer.read.Record;
 
 /**
- * Entry point of the package: converts one single-record curve entity (LINE, ARC, CIRCLE,
- * ELLIPSE, LWPOLYLINE, SPLINE, HELIX) to segments. POLYLINE uses {@link PolylineBuilder} and
+ * Entry point of the package: converts one single-record curve entity (LINE and its old spelling
+ * 3DLINE, ARC, CIRCLE, ELLIPSE, LWPOLYLINE, SPLINE, HELIX; on request the drafting entities LEADER
+ * and MLINE) to segments. POLYLINE uses {@link PolylineBuilder} and
  * INSERT {@link InsertSpec}. On failure nothing is appended and {@link EntitySkip} says why. A
  * conversion that succeeds after guessing something (a SPLINE without knots) also appends a
  * one-line message to the caller's warning list.
@@ -21,9 +22,14 @@ public final class Converters {
     /** True for the single-record entity types this class converts. */
     public static boolean isCurveType(String type) {
         return switch (type) {
-            case "LINE", "ARC", "CIRCLE", "ELLIPSE", "LWPOLYLINE", "SPLINE", "HELIX" -> true;
+            case "LINE", "3DLINE", "ARC", "CIRCLE", "ELLIPSE", "LWPOLYLINE", "SPLINE", "HELIX" -> true;
             default -> false;
         };
+    }
+
+    /** True for drafting entities read as wire only on request (MLINE element lines, LEADER paths). */
+    public static boolean isDraftingPath(String type) {
+        return type.equals("MLINE") || type.equals("LEADER");
     }
 
     /**
@@ -46,7 +52,9 @@ public final class Converters {
         int warningsBefore = warnings.size();
         try {
             switch (r.type()) {
-                case "LINE" -> LineConverter.convert(r, p, out);
+                case "LINE", "3DLINE" -> LineConverter.convert(r, p, out);
+                case "LEADER" -> LeaderConverter.convert(r, p, maxVertices, out);
+                case "MLINE" -> MlineConverter.convert(r, p, maxVertices, out);
                 case "ARC" -> CircleConverter.convert(r, p, true, out);
                 case "CIRCLE" -> CircleConverter.convert(r, p, false, out);
                 case "ELLIPSE" -> EllipseConverter.convert(r, p, out);

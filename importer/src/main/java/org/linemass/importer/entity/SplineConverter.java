@@ -242,8 +242,8 @@ final class SplineConverter {
         };
     }
 
-    /** The point whose x is group i; its y and z are the next groups with code + 10 and code + 20. */
-    private static Vec3 pointAt(Record r, int i, int end) throws EntitySkip {
+    /** The point whose x is group i; its y and z are the next two groups with code + 10 and code + 20. */
+    static Vec3 pointAt(Record r, int i, int end) throws EntitySkip {
         int code = r.code(i);
         double x = Values.coordinate(r.num(i), code);
         double y = 0;

@@ -52,6 +52,14 @@ final class Values {
         return (int) v;
     }
 
+    /** A count read from a group value (not looked up by code): a non-negative integer. */
+    static int count(double v, int code, String what) throws EntitySkip {
+        if (v != Math.rint(v) || v < 0 || v > Integer.MAX_VALUE) {
+            throw new EntitySkip(what + " (group code " + code + ") is not a count: " + v);
+        }
+        return (int) v;
+    }
+
     static int count(Record r, int code, String what) throws EntitySkip {
         int v = integer(r, code, 0, what);
         if (v < 0) {

@@ -410,6 +410,13 @@ public final class DrawingReader {
         u.note().ifPresent(n -> notes.add(0, n));
         paperSpaceNote().ifPresent(notes::add);
         invisibleNote().ifPresent(notes::add);
+        handler.notWeighed.notes(file, handler.wireLayers, notes);
+        if (!handler.draftingLeftOut.isEmpty()) {
+            StringBuilder t = new StringBuilder();
+            handler.draftingLeftOut.forEach((k, v) -> t.append(t.length() == 0 ? "" : ", ").append(v).append(' ').append(k));
+            notes.add(Notes.of("info", "ignored_entity", file, 0, "", "", "", t + " (drafting: double lines, arrows to"
+                    + " notes) not read as wire; --mlines-and-leaders reads MLINE element lines and LEADER paths too"));
+        }
         return new Drawing(file, header.acadVer(), src.binary(), u.unit(), u.source(), allLayers, built,
                 handler.paperSpaceEntities, notes);
     }

@@ -8,6 +8,7 @@ import org.linemass.importer.DxfInputException;
 import org.linemass.importer.ImportOptions;
 import org.linemass.importer.entity.Converters;
 import org.linemass.importer.entity.EntitySkip;
+import org.linemass.importer.entity.FaceEdges;
 import org.linemass.importer.entity.InsertSpec;
 import org.linemass.importer.entity.PolylineBuilder;
 import org.linemass.importer.read.Record;
@@ -44,6 +45,12 @@ final class EntityHandler {
     final java.util.Set<String> usedLayers = new java.util.HashSet<>();
     /** Invisible entities (group 60 = 1) left out, per DXF type (sorted, for a stable note). */
     final java.util.Map<String, Integer> invisible = new java.util.TreeMap<>();
+    /** MLINE and LEADER entities counted but not read (the options did not ask for them), per type. */
+    final java.util.Map<String, Integer> draftingLeftOut = new java.util.TreeMap<>();
+    /** Wire-like entities that cannot be weighed, per layer and type. */
+    final NotWeighed notWeighed = new NotWeighed();
+    /** Layers on which some entity was read as wire (or placed an insert). */
+    final java.util.Set<String> wireLayers = new java.util.HashSet<>();
     /** The layer name last added to {@link #usedLayers}. */
     private String lastLayer;
 
@@ -82,6 +89,7 @@ final class EntityHandler {
                 skip(p, badValue(r));
             } else {
                 usedLayers.add(layer);
+                wireLayers.add(layer);
                 try {
                     target.insertSpecs.add(InsertSpec.read(r, p));
                 } catch (EntitySkip e) {
@@ -98,11 +106,35 @@ final class EntityHandler {
             return;
         }
         useLayer(layer);
-        if (!Converters.isCurveType(type)) {
+        boolean faceEdges = options.faceEdges() && FaceEdges.isFace(type);
+        boolean drafting = options.mlinesAndLeaders() && Converters.isDraftingPath(type);
+        if (!Converters.isCurveType(type) && !faceEdges && !drafting) {
             target.countOther(type.isEmpty() ? "(unnamed)" : type);
+            if (Converters.isDraftingPath(type)) {
+                draftingLeftOut.merge(type, 1, Integer::sum);
+            }
+            if (NotWeighed.isWireLike(type)) {
+                notWeighed.count(layer, type);
+            }
             return;
         }
         Provenance p = provenance(r, layer, line, type, fromPaper);
+        if (faceEdges) {
+            if (r.hasBadValue()) {
+                skip(p, badValue(r));
+                return;
+            }
+            int before = target.segments.size();
+            try {
+                FaceEdges.convert(r, p, target.segments);
+                target.countCurve(type);
+                wireLayers.add(layer);
+            } catch (EntitySkip e) {
+                target.segments.subList(before, target.segments.size()).clear();
+                skip(p, e.getMessage());
+            }
+            return;
+        }
         if (r.hasBadValue()) {
             skip(p, badValue(r));
             return;
@@ -112,6 +144,7 @@ final class EntityHandler {
             Converters.convert(r, p, options.maxVertices(), options.maxControlPoints(), target.segments,
                     converterWarnings);
             target.countCurve(type);
+            wireLayers.add(layer);
             for (String w : converterWarnings) {
                 notes.add(Notes.of("warning", KNOTS_ASSUMED, file, line, type, r.handle(), layer, w));
             }
@@ -197,9 +230,9 @@ final class EntityHandler {
         usedLayers.add(p.layer());
         String counted = b.countedType();
         if (counted == null) {
-            target.countOther(b.meshKind().equals("polyface mesh") ? "POLYFACE_MESH" : "POLYGON_MESH");
-            notes.add(Notes.of("info", "ignored_entity", file, p.line(), type, handle, p.layer(),
-                    b.meshKind() + " carries no wire geometry; ignored"));
+            String mesh = b.meshKind().equals("polyface mesh") ? "POLYFACE_MESH" : "POLYGON_MESH";
+            target.countOther(mesh);
+            notWeighed.count(p.layer(), mesh);
             return;
         }
         if (bad) {
@@ -209,6 +242,7 @@ final class EntityHandler {
         try {
             Converters.finish(b, p, target.segments);
             target.countCurve(counted);
+            wireLayers.add(p.layer());
         } catch (EntitySkip e) {
             skip(p, e.getMessage());
         }

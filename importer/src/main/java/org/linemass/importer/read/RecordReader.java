@@ -12,9 +12,9 @@ public final class RecordReader {
 
     /** Record types whose values the importer never reads beyond their identity (counted only). */
     private static final java.util.Set<String> IDENTITY_ONLY = java.util.Set.of("TEXT", "MTEXT", "HATCH",
-            "DIMENSION", "SOLID", "3DFACE", "3DSOLID", "REGION", "BODY", "VIEWPORT", "POINT", "ATTRIB", "ATTDEF",
-            "LEADER", "MLEADER", "MULTILEADER", "TOLERANCE", "IMAGE", "WIPEOUT", "OLE2FRAME", "TRACE", "MESH",
-            "SURFACE", "PLANESURFACE", "ACAD_TABLE", "MLINE", "RAY", "XLINE", "SHAPE", "ARC_DIMENSION");
+            "DIMENSION", "SOLID", "3DSOLID", "REGION", "BODY", "VIEWPORT", "POINT", "ATTRIB", "ATTDEF",
+            "MLEADER", "MULTILEADER", "TOLERANCE", "IMAGE", "WIPEOUT", "OLE2FRAME", "TRACE", "MESH",
+            "SURFACE", "PLANESURFACE", "ACAD_TABLE", "RAY", "XLINE", "SHAPE", "ARC_DIMENSION");
 
     /**
      * Groups kept for records whose values occur once (LINE, ARC, INSERT, VERTEX...): the converters
@@ -130,7 +130,7 @@ public final class RecordReader {
         int flags = (helix ? SUBCLASS_MARKERS : 0) | (IDENTITY_ONLY.contains(type) ? 0 : KEEP_ALL)
                 | (lw ? LWPOLYLINE : 0)
                 | (lw || helix || type.equals("SPLINE") || type.equals("SECTION")
-                        || type.equals("ENDSEC") ? MANY_GROUPS : 0);
+                        || type.equals("ENDSEC") || type.equals("MLINE") || type.equals("LEADER") ? MANY_GROUPS : 0);
         cachedTypes[slot] = type;
         cachedFlags[slot] = flags;
         return flags;
