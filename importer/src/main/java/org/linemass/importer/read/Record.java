@@ -42,6 +42,7 @@ public final class Record {
     }
 
     void clear() {
+        endOfInput = false;
         for (int i = 0; i < n; i++) {
             int c = codes[i];
             if (c >= 0 && c < INDEXED_CODES) {
@@ -86,6 +87,13 @@ public final class Record {
     }
 
     /** The record type: the value of its 0 group (SECTION, LINE, VERTEX...). */
+    /** True when the end of the input, not a following 0 group, ended this record (it may be cut off). */
+    boolean endOfInput;
+
+    public boolean endOfInput() {
+        return endOfInput;
+    }
+
     public String type() {
         return type;
     }

@@ -97,6 +97,7 @@ public final class RecordReader {
             while (true) {
                 if (!src.next()) {
                     atEnd = true;
+                    rec.endOfInput = true;
                     return true;
                 }
                 int code = src.code();
