@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** {@code linemass check}: weigh and check drawings. */
@@ -26,6 +27,10 @@ final class CheckCommand implements Callable<Integer> {
     @Mixin
     PlanOptions plan;
 
+    @Option(names = {"-j", "--jobs"}, paramLabel = "N", description = "Drawings analysed side by side (default: one "
+            + "per processor, here ${DEFAULT-VALUE}); a drawing too big for the heap beside others waits for them.")
+    int jobs = CheckRun.defaultJobs();
+
     @Parameters(arity = "1..*", paramLabel = "DRAWING|FOLDER",
             description = "DXF files, or folders searched for *.dxf (any case, recursively).")
     List<Path> inputs;
@@ -38,6 +43,6 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        return new CheckRun(ctx, common, drawing, outputs, plan).run(inputs);
+        return new CheckRun(ctx, common, drawing, outputs, plan, jobs).run(inputs);
     }
 }

@@ -11,6 +11,7 @@ import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.result.Finding;
 import org.linemass.importer.DxfInputException;
 import org.linemass.importer.ImportOptions;
+import org.linemass.reports.DrawingOutcome;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
 import org.linemass.reports.console.ConsoleReport;
@@ -19,6 +20,7 @@ import org.linemass.reports.csv.BomCsvWriter;
 import org.linemass.reports.csv.FindingsCsvWriter;
 import org.linemass.reports.csv.PiecesCsvWriter;
 import org.linemass.reports.csv.ScheduleCsvWriter;
+import org.linemass.reports.csv.SummaryCsvWriter;
 import org.linemass.reports.dxf.DxfMarkupWriter;
 import org.linemass.reports.html.HtmlReportWriter;
 import org.linemass.reports.json.JsonReportWriter;
@@ -38,11 +40,14 @@ import org.linemass.reports.xlsx.XlsxWorkbook;
 
 /**
  * One run of {@code check}: expand the inputs, build the settings, refuse outputs that would land
- * on a file the run reads, analyse each drawing (a bad drawing among several is reported on
- * stderr and the others are still read, so that every bad one is named), write the requested
- * reports, print the summary, and work out the exit code. A run that fails (exit 2: a drawing
- * refused, a report that cannot be written) writes no report in any format: the reports are
- * written to temporaries first and moved into place only when all of them succeeded.
+ * on a file the run reads, analyse the drawings side by side ({@link DrawingBatch}; a bad drawing
+ * among several is reported on stderr, in input order, and the others go on), write the requested
+ * reports, print the summary, and work out the exit code. A drawing that cannot be read among
+ * several is listed as failed in the reports and the exit code is 2; with {@code --all-or-none}
+ * such a run writes no report instead. A report that cannot be written means no report in any
+ * format: the reports are written to temporaries first and moved into place only when all of them
+ * succeeded. What is printed and written is the same for any number of jobs, except the time column
+ * of the summary CSV.
  */
 final class CheckRun {
 
@@ -51,8 +56,21 @@ final class CheckRun {
     private final DrawingOptions drawing;
     private final OutputOptions outputs;
     private final PlanOptions plan;
+    private final int jobs;
+
+    /** One drawing per processor the JVM may use. */
+    static int defaultJobs() {
+        return Runtime.getRuntime().availableProcessors();
+    }
 
     CheckRun(AppContext ctx, CommonOptions common, DrawingOptions drawing, OutputOptions outputs, PlanOptions plan) {
+        this(ctx, common, drawing, outputs, plan, defaultJobs());
+    }
+
+    /** A run analysing up to {@code jobs} drawings side by side. */
+    CheckRun(AppContext ctx, CommonOptions common, DrawingOptions drawing, OutputOptions outputs, PlanOptions plan,
+            int jobs) {
+        this.jobs = jobs;
         this.ctx = ctx;
         this.common = common;
         this.drawing = drawing;
@@ -61,7 +79,8 @@ final class CheckRun {
     }
 
     /** Runs and returns the exit code; single-drawing input errors propagate as exceptions (exit 2). */
-    int run(List<Path> args) throws InputProblem, AnalysisException, DxfInputException, IOException {
+    int run(List<Path> args)
+            throws InputProblem, AnalysisException, DxfInputException, IOException, InterruptedException {
         ReportFiles.removeStale(java.util.stream.Stream.concat(outputs.targets().stream(), plan.targets().stream()).toList());
         List<Path> files = InputFiles.collect(args);
         long toStdout = java.util.stream.Stream.concat(outputs.targets().stream(), plan.targets().stream()).filter(OutputOptions.STDOUT::equals).count();
@@ -78,6 +97,9 @@ final class CheckRun {
                 && outputs.markupDxf.toLowerCase(Locale.ROOT).endsWith(".dxf")) {
             throw new InputProblem("--markup-dxf " + outputs.markupDxf + " names one file, but " + files.size()
                     + " drawings are checked: give a folder for their marked-up copies");
+        }
+        if (jobs < 1) {
+            throw new InputProblem("--jobs must be 1 or more, got " + jobs);
         }
         ReportFiles sink = new ReportFiles(ctx.out(), drawing.protectedFiles(files));
         java.util.Set<Path> seen = new java.util.HashSet<>();
@@ -102,31 +124,38 @@ final class CheckRun {
         ImportOptions io = drawing.importOptions();
         AnalysisSettings settings = drawing.settings(ctx.sections());
 
+        List<DrawingBatch.Done> done;
+        DrawingBatch batch = new DrawingBatch(ctx.pipeline(), io, settings, jobs, MemoryGate.forThisHeap(),
+                outputs.html != null);
+        try (Progress progress = new Progress(ctx.err(), files.size(), ctx.terminal() && !common.quiet)) {
+            done = batch.run(files, progress, d -> {
+                if (d.error() != null && files.size() > 1) {
+                    ctx.err().println(d.error().getMessage());
+                    ctx.err().flush();
+                }
+            });
+        }
+        if (files.size() == 1 && done.get(0).error() != null) {
+            rethrow(done.get(0).error());
+        }
+        List<DrawingOutcome> outcomes = new ArrayList<>();
         List<Report> reports = new ArrayList<>();
         List<Path> analysed = new ArrayList<>();
-        boolean badInput = false;
-        try (Progress progress = new Progress(ctx.err(), files.size(), ctx.terminal() && !common.quiet)) {
-            for (Path f : files) {
-                try {
-                    reports.add(ctx.pipeline().analyse(f, io, settings));
-                    analysed.add(f);
-                } catch (DxfInputException | AnalysisException e) {
-                    if (files.size() == 1) {
-                        throw e;
-                    }
-                    ctx.err().println(e.getMessage());
-                    ctx.err().flush();
-                    badInput = true;
-                }
-                progress.step(f.getFileName().toString());
+        for (DrawingBatch.Done d : done) {
+            if (d.report() != null) {
+                outcomes.add(DrawingOutcome.of(d.report(), d.nanos()));
+                reports.add(d.report());
+                analysed.add(d.file());
+            } else {
+                outcomes.add(DrawingOutcome.failed(d.file().toString(), Cli.oneLine(d.error().getMessage()), d.nanos()));
             }
         }
         if (reports.isEmpty()) {
             throw new InputProblem("none of the " + files.size() + " drawings could be read");
         }
-        if (badInput) {
-            // a run that fails writes no report, in any format (README, "Output files")
-            int bad = files.size() - reports.size();
+        int bad = files.size() - reports.size();
+        if (bad > 0 && outputs.allOrNone) {
+            // --all-or-none: a run with a drawing refused writes no report, in any format
             throw new InputProblem("no report written: " + bad + " of the " + files.size() + " drawings could not "
                     + "be read (see above); correct them or leave them out");
         }
@@ -143,9 +172,10 @@ final class CheckRun {
         List<String> marked = new ArrayList<>();
         try {
             sink.text(outputs.json, reports, JsonReportWriter::write);
-            sink.text(outputs.bomCsv, reports, (r, w) -> BomCsvWriter.write(r, units, w), true);
-            sink.text(outputs.piecesCsv, reports, (r, w) -> PiecesCsvWriter.write(r, units, w), true);
-            sink.text(outputs.findingsCsv, reports, (r, w) -> FindingsCsvWriter.write(r, units, w), true);
+            sink.text(outputs.bomCsv, outcomes, (r, w) -> BomCsvWriter.writeOutcomes(r, units, w), true);
+            sink.text(outputs.piecesCsv, outcomes, (r, w) -> PiecesCsvWriter.writeOutcomes(r, units, w), true);
+            sink.text(outputs.findingsCsv, outcomes, (r, w) -> FindingsCsvWriter.writeOutcomes(r, units, w), true);
+            sink.text(outputs.summaryCsv, outcomes, (r, w) -> SummaryCsvWriter.write(r, units, w), true);
             sink.text(outputs.scheduleCsv, reports, ScheduleCsvWriter::write, true);
             sink.text(outputs.benderCsv, reports, BenderCsvWriter::write, true);
             if (!tablesForReports.isEmpty()) {
@@ -169,7 +199,7 @@ final class CheckRun {
         sink.commit();
         boolean quietStdout = outputs.usesStdout() || plan.targets().contains(OutputOptions.STDOUT);
         if (!quietStdout) {
-            new ConsoleReport(units, ctx.terminal(), common.quiet, common.listNotes).print(reports, ctx.out());
+            new ConsoleReport(units, ctx.terminal(), common.quiet, common.listNotes).printOutcomes(outcomes, ctx.out());
             if (!common.quiet) {
                 marked.forEach(m -> ctx.out().println("marked-up drawing: " + m));
             }
@@ -178,9 +208,22 @@ final class CheckRun {
             PlanConsole.print(job, units, ctx.out());
         }
         ctx.out().flush();
+        if (bad > 0) {
+            ctx.err().println("linemass: " + bad + " of the " + files.size() + " drawings could not be read; "
+                    + "the reports list them as failed");
+            ctx.err().flush();
+            return ExitCodes.BAD_INPUT;
+        }
         List<Finding> all = new ArrayList<>();
         reports.forEach(r -> all.addAll(r.result().findings()));
         return outputs.failAt.tripped(all) ? ExitCodes.FINDINGS : ExitCodes.OK;
+    }
+
+    private static void rethrow(Exception e) throws DxfInputException, AnalysisException {
+        if (e instanceof DxfInputException d) {
+            throw d;
+        }
+        throw (AnalysisException) e;
     }
 
     /** Writes the marked-up copies (staged in {@code sink}); returns their paths for the summary. */

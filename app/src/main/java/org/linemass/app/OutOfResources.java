@@ -8,7 +8,8 @@ import org.linemass.engine.error.AnalysisException;
  * Turns the JVM running out of heap or stack while a drawing is read or analysed into the one-line
  * input error every other bad input gets: which file, what ran out, and what the user can change.
  * The partly built model is unreachable once the error has unwound to here, so there is room to
- * report it.
+ * report it. The error is kept as the cause, so that a caller running drawings side by side can
+ * tell it apart and run the drawing again alone.
  */
 final class OutOfResources {
 
@@ -17,7 +18,9 @@ final class OutOfResources {
 
     /** The error for {@code file} when {@code e} is an out-of-memory or stack-overflow error. */
     static AnalysisException of(Path file, VirtualMachineError e) {
-        return new AnalysisException(file + ": " + what(e));
+        AnalysisException a = new AnalysisException(file + ": " + what(e));
+        a.initCause(e);
+        return a;
     }
 
     /** What ran out and how to get further, without a file name (for errors no command caught). */

@@ -34,6 +34,10 @@ public final class OutputOptions {
             description = "Write a spreadsheet workbook (bill of materials, pieces, findings, layers) with numeric cells.")
     String xlsx;
 
+    @Option(names = "--summary-csv", paramLabel = "FILE", description = "Write one row per drawing (status, length, "
+            + "mass, pieces, findings by severity, time, the message of one that failed) and a total row as CSV.")
+    String summaryCsv;
+
     @Option(names = "--html", paramLabel = "FILE", description = "Write the HTML report with the picture of the drawing.")
     String html;
 
@@ -42,6 +46,10 @@ public final class OutputOptions {
                     + "drawings give a folder.")
     String markupDxf;
 
+    @Option(names = "--all-or-none", description = "Write no report at all when some drawing cannot be read; by "
+            + "default the reports list such a drawing as failed and the exit code is 2.")
+    boolean allOrNone;
+
     @Option(names = "--fail-at", paramLabel = "SEVERITY", converter = Converters.Threshold.class,
             description = "Exit with 1 when a finding is at least this severe: info, warning, error (default) or never.")
     FailThreshold failAt = FailThreshold.ERROR;
@@ -49,7 +57,7 @@ public final class OutputOptions {
     /** The report targets given, in a fixed order. */
     List<String> targets() {
         List<String> t = new ArrayList<>();
-        for (String s : new String[] {json, bomCsv, piecesCsv, findingsCsv, scheduleCsv, benderCsv, xlsx, html, markupDxf}) {
+        for (String s : new String[] {json, bomCsv, piecesCsv, findingsCsv, summaryCsv, scheduleCsv, benderCsv, xlsx, html, markupDxf}) {
             if (s != null) {
                 t.add(s);
             }

@@ -1,31 +1,51 @@
 package org.linemass.app;
 
 import java.io.PrintWriter;
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Executors;
 import java.util.concurrent.ScheduledExecutorService;
 import java.util.concurrent.TimeUnit;
+import java.util.function.LongSupplier;
 import me.tongfei.progressbar.DelegatingProgressBarConsumer;
 import me.tongfei.progressbar.ProgressBar;
 import me.tongfei.progressbar.ProgressBarBuilder;
 
 /**
  * A progress bar on stderr that appears only when the work is still running after
- * {@value #DELAY_MS} ms and the session is interactive; otherwise it prints nothing. Thread-safe.
+ * {@value #DELAY_MS} ms and the session is interactive; otherwise it prints nothing. It counts
+ * drawings done out of the total and, while drawings run side by side, names the one that has been
+ * running longest and for how long (refreshed every {@value #REFRESH_MS} ms). Thread-safe.
  */
 final class Progress implements AutoCloseable {
 
     /** Work shorter than this shows no bar (about a second, as people notice a pause). */
     static final long DELAY_MS = 1000;
+    /** How often the running time of the slowest drawing is brought up to date. */
+    static final long REFRESH_MS = 1000;
 
     private final PrintWriter err;
     private final long total;
+    private final LongSupplier clock;
     private final ScheduledExecutorService timer;
+    /** Drawings running now by id, in the order they started (so the first is the slowest). */
+    private final Map<Long, Running> running = new LinkedHashMap<>();
     private ProgressBar bar;
     private long done;
+    private String last = "";
+
+    private record Running(String name, long startNanos) {
+    }
 
     Progress(PrintWriter err, long total, boolean interactive) {
+        this(err, total, interactive, System::nanoTime);
+    }
+
+    Progress(PrintWriter err, long total, boolean interactive, LongSupplier nanoClock) {
         this.err = err;
         this.total = total;
+        this.clock = nanoClock;
         if (interactive) {
             timer = Executors.newSingleThreadScheduledExecutor(r -> {
                 Thread t = new Thread(r, "linemass-progress");
@@ -33,6 +53,7 @@ final class Progress implements AutoCloseable {
                 return t;
             });
             timer.schedule(this::show, DELAY_MS, TimeUnit.MILLISECONDS);
+            timer.scheduleAtFixedRate(this::refresh, DELAY_MS + REFRESH_MS, REFRESH_MS, TimeUnit.MILLISECONDS);
         } else {
             timer = null;
         }
@@ -46,15 +67,46 @@ final class Progress implements AutoCloseable {
                         err.flush();
                     })).build();
             bar.stepTo(done);
+            bar.setExtraMessage(message());
         }
     }
 
+    private synchronized void refresh() {
+        if (bar != null) {
+            bar.setExtraMessage(message());
+        }
+    }
+
+    /** Drawing {@code id} (unique in this run) named {@code name} starts. */
+    synchronized void started(long id, String name) {
+        running.put(id, new Running(name, clock.getAsLong()));
+        refresh();
+    }
+
+    /** Drawing {@code id} is done (analysed or failed). */
+    synchronized void finished(long id) {
+        Running r = running.remove(id);
+        step(r == null ? "" : r.name());
+    }
+
+    /** One more drawing done, {@code name} the last one. */
     synchronized void step(String name) {
         done++;
+        last = name;
         if (bar != null) {
-            bar.setExtraMessage(name);
+            bar.setExtraMessage(message());
             bar.stepTo(done);
         }
+    }
+
+    /** What the bar says after the count: the longest-running drawing, or the last one done. */
+    synchronized String message() {
+        if (running.isEmpty()) {
+            return last;
+        }
+        Running slowest = running.values().iterator().next();
+        long s = Math.max(0, (clock.getAsLong() - slowest.startNanos()) / 1_000_000_000L);
+        return String.format(Locale.ROOT, "%d running, longest %s (%d s)", running.size(), slowest.name(), s);
     }
 
     @Override

@@ -11,7 +11,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import org.linemass.reports.Report;
 import org.linemass.reports.io.AtomicWrite;
 import org.linemass.reports.io.OutputGuard;
 import org.linemass.reports.io.OutputPath;
@@ -27,10 +26,10 @@ import org.linemass.reports.io.ProtectedFiles;
  */
 final class ReportFiles {
 
-    /** Writes text to a Writer. */
+    /** Writes text about some items (reports, or outcomes of a run) to a Writer. */
     @FunctionalInterface
-    interface TextReport {
-        void write(List<Report> reports, Writer out) throws IOException;
+    interface TextReport<T> {
+        void write(List<T> items, Writer out) throws IOException;
     }
 
     private final PrintWriter stdout;
@@ -78,7 +77,7 @@ final class ReportFiles {
         }
     }
 
-    void text(String target, List<Report> reports, TextReport writer) throws IOException {
+    <T> void text(String target, List<T> reports, TextReport<T> writer) throws IOException {
         text(target, reports, writer, false);
     }
 
@@ -87,7 +86,7 @@ final class ReportFiles {
      * output) starts with the UTF-8 byte order mark, which spreadsheet programs need to read
      * non-ASCII layer names in a CSV file correctly.
      */
-    void text(String target, List<Report> reports, TextReport writer, boolean byteOrderMark) throws IOException {
+    <T> void text(String target, List<T> reports, TextReport<T> writer, boolean byteOrderMark) throws IOException {
         if (target == null) {
             return;
         }

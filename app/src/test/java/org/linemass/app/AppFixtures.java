@@ -61,8 +61,11 @@ final class AppFixtures {
      * anything else is clean. Records the settings it was given.
      */
     static final class FakePipeline implements DrawingPipeline {
-        final List<org.linemass.engine.settings.AnalysisSettings> seen = new ArrayList<>();
-        final List<org.linemass.importer.ImportOptions> imports = new ArrayList<>();
+        // drawings run side by side, so the records are synchronised lists
+        final List<org.linemass.engine.settings.AnalysisSettings> seen =
+                java.util.Collections.synchronizedList(new ArrayList<>());
+        final List<org.linemass.importer.ImportOptions> imports =
+                java.util.Collections.synchronizedList(new ArrayList<>());
 
         @Override
         public Report analyse(Path file, org.linemass.importer.ImportOptions io,

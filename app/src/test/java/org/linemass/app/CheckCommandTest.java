@@ -181,12 +181,28 @@ class CheckCommandTest {
     }
 
     @Test
-    void check_folderWithOneBadDrawing_namesItExits2AndWritesNoReport() throws IOException {
+    void check_folderWithOneBadDrawing_reportsListItAsFailedExit2() throws IOException {
+        file("mix/a.dxf");
+        file("mix/bad.dxf");
+        file("mix/c.dxf");
+        Path summary = dir.resolve("summary.csv");
+        Run r = check(dir.resolve("mix").toString(), "--summary-csv", summary.toString());
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("bad.dxf:17"), r.err());
+        assertTrue(r.err().strip().endsWith("linemass: 1 of the 3 drawings could not be read; the reports list them "
+                + "as failed"), r.err());
+        assertTrue(r.out().contains("All 2 drawings together"), r.out());
+        String csv = Files.readString(summary);
+        assertTrue(csv.contains("bad.dxf,failed,") && csv.contains("group 10 value 'abc' is not a number"), csv);
+    }
+
+    @Test
+    void check_folderWithOneBadDrawing_allOrNone_namesItExits2AndWritesNoReport() throws IOException {
         file("mix/a.dxf");
         file("mix/bad.dxf");
         file("mix/c.dxf");
         Path json = dir.resolve("r.json");
-        Run r = check(dir.resolve("mix").toString(), "--json", json.toString());
+        Run r = check(dir.resolve("mix").toString(), "--all-or-none", "--json", json.toString());
         assertEquals(2, r.code());
         assertTrue(r.err().contains("bad.dxf:17"), r.err());
         assertTrue(r.err().strip().endsWith("linemass: no report written: 1 of the 3 drawings could not be read "

@@ -39,4 +39,20 @@ class ProgressTest {
         }
         assertTrue(err.toString().contains("weighing"), err.toString());
     }
+
+    @Test
+    void message_namesTheDrawingRunningLongest() {
+        long[] now = {0};
+        try (Progress p = new Progress(new PrintWriter(new StringWriter()), 3, false, () -> now[0])) {
+            p.started(0, "a.dxf");
+            now[0] = 1_000_000_000L;
+            p.started(1, "b.dxf");
+            now[0] = 5_500_000_000L;
+            assertEquals("2 running, longest a.dxf (5 s)", p.message());
+            p.finished(0);
+            assertEquals("1 running, longest b.dxf (4 s)", p.message());
+            p.finished(1);
+            assertEquals("b.dxf", p.message(), "the last one done when none runs");
+        }
+    }
 }

@@ -15,6 +15,7 @@ import org.linemass.engine.result.Totals;
 import org.linemass.geometry.Vec3;
 import org.linemass.reports.Caution;
 import org.linemass.engine.result.CombinedTotals;
+import org.linemass.reports.DrawingOutcome;
 import org.linemass.reports.Report;
 import org.linemass.reports.Words;
 import org.linemass.reports.UnitSystem;
@@ -57,13 +58,36 @@ public final class ConsoleReport {
     }
 
     public void print(List<Report> reports, PrintWriter out) {
-        for (Report r : reports) {
+        printOutcomes(reports.stream().map(r -> DrawingOutcome.of(r, 0)).toList(), out);
+    }
+
+    /**
+     * Prints a run over several drawings, some of which may have failed: each analysed drawing as
+     * {@link #print} does, then (with more than one drawing) a table with one row per drawing
+     * (status, length, mass, pieces, findings by severity, and the message of one that failed)
+     * and the combined totals of those analysed. Quiet mode adds one line per failed drawing.
+     */
+    public void printOutcomes(List<DrawingOutcome> outcomes, PrintWriter out) {
+        List<Report> reports = new ArrayList<>();
+        for (DrawingOutcome o : outcomes) {
+            if (o.isFailed()) {
+                if (quiet) {
+                    out.print(TextTable.clean(o.file()) + ": " + paint("31", "FAILED") + " (" + TextTable.clean(o.error())
+                            + ")\n");
+                }
+                continue;
+            }
+            Report r = o.report();
+            reports.add(r);
             if (quiet) {
                 out.print(oneLine(r.result().drawing().file(), r.result().totals(), r.result().findings(),
                         r.result().complete()) + "\n");
             } else {
                 drawing(r.result(), out);
             }
+        }
+        if (outcomes.size() > 1 && !quiet) {
+            summaryTable(outcomes, out);
         }
         if (reports.size() > 1) {
             List<Totals> all = new ArrayList<>();
@@ -81,6 +105,11 @@ public final class ConsoleReport {
                 out.print(bold("All " + reports.size() + " drawings together") + "\n");
                 totalsLines(t, complete, out);
                 field(out, "findings", severityCounts(findings));
+                long failed = outcomes.stream().filter(DrawingOutcome::isFailed).count();
+                if (failed > 0) {
+                    field(out, "failed", paint("31", failed + " of " + outcomes.size()
+                            + " drawings could not be read, not in these totals"));
+                }
                 out.print("\n");
             }
         }
@@ -88,6 +117,27 @@ public final class ConsoleReport {
             out.print("Caution: " + Caution.TEXT + "\n");
         }
         out.flush();
+    }
+
+    private void summaryTable(List<DrawingOutcome> outcomes, PrintWriter out) {
+        TextTable t = new TextTable(List.of("drawing", "status", "length [" + units.longUnit() + "]",
+                "mass [" + units.massUnit() + "]", "pieces", "errors", "warnings", "notes", "message"),
+                false, false, true, true, true, true, true, true, false);
+        for (DrawingOutcome o : outcomes) {
+            if (o.isFailed()) {
+                t.add(List.of(o.file(), o.status(), "-", "-", "-", "-", "-", "-", o.error()));
+                continue;
+            }
+            DrawingResult r = o.report().result();
+            Map<Severity, Integer> n = new EnumMap<>(Severity.class);
+            r.findings().forEach(f -> n.merge(f.severity(), 1, Integer::sum));
+            t.add(List.of(r.drawing().file(), o.status(), units.longLength(r.totals().lengthM()),
+                    orDash(units.mass(r.totals().massKg())), Integer.toString(r.pieces().size()),
+                    Integer.toString(n.getOrDefault(Severity.ERROR, 0)),
+                    Integer.toString(n.getOrDefault(Severity.WARNING, 0)),
+                    Integer.toString(n.getOrDefault(Severity.INFO, 0)), orDash(String.join("; ", r.incompleteReasons()))));
+        }
+        out.print(bold("Drawings") + "\n" + t.render("  ", MESSAGE_WIDTH) + "\n");
     }
 
     private String oneLine(String name, Totals t, List<Finding> findings, boolean complete) {

@@ -12,8 +12,21 @@ public final class CsvTable {
 
     /**
      * A table whose header is {@code columns}, preceded by a {@code drawing} column when the run
-     * covers several drawings (the combined files name each row's drawing).
+     * covers several drawings (the combined files name each row's drawing), followed by a
+     * {@code status} column ({@link org.linemass.reports.DrawingOutcome#status()}).
      */
+    public static CsvTable withDrawingAndStatusColumns(Writer out, boolean severalDrawings, List<String> columns)
+            throws IOException {
+        List<String> header = new java.util.ArrayList<>(columns.size() + 2);
+        if (severalDrawings) {
+            header.add("drawing");
+            header.add("status");
+        }
+        header.addAll(columns);
+        return new CsvTable(out, header);
+    }
+
+    /** A table whose header is {@code columns}, preceded by a {@code drawing} column when the run covers several drawings. */
     public static CsvTable withDrawingColumn(Writer out, boolean severalDrawings, List<String> columns) throws IOException {
         List<String> header = new java.util.ArrayList<>(columns.size() + 1);
         if (severalDrawings) {
@@ -27,6 +40,19 @@ public final class CsvTable {
         this.out = out;
         this.columns = header.size();
         row(header);
+    }
+
+    /**
+     * The one row of a drawing that failed: its file and status, empty cells, and with
+     * {@code messageLast} its message in the last column.
+     */
+    void failed(org.linemass.reports.DrawingOutcome o, boolean messageLast) throws IOException {
+        List<String> row = new java.util.ArrayList<>(List.of(CsvCell.text(o.file()), o.status()));
+        while (row.size() < columns - 1) {
+            row.add("");
+        }
+        row.add(messageLast ? CsvCell.text(o.error()) : "");
+        row(row);
     }
 
     public void row(List<String> cells) throws IOException {

@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.Finding;
+import org.linemass.reports.DrawingOutcome;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
 
@@ -20,19 +21,32 @@ public final class FindingsCsvWriter {
     }
 
     public static void write(List<Report> reports, UnitSystem units, Writer out) throws IOException {
-        boolean multi = reports.size() > 1;
+        writeOutcomes(reports.stream().map(r -> DrawingOutcome.of(r, 0)).toList(), units, out);
+    }
+
+    /**
+     * Like {@link #write} for a run over several drawings, some of which may have failed: each row
+     * gets its drawing's status, and a drawing that failed gets one row with its status and message.
+     */
+    public static void writeOutcomes(List<DrawingOutcome> outcomes, UnitSystem units, Writer out) throws IOException {
+        boolean multi = outcomes.size() > 1 || outcomes.stream().anyMatch(DrawingOutcome::isFailed);
         String lu = units.longUnit();
-        CsvTable table = CsvTable.withDrawingColumn(out, multi, List.of("number", "kind", "severity", "x [" + lu + "]", "y [" + lu + "]", "z [" + lu + "]",
+        CsvTable table = CsvTable.withDrawingAndStatusColumns(out, multi, List.of("number", "kind", "severity", "x [" + lu + "]", "y [" + lu + "]", "z [" + lu + "]",
                 "size [" + units.shortUnit() + "]", "layer", "mass [" + units.massUnit() + "]", "entities",
                 "message"));
-        for (Report report : reports) {
-            DrawingResult r = report.result();
+        for (DrawingOutcome o : outcomes) {
+            if (o.isFailed()) {
+                table.failed(o, true);
+                continue;
+            }
+            DrawingResult r = o.report().result();
             int n = 0;
             for (Finding f : r.findings()) {
                 n++;
                 List<String> row = new ArrayList<>();
                 if (multi) {
                     row.add(CsvCell.text(r.drawing().file()));
+                    row.add(o.status());
                 }
                 row.add(Integer.toString(n));
                 row.add(CsvCell.text(f.kind()));

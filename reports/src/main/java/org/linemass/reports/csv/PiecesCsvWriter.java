@@ -9,6 +9,7 @@ import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.PieceResult;
 import org.linemass.engine.result.SourceRef;
 import org.linemass.geometry.Vec3;
+import org.linemass.reports.DrawingOutcome;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
 
@@ -23,19 +24,32 @@ public final class PiecesCsvWriter {
     }
 
     public static void write(List<Report> reports, UnitSystem units, Writer out) throws IOException {
-        boolean multi = reports.size() > 1;
+        writeOutcomes(reports.stream().map(r -> DrawingOutcome.of(r, 0)).toList(), units, out);
+    }
+
+    /**
+     * Like {@link #write} for a run over several drawings, some of which may have failed: each row
+     * gets its drawing's status, and a drawing that failed gets one row with its status.
+     */
+    public static void writeOutcomes(List<DrawingOutcome> outcomes, UnitSystem units, Writer out) throws IOException {
+        boolean multi = outcomes.size() > 1 || outcomes.stream().anyMatch(DrawingOutcome::isFailed);
         String lu = units.longUnit();
-        CsvTable table = CsvTable.withDrawingColumn(out, multi, List.of("piece", "mark", "layer", "section", "length [" + units.shortUnit() + "]",
+        CsvTable table = CsvTable.withDrawingAndStatusColumns(out, multi, List.of("piece", "mark", "layer", "section", "length [" + units.shortUnit() + "]",
                 "mass [" + units.massUnit() + "]", "closed", "segments", "bends",
                 "cog x [" + lu + "]", "cog y [" + lu + "]", "cog z [" + lu + "]",
                 "start x [" + lu + "]", "start y [" + lu + "]", "start z [" + lu + "]",
                 "end x [" + lu + "]", "end y [" + lu + "]", "end z [" + lu + "]", "entities"));
-        for (Report report : reports) {
-            DrawingResult r = report.result();
+        for (DrawingOutcome o : outcomes) {
+            if (o.isFailed()) {
+                table.failed(o, false);
+                continue;
+            }
+            DrawingResult r = o.report().result();
             for (PieceResult p : r.pieces()) {
                 List<String> row = new ArrayList<>();
                 if (multi) {
                     row.add(CsvCell.text(r.drawing().file()));
+                    row.add(o.status());
                 }
                 row.add(Integer.toString(p.id()));
                 row.add(CsvCell.text(p.mark()));

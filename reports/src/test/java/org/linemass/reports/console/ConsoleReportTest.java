@@ -14,6 +14,7 @@ import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.FindingKind;
 import org.linemass.engine.result.Severity;
 import org.linemass.geometry.Vec3;
+import org.linemass.reports.DrawingOutcome;
 import org.linemass.reports.Fixtures;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
@@ -174,5 +175,27 @@ class ConsoleReportTest {
         String table = s.substring(s.indexOf("Findings"));
         assertTrue(table.indexOf("error") < table.indexOf("warning") && table.indexOf("warning") < table.indexOf("info"),
                 table);
+    }
+
+    @Test
+    void printOutcomes_failedDrawing_inTableAndTotalsSayHowManyFailed() {
+        List<DrawingOutcome> outcomes = List.of(DrawingOutcome.of(Report.of(Fixtures.flatFrame("a.dxf")), 0),
+                DrawingOutcome.failed("bad.dxf", "bad.dxf:17: LINE 2F: group 10 value 'abc' is not a number", 0),
+                DrawingOutcome.of(Report.of(Fixtures.frame("b.dxf", 0, true)), 0));
+        StringWriter w = new StringWriter();
+        new ConsoleReport(UnitSystem.METRIC, false, false).printOutcomes(outcomes, new PrintWriter(w));
+        String s = w.toString();
+        String table = s.substring(s.indexOf("Drawings\n"), s.indexOf("All 2 drawings together"));
+        List<String> rows = table.lines().skip(3).filter(l -> !l.isBlank()).toList();
+        assertEquals(3, rows.size(), table);
+        assertTrue(rows.get(0).contains("a.dxf") && rows.get(0).contains(" ok "), rows.get(0));
+        assertTrue(rows.get(1).contains(" failed ") && rows.get(1).contains("is not a number"), rows.get(1));
+        assertTrue(rows.get(2).contains(" incomplete "), rows.get(2));
+        assertTrue(s.contains("1 of 3 drawings could not be read, not in these totals"), s);
+        StringWriter q = new StringWriter();
+        new ConsoleReport(UnitSystem.METRIC, false, true).printOutcomes(outcomes, new PrintWriter(q));
+        List<String> lines = q.toString().lines().toList();
+        assertEquals(4, lines.size(), q.toString());
+        assertTrue(lines.get(1).startsWith("bad.dxf: FAILED (bad.dxf:17:"), lines.get(1));
     }
 }

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.io.StringWriter;
 import java.util.List;
+import org.linemass.reports.DrawingOutcome;
 import org.linemass.reports.Fixtures;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
@@ -41,17 +42,86 @@ class CsvWritersTest {
     }
 
     @Test
-    void bom_severalDrawings_oneBillWithDrawingColumn() throws IOException {
+    void bom_severalDrawings_oneBillWithDrawingStatusAndSectionTotals() throws IOException {
         List<List<String>> rows = bom(List.of(Report.of(Fixtures.flatFrame("=evil.dxf")),
                 Report.of(Fixtures.frame("b.dxf", 0.2, true))), UnitSystem.METRIC);
-        assertEquals("drawing", rows.get(0).get(0));
-        assertEquals("'=evil.dxf", rows.get(1).get(0));
-        assertEquals("b.dxf", rows.get(3).get(0));
-        List<String> total = rows.get(5);
-        assertEquals("TOTAL", total.get(1));
-        assertEquals("6", total.get(2));
-        assertEquals(4 * Fixtures.B10_KG_PER_M, Double.parseDouble(total.get(8)), MASS_TOL);
-        assertTrue(rows.get(6).get(3).contains("b.dxf: drawing read incompletely"), rows.get(6).toString());
+        assertEquals(List.of("drawing", "status", "mark"), rows.get(0).subList(0, 3));
+        assertEquals("cut length total [m]", rows.get(0).get(11));
+        assertEquals(List.of("'=evil.dxf", "ok"), rows.get(1).subList(0, 2));
+        assertEquals(List.of("b.dxf", "incomplete"), rows.get(3).subList(0, 2));
+        // mark A: 2 bars of 1 m each (Fixtures.frame), so 2.000 m of cut length per drawing
+        assertEquals("2.000", rows.get(1).get(11));
+        // rows 5 and 6: one total per section and material, sorted; the rings have no section
+        List<String> noSection = rows.get(5);
+        assertEquals(List.of("", "", "TOTAL", "2", "", ""), noSection.subList(0, 6));
+        List<String> b10 = rows.get(6);
+        assertEquals(List.of("", "", "TOTAL", "4", "B10", "steel"), b10.subList(0, 6));
+        assertEquals(4 * Fixtures.B10_KG_PER_M, Double.parseDouble(b10.get(9)), MASS_TOL);
+        assertEquals("4.000", b10.get(11));
+        List<String> total = rows.get(7);
+        assertEquals(List.of("", "", "TOTAL", "6", "", ""), total.subList(0, 6));
+        assertEquals(4 * Fixtures.B10_KG_PER_M, Double.parseDouble(total.get(9)), MASS_TOL);
+        assertTrue(rows.get(8).get(4).contains("b.dxf: drawing read incompletely"), rows.get(8).toString());
+        assertEquals(9, rows.size());
+    }
+
+    @Test
+    void bom_failedDrawing_oneStatusRowAndNoteNothingInTotals() throws IOException {
+        StringWriter w = new StringWriter();
+        BomCsvWriter.writeOutcomes(List.of(DrawingOutcome.of(Report.of(Fixtures.flatFrame("a.dxf")), 5),
+                DrawingOutcome.failed("bad.dxf", "bad.dxf:17: LINE 2F: not a number", 7)), UnitSystem.METRIC, w);
+        List<List<String>> rows = CsvParse.parse(w.toString());
+        List<String> failed = rows.get(3);
+        assertEquals(List.of("bad.dxf", "failed", "", ""), failed.subList(0, 4));
+        assertEquals(12, failed.size());
+        List<String> total = rows.get(rows.size() - 2);
+        // only a.dxf counts: its two bars and one ring (Fixtures.flatFrame)
+        assertEquals("3", total.get(3));
+        assertTrue(rows.get(rows.size() - 1).get(4).contains("bad.dxf: failed, not in the totals"));
+    }
+
+    @Test
+    void findingsAndPieces_failedDrawing_rowWithStatus() throws IOException {
+        List<DrawingOutcome> outcomes = List.of(DrawingOutcome.failed("bad.dxf", "bad.dxf:17: not a number", 7),
+                DrawingOutcome.of(Report.of(Fixtures.flatFrame("a.dxf")), 5));
+        StringWriter f = new StringWriter();
+        FindingsCsvWriter.writeOutcomes(outcomes, UnitSystem.METRIC, f);
+        List<List<String>> findings = CsvParse.parse(f.toString());
+        assertEquals(List.of("drawing", "status", "number"), findings.get(0).subList(0, 3));
+        assertEquals(List.of("bad.dxf", "failed", ""), findings.get(1).subList(0, 3));
+        assertEquals("bad.dxf:17: not a number", findings.get(1).get(findings.get(1).size() - 1));
+        assertEquals(List.of("a.dxf", "ok", "1"), findings.get(2).subList(0, 3));
+        StringWriter p = new StringWriter();
+        PiecesCsvWriter.writeOutcomes(outcomes, UnitSystem.METRIC, p);
+        List<List<String>> pieces = CsvParse.parse(p.toString());
+        assertEquals(List.of("bad.dxf", "failed", ""), pieces.get(1).subList(0, 3));
+        assertEquals(List.of("a.dxf", "ok", "1"), pieces.get(2).subList(0, 3));
+    }
+
+    @Test
+    void summary_rowPerDrawingAndTotal() throws IOException {
+        StringWriter w = new StringWriter();
+        SummaryCsvWriter.write(List.of(DrawingOutcome.of(Report.of(Fixtures.flatFrame("a.dxf")), 1_500_000_000L),
+                DrawingOutcome.failed("bad.dxf", "bad.dxf:17: not a number", 250_000_000L),
+                DrawingOutcome.of(Report.of(Fixtures.frame("b.dxf", 0.2, true)), 0)), UnitSystem.METRIC, w);
+        List<List<String>> rows = CsvParse.parse(w.toString());
+        assertEquals(List.of("drawing", "status", "length [m]", "mass [kg]", "pieces", "marks", "errors", "warnings",
+                "notes", "time [s]", "message"), rows.get(0));
+        assertEquals(List.of("a.dxf", "ok"), rows.get(1).subList(0, 2));
+        assertEquals("1.500", rows.get(1).get(9));
+        assertEquals(List.of("bad.dxf", "failed", "", "", "", "", "", "", "", "0.250", "bad.dxf:17: not a number"),
+                rows.get(2));
+        assertEquals("incomplete", rows.get(3).get(1));
+        List<String> total = rows.get(4);
+        assertEquals("TOTAL", total.get(0));
+        // each frame has 2 bars of B10 with a mass and a ring without (Fixtures.frame)
+        assertEquals(4 * Fixtures.B10_KG_PER_M, Double.parseDouble(total.get(3)), MASS_TOL);
+        assertEquals(Integer.parseInt(rows.get(1).get(4)) + Integer.parseInt(rows.get(3).get(4)),
+                Integer.parseInt(total.get(4)));
+        assertEquals(Integer.parseInt(rows.get(1).get(6)) + Integer.parseInt(rows.get(3).get(6)),
+                Integer.parseInt(total.get(6)));
+        assertEquals("1.750", total.get(9));
+        assertEquals("3 drawings, 1 incomplete, 1 failed, not in the totals", total.get(10));
     }
 
     @Test
