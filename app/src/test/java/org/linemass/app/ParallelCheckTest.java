@@ -43,7 +43,7 @@ class ParallelCheckTest {
         Files.copy(repo.resolve("testdata/demo/garden-planter.dxf"), in.resolve("garden-planter.dxf"));
         // two drawings that cannot be read (testdata/hostile/README.md gives their messages)
         Files.copy(repo.resolve("testdata/hostile/group-code-not-number.dxf"), in.resolve("b-bad.dxf"));
-        Files.copy(repo.resolve("testdata/hostile/truncated-mid-entity.dxf"), in.resolve("t-bad.dxf"));
+        Files.copy(repo.resolve("testdata/hostile/empty.dxf"), in.resolve("t-bad.dxf"));
         Path corpus = CorpusJsonTest.corpus();
         if (corpus != null && Files.isDirectory(corpus)) {
             try (Stream<Path> s = Files.list(corpus)) {
