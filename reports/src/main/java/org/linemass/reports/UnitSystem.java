@@ -158,11 +158,14 @@ public enum UnitSystem {
         return mass(kg);
     }
 
-    /** A number with a fixed count of decimals, Locale.ROOT, no grouping; "-0.000" shown as "0.000". */
+    /**
+     * A number with a fixed count of decimals, Locale.ROOT, no grouping; "-0.000" shown as "0.000".
+     * Every number of the console, CSV and HTML reports goes through here.
+     *
+     * @throws NonFiniteNumber for NaN and infinities: no report holds one
+     */
     public static String fixed(double v, int decimals) {
-        if (!Double.isFinite(v)) {
-            return Double.isNaN(v) ? "NaN" : (v > 0 ? "inf" : "-inf");
-        }
+        NonFiniteNumber.check(v, "text of a report");
         String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
         if (s.startsWith("-") && s.chars().skip(1).allMatch(c -> c == '0' || c == '.')) {
             return s.substring(1);

@@ -74,7 +74,7 @@ final class GroupKinds {
                     }
                 }),
                 pairs("group-long-value", (p, r) -> {
-                    int len = r.nextInt(5) == 0 ? 1_100_000 : 100 + r.nextInt(20_000);
+                    int len = r.nextInt(25) == 0 ? 1_100_000 : 100 + r.nextInt(20_000);
                     String v = (r.nextBoolean() ? "9" : "x").repeat(len);
                     int at = r.nextInt(p.size());
                     if (r.nextBoolean()) {

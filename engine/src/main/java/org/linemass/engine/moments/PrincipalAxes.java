@@ -75,9 +75,17 @@ public record PrincipalAxes(double[] moments, Vec3[] axes) {
         for (int k = 0; k < 3; k++) {
             sorted[k] = values[order[k]];
             RealVector v = e.getEigenvector(order[k]);
-            axes[k] = new Vec3(v.getEntry(0), v.getEntry(1), v.getEntry(2)).unit();
+            Vec3 axis = new Vec3(v.getEntry(0), v.getEntry(1), v.getEntry(2));
+            if (!Double.isFinite(sorted[k]) || !axis.isFinite() || !(axis.norm() > 0)) {
+                return java.util.Optional.empty(); // the iteration ran out of range
+            }
+            axes[k] = axis.unit();
         }
-        axes[2] = axes[0].cross(axes[1]).unit();
+        Vec3 third = axes[0].cross(axes[1]);
+        if (!third.isFinite() || !(third.norm() > 0)) {
+            return java.util.Optional.empty();
+        }
+        axes[2] = third.unit();
         for (int k = 0; k < 3; k++) {
             if (!Double.isFinite(sorted[k]) || !axes[k].isFinite()) {
                 return java.util.Optional.empty();

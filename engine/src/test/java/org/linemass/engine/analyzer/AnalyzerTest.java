@@ -301,7 +301,9 @@ class AnalyzerTest {
                 s.maxExpandedSegments());
         AnalysisException e = assertThrows(AnalysisException.class,
                 () -> Analyzer.analyze(d.build(), smallGap, SimpleStages.CHAIN));
-        assertTrue(e.getMessage().startsWith("bad tolerance: gap limit"), e.getMessage());
+        assertTrue(e.getMessage().contains(": bad tolerance: gap limit"), e.getMessage());
+        assertTrue(e.getMessage().startsWith(d.build().file() + ": "), "names the file: " + e.getMessage());
+        assertTrue(e.getMessage().endsWith("(the drawing is 1.00e+08 m across)"), e.getMessage());
     }
 
     @Test

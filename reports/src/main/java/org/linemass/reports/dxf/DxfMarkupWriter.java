@@ -103,8 +103,8 @@ public final class DxfMarkupWriter {
         int n = 0;
         for (Finding f : result.findings()) {
             n++;
-            if (f.atM() == null || !f.atM().isFinite()) {
-                continue;
+            if (f.atM() == null || !f.atM().isFinite() || !f.atM().times(perMetre).isFinite()) {
+                continue; // no place, or one beyond the range of numbers in drawing units
             }
             Vec3 p = f.atM().times(perMetre);
             // labels of findings at one place are stacked downwards instead of printed over each other
@@ -115,6 +115,9 @@ public final class DxfMarkupWriter {
                     n + " " + ascii(f.kind()), 0));
         }
         Vec3 cog = result.totals().centroidM() != null ? result.totals().centroidM() : result.totals().lengthCentroidM();
+        if (cog != null && !cog.times(perMetre).isFinite()) {
+            cog = null;
+        }
         if (cog != null && cog.isFinite()) {
             Vec3 c = cog.times(perMetre);
             ents.append(e.circle(layer, c, size, COG_COLOUR));
@@ -190,7 +193,9 @@ public final class DxfMarkupWriter {
         }
         double diag = min[0] > max[0] ? 0 : new Vec3(max[0] - min[0], max[1] - min[1], max[2] - min[2]).norm();
         double fallback = 0.01 * r.drawing().unit().metres();
-        return diag > 0 ? MARKER_SHARE * diag : fallback;
+        // an extent that overflows (places near the double range) gets the fallback size, never Infinity
+        double size = MARKER_SHARE * diag;
+        return diag > 0 && Double.isFinite(size / r.drawing().unit().metres()) ? size : fallback;
     }
 
     /** {@code value} right-aligned to the width of {@code original} when that was padded with spaces. */

@@ -2,6 +2,7 @@ package org.linemass.reports.dxf;
 
 import java.math.BigDecimal;
 import java.util.Locale;
+import org.linemass.reports.NonFiniteNumber;
 import org.linemass.geometry.Vec3;
 
 /**
@@ -105,6 +106,7 @@ final class DxfRecords {
     }
 
     private static String num(double v) {
+        NonFiniteNumber.check(v, "marked-up DXF");
         return new BigDecimal(Double.toString(v)).toPlainString();
     }
 }
