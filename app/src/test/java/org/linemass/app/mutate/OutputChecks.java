@@ -122,7 +122,7 @@ final class OutputChecks {
                 continue;
             }
             String before = text.substring(Math.max(0, m.start() - 16), m.start());
-            if (before.endsWith("finite: ") || before.endsWith("number: ")) {
+            if (before.endsWith("finite: ") || before.endsWith("number: ") || before.endsWith("integer: ")) {
                 continue; // a message quoting the drawing's own value ("coordinate ... is not finite: Infinity")
             }
             int from = Math.max(0, m.start() - 40);
