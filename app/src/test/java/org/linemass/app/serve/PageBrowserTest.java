@@ -110,7 +110,7 @@ class PageBrowserTest {
 
     private void openWithDrawing() {
         browser.get("http://127.0.0.1:" + server.port() + "/");
-        waiting().until(d -> "true".equals(d.findElement(By.tagName("body")).getAttribute("data-ready")));
+        waiting().until(d -> "true".equals(d.findElement(By.tagName("body")).getDomAttribute("data-ready")));
         browser.findElement(By.id("files")).sendKeys(corpus().resolve(DRAWING).toString());
         waiting().until(d -> !d.findElements(By.cssSelector("section.drawing ol.findings li")).isEmpty());
     }
@@ -127,7 +127,7 @@ class PageBrowserTest {
         JsonNode cli = cliJson();
         WebElement length = browser.findElement(By.id("combined-length"));
         double cliLength = cli.get("totals").get("length_m").asDouble();
-        assertEquals(cliLength, Double.parseDouble(length.getAttribute("data-value")), 0.0,
+        assertEquals(cliLength, Double.parseDouble(length.getDomAttribute("data-value")), 0.0,
                 "the page shows the number of the JSON report (the same engine on the same bytes)");
         assertEquals(String.format(java.util.Locale.ROOT, "%.3f m", cliLength), length.getText());
         assertEquals(cli.get("findings").size(), browser.findElements(By.cssSelector("ol.findings li")).size());
@@ -136,14 +136,14 @@ class PageBrowserTest {
         WebElement first = browser.findElement(By.cssSelector("ol.findings li[data-n='1']"));
         first.click();
         WebElement marker = browser.findElement(By.id("d1-marker-1"));
-        assertTrue(first.getAttribute("class").contains("hit"));
-        assertTrue(marker.getAttribute("class").contains("hit"), marker.getAttribute("class"));
+        assertTrue(first.getDomAttribute("class").contains("hit"));
+        assertTrue(marker.getDomAttribute("class").contains("hit"), marker.getDomAttribute("class"));
         Object centre = browser.executeScript("var s = arguments[0].ownerSVGElement.viewBox.baseVal;"
                 + "return [s.x + s.width / 2, s.y + s.height / 2];", marker);
         List<?> c = (List<?>) centre;
         // the view box is centred on the marker's anchor to the picture's 2-decimal pixel coordinates
-        assertEquals(Double.parseDouble(marker.getAttribute("data-x")), ((Number) c.get(0)).doubleValue(), 0.01);
-        assertEquals(Double.parseDouble(marker.getAttribute("data-y")), ((Number) c.get(1)).doubleValue(), 0.01);
+        assertEquals(Double.parseDouble(marker.getDomAttribute("data-x")), ((Number) c.get(0)).doubleValue(), 0.01);
+        assertEquals(Double.parseDouble(marker.getDomAttribute("data-y")), ((Number) c.get(1)).doubleValue(), 0.01);
 
         // a piece: its details
         browser.executeScript("arguments[0].dispatchEvent(new MouseEvent('click', {bubbles: true}))",
@@ -158,7 +158,7 @@ class PageBrowserTest {
         JsonNode picked = cliJson("-a", LAYER + "=" + SECTION);
         double cliMass = picked.get("totals").get("mass_kg").asDouble();
         waiting().until(d -> {
-            String v = d.findElement(By.id("combined-mass")).getAttribute("data-value");
+            String v = d.findElement(By.id("combined-mass")).getDomAttribute("data-value");
             return v != null && Double.parseDouble(v) == cliMass;
         });
         double cliLayer = 0;
@@ -171,7 +171,7 @@ class PageBrowserTest {
         // the drawing's own tables are redrawn when its new report arrives, a moment after the totals
         waiting().until(d -> {
             String v = d.findElement(By.xpath("//input[@data-layer='" + LAYER
-                    + "']/ancestor::tr/td[contains(@class, 'layer-mass')]")).getAttribute("data-value");
+                    + "']/ancestor::tr/td[contains(@class, 'layer-mass')]")).getDomAttribute("data-value");
             return v != null && !v.equals("null") && Double.parseDouble(v) == expected;
         });
 
@@ -193,7 +193,7 @@ class PageBrowserTest {
         Path dxf = downloads.resolve("hostile.dxf");
         Files.writeString(dxf, Files.readString(corpus().resolve(DRAWING)).replace(LAYER, "<img src=x id=pwn>"));
         browser.get("http://127.0.0.1:" + server.port() + "/");
-        waiting().until(d -> "true".equals(d.findElement(By.tagName("body")).getAttribute("data-ready")));
+        waiting().until(d -> "true".equals(d.findElement(By.tagName("body")).getDomAttribute("data-ready")));
         browser.findElement(By.id("files")).sendKeys(dxf.toString());
         waiting().until(d -> !d.findElements(By.cssSelector("section.drawing td.layer-name")).isEmpty());
         assertTrue(browser.findElements(By.id("pwn")).isEmpty(), "a layer name became markup");

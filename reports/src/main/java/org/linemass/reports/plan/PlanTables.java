@@ -75,7 +75,7 @@ public final class PlanTables {
                     longNum(p.usedLengthM()), massNum(sp.massBoughtKg()), massNum(sp.massUsedKg()),
                     new Num(100 * p.wasteShare(), 2), longNum(p.reusableOffcutM()), longNum(p.lowerBoundM()),
                     new Num(100 * p.gap(), 2), p.boundProven() ? "yes" : "no: Lagrangian bound", p.method(),
-                    (long) p.solveMillis(), String.join("; ", p.notes())));
+                    p.solveMillis(), String.join("; ", p.notes())));
         }
         return new PlanTable("plan summary", List.of("section", "bars or coils", "pieces cut",
                 "bought [" + u.longUnit() + "]", "used [" + u.longUnit() + "]", "mass bought [" + u.massUnit() + "]",
