@@ -18,16 +18,16 @@ import org.linemass.geometry.Vec3;
  */
 public final class MomentsAccumulator {
 
-    private final NeumaierSum mass = new NeumaierSum();
-    private final NeumaierSum[] first = {new NeumaierSum(), new NeumaierSum(), new NeumaierSum()};
-    private final NeumaierSum[] second = new NeumaierSum[6];
-    private final NeumaierSum error = new NeumaierSum();
+    private final CompensatedSum mass = new CompensatedSum();
+    private final CompensatedSum[] first = {new CompensatedSum(), new CompensatedSum(), new CompensatedSum()};
+    private final CompensatedSum[] second = new CompensatedSum[6];
+    private final CompensatedSum error = new CompensatedSum();
     private Vec3 reference;
     private long count;
 
     public MomentsAccumulator() {
         for (int i = 0; i < 6; i++) {
-            second[i] = new NeumaierSum();
+            second[i] = new CompensatedSum();
         }
     }
 
@@ -84,25 +84,5 @@ public final class MomentsAccumulator {
         Vec3 d = new Vec3(first[0].value() / m, first[1].value() / m, first[2].value() / m);
         Sym3 c = s.minus(Sym3.outer(d).times(m));
         return new Moments(m, reference.plus(d), c, error.value());
-    }
-
-    /** Neumaier's improved Kahan summation of doubles. Not thread-safe. */
-    static final class NeumaierSum {
-        private double sum;
-        private double compensation;
-
-        void add(double x) {
-            double t = sum + x;
-            if (Math.abs(sum) >= Math.abs(x)) {
-                compensation += (sum - t) + x;
-            } else {
-                compensation += (x - t) + sum;
-            }
-            sum = t;
-        }
-
-        double value() {
-            return sum + compensation;
-        }
     }
 }

@@ -8,7 +8,7 @@ import java.util.Map;
 import java.util.TreeMap;
 import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.MarkResult;
-import org.linemass.reports.CompensatedSum;
+import org.linemass.engine.moments.CompensatedSum;
 import org.linemass.reports.DrawingOutcome;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;

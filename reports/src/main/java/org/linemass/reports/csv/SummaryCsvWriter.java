@@ -7,7 +7,7 @@ import java.util.List;
 import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.Severity;
-import org.linemass.reports.CompensatedSum;
+import org.linemass.engine.moments.CompensatedSum;
 import org.linemass.reports.DrawingOutcome;
 import org.linemass.reports.UnitSystem;
 

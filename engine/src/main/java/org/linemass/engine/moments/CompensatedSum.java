@@ -1,8 +1,9 @@
-package org.linemass.reports;
+package org.linemass.engine.moments;
 
 /**
- * A running sum of doubles with Neumaier's improved Kahan compensation, for the totals the reports
- * add up over many rows (thousands of drawings' masses and lengths). Not thread-safe.
+ * A running sum of doubles with Neumaier's improved Kahan compensation, for the moment sums of the
+ * engine and the totals the reports add up over many rows (thousands of drawings' masses and
+ * lengths). Not thread-safe.
  */
 public final class CompensatedSum {
 
