@@ -46,7 +46,20 @@ import org.linemass.tolerance.Tolerances;
  */
 public final class Analyzer {
 
-    /** The piece stage: joining, checks and grouping of the expanded world segments. */
+    /**
+     * Told when the analysis moves from one stage to the next (a progress display); it may throw an
+     * unchecked exception to stop the run there, which then leaves {@link #analyze} unchanged.
+     */
+    @FunctionalInterface
+    public interface StageWatch {
+        /** {@code stage} is a few words for a person ("joining and checking pieces"). */
+        void entering(String stage);
+
+        /** A watch that does nothing. */
+        StageWatch NONE = stage -> { };
+    }
+
+    /** The piece stage: joining, checks and grouping of the expanded world segments (a test seam). */
     @FunctionalInterface
     public interface PieceStage {
         PieceAnalysis analyze(List<Segment> world, Tolerances tol, SectionLookup sections, boolean mirrorGrouping);
@@ -55,17 +68,34 @@ public final class Analyzer {
     private Analyzer() {
     }
 
-    public static DrawingResult analyze(Drawing drawing, AnalysisSettings settings) throws AnalysisException {
-        return analyze(drawing, settings, PieceAnalyzer::analyze);
-    }
-
     /**
-     * Analyses a drawing with the given piece stage. The result carries each piece's exact segments
-     * by piece id ({@link DrawingResult#pieceSegments}), so writers need nothing else from the engine.
+     * Analyses a drawing. The result carries each piece's exact segments by piece id
+     * ({@link DrawingResult#pieceSegments}), so writers need nothing else from the engine.
      *
      * @throws AnalysisException for unknown sections, bad density expressions or tolerances, or a density
      *     that cannot be evaluated along a wire
      */
+    public static DrawingResult analyze(Drawing drawing, AnalysisSettings settings) throws AnalysisException {
+        return analyze(drawing, settings, StageWatch.NONE);
+    }
+
+    /**
+     * As {@link #analyze(Drawing, AnalysisSettings)}, telling {@code watch} before the blocks are
+     * expanded, before the piece stage and after it (the last two only when the drawing is small
+     * enough for pieces, see {@link AnalysisSettings#maxExpandedSegments()}).
+     */
+    public static DrawingResult analyze(Drawing drawing, AnalysisSettings settings, StageWatch watch)
+            throws AnalysisException {
+        watch.entering("expanding blocks and adding up layers");
+        return analyze(drawing, settings, (world, tol, lookup, mirror) -> {
+            watch.entering("joining and checking pieces");
+            PieceAnalysis pa = PieceAnalyzer.analyze(world, tol, lookup, mirror);
+            watch.entering("grouping marks and writing totals");
+            return pa;
+        });
+    }
+
+    /** As {@link #analyze(Drawing, AnalysisSettings)} with the given piece stage (tests put stand-ins here). */
     public static DrawingResult analyze(Drawing drawing, AnalysisSettings settings, PieceStage stage)
             throws AnalysisException {
         MaterialPlan plan = MaterialPlan.of(settings);

@@ -6,8 +6,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutorService;
-import org.linemass.app.EnginePipeline;
 import org.linemass.drawing.Drawing;
+import org.linemass.engine.Analyzer;
 import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.engine.section.LayerAssignment;
@@ -91,12 +91,12 @@ final class Session {
                     settings = settings();
                     version = settingsVersion;
                 }
-                Report report = EnginePipeline.report(drawing, settings, stage -> {
+                Report report = Report.of(Analyzer.analyze(drawing, settings, stage -> {
                     if (Thread.currentThread().isInterrupted()) {
                         throw new CancellationException("cancelled");
                     }
                     d.stage = stage;
-                });
+                }));
                 synchronized (this) {
                     if (d.status != LoadedDrawing.Status.WORKING) {
                         return;
@@ -282,7 +282,7 @@ final class Session {
             AnalysisSettings settings = settings();
             for (LoadedDrawing d : drawings) {
                 if (d.status == LoadedDrawing.Status.DONE) {
-                    fresh.add(EnginePipeline.report(d.drawing, settings, EnginePipeline.StageWatch.NONE));
+                    fresh.add(Report.of(Analyzer.analyze(d.drawing, settings)));
                     done.add(d);
                 }
             }

@@ -15,8 +15,8 @@ import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
-import org.linemass.app.EnginePipeline;
 import org.linemass.app.PageSetup;
+import org.linemass.engine.Analyzer;
 import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.Severity;
@@ -43,8 +43,8 @@ class ReportPictureTest {
         PageSetup setup = PageSetup.defaults();
         var table = setup.readTable("t.csv", Files.readString(PageClient.demo("garden-planter-section-table.csv")));
         var rules = setup.readAssignments("a.csv", Files.readString(PageClient.demo("garden-planter-layers.csv")));
-        return EnginePipeline.report(DxfImporter.read(PageClient.demo("garden-planter.dxf"), setup.importOptions()),
-                setup.settings(table, rules), EnginePipeline.StageWatch.NONE);
+        return Report.of(Analyzer.analyze(DxfImporter.read(PageClient.demo("garden-planter.dxf"),
+                setup.importOptions()), setup.settings(table, rules)));
     }
 
     private static double[] viewBox(String html) {
@@ -95,8 +95,8 @@ class ReportPictureTest {
         Path shelf = PageBrowserTest.corpus().resolve("v01_wire_shelf_lines_r2000_mm.dxf");
         assumeTrue(Files.isRegularFile(shelf), "../shared/corpus is not beside this checkout: test skipped");
         PageSetup setup = PageSetup.defaults();
-        Report r = EnginePipeline.report(DxfImporter.read(shelf, setup.importOptions()), setup.settings(null,
-                List.of()), EnginePipeline.StageWatch.NONE);
+        Report r = Report.of(Analyzer.analyze(DxfImporter.read(shelf, setup.importOptions()), setup.settings(null,
+                List.of())));
         String html = new HtmlReportWriter(UnitSystem.METRIC).picture(r, "");
         String[] svgs = html.split("<svg class=\"view\"");
         int iso = 0;
