@@ -9,7 +9,6 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
-import org.linemass.plan.PlanInputException;
 
 /**
  * Reads a stock table: a CSV file with a header row naming the columns {@code section} (a name or

@@ -1,4 +1,4 @@
-package org.linemass.plan;
+package org.linemass.plan.stock;
 
 /** A bad stock or price file: the message names the file, the line and the field. */
 public final class PlanInputException extends Exception {
