@@ -139,4 +139,18 @@ class OtherWritersTest {
         assertEquals(37, sheet.length, EXACT * 37);
         assertEquals(Map.of("3DFACE", 3, "LINE", 1), e.modelSpace().curveEntityCounts());
     }
+
+    @Test
+    void notWeighed_layerZeroBlockContentTakesTheInsertingLayer() throws Exception {
+        Drawing d = read("not_weighed_layer0_blocks.dxf", ImportOptions.DEFAULTS);
+        List<String> notes = d.notes().stream().filter(n -> n.kind().equals("not_weighed"))
+                .map(n -> n.severity() + " " + n.layer() + ": " + n.message()).toList();
+        // testdata/importer/README.md: layer-0 content lands on the inserting layer; UNUSED is never placed
+        String unread = " that cannot be weighed (solids, regions, surfaces, proxies, meshes, faces and filled outlines"
+                + " are not read as wire): the layer's totals may be missing material";
+        assertEquals(List.of(
+                "info BOX: layer 'BOX' holds 1 REGION that cannot be weighed and no wire; nothing on it was counted",
+                "warning FRAME: layer 'FRAME' carries wire and also 1 3DSOLID" + unread,
+                "warning SHEET: layer 'SHEET' carries wire and also 1 3DSOLID" + unread), notes);
+    }
 }

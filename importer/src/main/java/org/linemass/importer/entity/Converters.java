@@ -8,9 +8,9 @@ import org.linemass.importer.read.Record;
 
 /**
  * Entry point of the package: converts one single-record curve entity (LINE and its old spelling
- * 3DLINE, ARC, CIRCLE, ELLIPSE, LWPOLYLINE, SPLINE, HELIX; on request the drafting entities LEADER
- * and MLINE) to segments. POLYLINE uses {@link PolylineBuilder} and
- * INSERT {@link InsertSpec}. On failure nothing is appended and {@link EntitySkip} says why. A
+ * 3DLINE, ARC, CIRCLE, ELLIPSE, LWPOLYLINE, SPLINE, HELIX; on request the drafting entity LEADER)
+ * to segments. POLYLINE uses {@link PolylineBuilder}, INSERT {@link InsertSpec} and MLINE
+ * {@link MlinePath} (it waits for its style). On failure nothing is appended and {@link EntitySkip} says why. A
  * conversion that succeeds after guessing something (a SPLINE without knots) also appends a
  * one-line message to the caller's warning list.
  */
@@ -54,7 +54,6 @@ public final class Converters {
             switch (r.type()) {
                 case "LINE", "3DLINE" -> LineConverter.convert(r, p, out);
                 case "LEADER" -> LeaderConverter.convert(r, p, maxVertices, out);
-                case "MLINE" -> MlineConverter.convert(r, p, maxVertices, out);
                 case "ARC" -> CircleConverter.convert(r, p, true, out);
                 case "CIRCLE" -> CircleConverter.convert(r, p, false, out);
                 case "ELLIPSE" -> EllipseConverter.convert(r, p, out);

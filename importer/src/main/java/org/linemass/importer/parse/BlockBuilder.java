@@ -2,8 +2,10 @@ package org.linemass.importer.parse;
 
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.TreeMap;
 import org.linemass.drawing.Block;
 import org.linemass.drawing.Insert;
@@ -20,6 +22,10 @@ final class BlockBuilder {
     final PackedSegments.Builder segments = new PackedSegments.Builder();
     final List<InsertSpec> insertSpecs = new ArrayList<>();
     final List<Insert> inserts = new ArrayList<>();
+    /** Layers of this block's own entities that were read as wire (before layer-0 inheritance). */
+    final Set<String> wireLayers = new HashSet<>();
+    /** Entities that cannot be weighed, per own layer and type (see {@link NotWeighed}). */
+    final Map<String, Map<String, Integer>> notWeighed = new TreeMap<>();
     private final Map<String, int[]> curveCounts = new HashMap<>();
     private final Map<String, int[]> otherCounts = new HashMap<>();
 

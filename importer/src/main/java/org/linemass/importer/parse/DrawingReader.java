@@ -17,6 +17,8 @@ import org.linemass.drawing.UnitSource;
 import org.linemass.geometry.Vec3;
 import org.linemass.importer.DxfInputException;
 import org.linemass.importer.ImportOptions;
+import org.linemass.importer.entity.EntitySkip;
+import org.linemass.importer.entity.MlineStyle;
 import org.linemass.importer.read.GroupSource;
 import org.linemass.importer.read.Record;
 import org.linemass.importer.read.RecordReader;
@@ -101,6 +103,7 @@ public final class DrawingReader {
                 case "TABLES" -> readTables();
                 case "BLOCKS" -> readBlocks();
                 case "ENTITIES" -> readEntities();
+                case "OBJECTS" -> readObjects();
                 default -> skipSection(name);
             };
             if (ended) {
@@ -395,7 +398,58 @@ public final class DrawingReader {
         }
     }
 
+    /** MLINE styles of the OBJECTS section by upper-case handle and by upper-case name. */
+    private final Map<String, MlineStyle> stylesByHandle = new HashMap<>();
+    private final Map<String, MlineStyle> stylesByName = new HashMap<>();
+
+    /**
+     * The OBJECTS section: MLINESTYLE objects are kept for the MLINEs (a style that cannot be used
+     * gets a warning, and its MLINEs keep their own element parameters); everything else is passed.
+     */
+    private Record readObjects() throws DxfInputException, IOException {
+        long pos = lastPosition;
+        String type = "SECTION";
+        String handle = "";
+        while (true) {
+            Record r = nextInSection("OBJECTS", pos, type, handle);
+            if (r == null) {
+                return null;
+            }
+            if (r.type().equals("ENDSEC")) {
+                return r;
+            }
+            if (r.type().equals("MLINESTYLE") && options.mlinesAndLeaders()) {
+                readMlineStyle(r);
+            }
+            pos = r.position();
+            type = r.type();
+            handle = r.handle();
+        }
+    }
+
+    private void readMlineStyle(Record r) {
+        int line = (int) Math.min(r.position(), Integer.MAX_VALUE);
+        if (r.hasBadValue() || r.endOfInput()) {
+            String why = r.hasBadValue() ? "value of group code " + r.badCode() + " is not a number: '" + r.badText()
+                    + "'" : "the file ends inside this style, which may be cut off";
+            notes.add(Notes.of("warning", "ignored_entity", file, line, r.type(), r.handle(), "", why
+                    + "; the style was not read, and its MLINEs keep their own element parameters"));
+            return;
+        }
+        try {
+            MlineStyle s = MlineStyle.read(r);
+            if (!s.handle().isEmpty()) {
+                stylesByHandle.putIfAbsent(s.handle().toUpperCase(Locale.ROOT), s);
+            }
+            stylesByName.putIfAbsent(s.name().toUpperCase(Locale.ROOT), s);
+        } catch (EntitySkip e) {
+            notes.add(Notes.of("warning", "ignored_entity", file, line, r.type(), r.handle(), "", e.getMessage()
+                    + "; the style was not read, and its MLINEs keep their own element parameters"));
+        }
+    }
+
     private Drawing build() {
+        handler.finishMlines(stylesByHandle, stylesByName);
         List<BlockBuilder> list = new ArrayList<>(blocks.values());
         new InsertResolver(file, options.maxBlockDepth(), notes).resolve(list);
         Map<String, Block> built = new HashMap<>();
@@ -410,7 +464,7 @@ public final class DrawingReader {
         u.note().ifPresent(n -> notes.add(0, n));
         paperSpaceNote().ifPresent(notes::add);
         invisibleNote().ifPresent(notes::add);
-        handler.notWeighed.notes(file, handler.wireLayers, notes);
+        NotWeighed.notes(file, blocks, notes);
         if (!handler.draftingLeftOut.isEmpty()) {
             StringBuilder t = new StringBuilder();
             handler.draftingLeftOut.forEach((k, v) -> t.append(t.length() == 0 ? "" : ", ").append(v).append(' ').append(k));

@@ -10,6 +10,8 @@ import org.linemass.importer.entity.Converters;
 import org.linemass.importer.entity.EntitySkip;
 import org.linemass.importer.entity.FaceEdges;
 import org.linemass.importer.entity.InsertSpec;
+import org.linemass.importer.entity.MlinePath;
+import org.linemass.importer.entity.MlineStyle;
 import org.linemass.importer.entity.PolylineBuilder;
 import org.linemass.importer.read.Record;
 
@@ -47,10 +49,13 @@ final class EntityHandler {
     final java.util.Map<String, Integer> invisible = new java.util.TreeMap<>();
     /** MLINE and LEADER entities counted but not read (the options did not ask for them), per type. */
     final java.util.Map<String, Integer> draftingLeftOut = new java.util.TreeMap<>();
-    /** Wire-like entities that cannot be weighed, per layer and type. */
-    final NotWeighed notWeighed = new NotWeighed();
-    /** Layers on which some entity was read as wire (or placed an insert). */
-    final java.util.Set<String> wireLayers = new java.util.HashSet<>();
+    /** MLINEs read on request, drawn once the styles are known ({@link #finishMlines}). */
+    private final List<PendingMline> mlines = new java.util.ArrayList<>();
+
+    /** An MLINE waiting for its style, and the block it goes to. */
+    private record PendingMline(BlockBuilder target, MlinePath path) {
+    }
+
     /** The layer name last added to {@link #usedLayers}. */
     private String lastLayer;
 
@@ -89,7 +94,6 @@ final class EntityHandler {
                 skip(p, badValue(r));
             } else {
                 usedLayers.add(layer);
-                wireLayers.add(layer);
                 try {
                     target.insertSpecs.add(InsertSpec.read(r, p));
                 } catch (EntitySkip e) {
@@ -114,7 +118,7 @@ final class EntityHandler {
                 draftingLeftOut.merge(type, 1, Integer::sum);
             }
             if (NotWeighed.isWireLike(type)) {
-                notWeighed.count(layer, type);
+                NotWeighed.count(target, layer, type);
             }
             return;
         }
@@ -128,7 +132,7 @@ final class EntityHandler {
             try {
                 FaceEdges.convert(r, p, target.segments);
                 target.countCurve(type);
-                wireLayers.add(layer);
+                target.wireLayers.add(layer);
             } catch (EntitySkip e) {
                 target.segments.subList(before, target.segments.size()).clear();
                 skip(p, e.getMessage());
@@ -139,18 +143,48 @@ final class EntityHandler {
             skip(p, badValue(r));
             return;
         }
+        if (type.equals("MLINE")) {
+            try {
+                mlines.add(new PendingMline(target, MlinePath.read(r, p, options.maxVertices())));
+            } catch (EntitySkip e) {
+                skip(p, e.getMessage());
+            }
+            return;
+        }
         converterWarnings.clear();
         try {
             Converters.convert(r, p, options.maxVertices(), options.maxControlPoints(), target.segments,
                     converterWarnings);
             target.countCurve(type);
-            wireLayers.add(layer);
+            target.wireLayers.add(layer);
             for (String w : converterWarnings) {
                 notes.add(Notes.of("warning", KNOTS_ASSUMED, file, line, type, r.handle(), layer, w));
             }
         } catch (EntitySkip e) {
             notes.add(Notes.of("error", "skipped_entity", file, line, type, r.handle(), layer, e.getMessage()));
         }
+    }
+
+    /**
+     * Draws the MLINEs read so far with their styles (looked up by the handle in their group 340,
+     * then by name ignoring case), each appended to its block after the block's other entities.
+     */
+    void finishMlines(java.util.Map<String, MlineStyle> byHandle, java.util.Map<String, MlineStyle> byName) {
+        for (PendingMline m : mlines) {
+            MlinePath path = m.path();
+            MlineStyle style = byHandle.get(path.styleHandle().toUpperCase(java.util.Locale.ROOT));
+            if (style == null) {
+                style = byName.get(path.styleName().toUpperCase(java.util.Locale.ROOT));
+            }
+            try {
+                path.convert(style, m.target().segments);
+                m.target().countCurve("MLINE");
+                m.target().wireLayers.add(path.source().layer());
+            } catch (EntitySkip e) {
+                skip(path.source(), e.getMessage());
+            }
+        }
+        mlines.clear();
     }
 
     /**
@@ -232,7 +266,7 @@ final class EntityHandler {
         if (counted == null) {
             String mesh = b.meshKind().equals("polyface mesh") ? "POLYFACE_MESH" : "POLYGON_MESH";
             target.countOther(mesh);
-            notWeighed.count(p.layer(), mesh);
+            NotWeighed.count(target, p.layer(), mesh);
             return;
         }
         if (bad) {
@@ -242,7 +276,7 @@ final class EntityHandler {
         try {
             Converters.finish(b, p, target.segments);
             target.countCurve(counted);
-            wireLayers.add(p.layer());
+            target.wireLayers.add(p.layer());
         } catch (EntitySkip e) {
             skip(p, e.getMessage());
         }
