@@ -79,7 +79,7 @@ public final class ShapeClassifier {
                     table.getAsDouble() * 1000));
         }
         double r = table.isPresent() ? table.getAsDouble() : n > 0 ? inside[0] : 0;
-        Builder b = new Builder(exactLengthM, below, notes);
+        ShapeResultBuilder b = new ShapeResultBuilder(exactLengthM, below, notes, ROUNDING_M);
         if (closed) {
             notes.add("closed loop with no lap or hooks: not a standard shape");
             return b.done(ShapeCode.OTHER);
@@ -174,6 +174,10 @@ public final class ShapeClassifier {
                         .length(out[0] + out[1] + width + out[3] - 1.5 * r - 3 * d).done(ShapeCode.S22);
             }
         }
+        ShapeResult more = MoreShapes.match(steps, feed, inside, d, r, b);
+        if (more != null) {
+            return more;
+        }
         notes.add(n + " bends in a pattern not classified here");
         return b.done(ShapeCode.OTHER);
     }
@@ -188,39 +192,5 @@ public final class ShapeClassifier {
 
     private static double distance(double[] a, double[] b) {
         return Math.sqrt((a[0] - b[0]) * (a[0] - b[0]) + (a[1] - b[1]) * (a[1] - b[1]) + (a[2] - b[2]) * (a[2] - b[2]));
-    }
-
-    /** Collects the result's fields; single use. */
-    private static final class Builder {
-        private final double exact;
-        private final boolean below;
-        private final List<String> notes;
-        private Double[] dims = new Double[6];
-        private Double length;
-
-        Builder(double exact, boolean below, List<String> notes) {
-            this.exact = exact;
-            this.below = below;
-            this.notes = notes;
-        }
-
-        Builder dims(Double a, Double b, Double c, Double d, Double e, Double r) {
-            dims = new Double[] {a, b, c, d, e, r};
-            return this;
-        }
-
-        Builder length(double l) {
-            length = l;
-            return this;
-        }
-
-        ShapeResult done(ShapeCode code) {
-            if (length != null && Math.abs(length - exact) > ROUNDING_M) {
-                notes.add(String.format(Locale.ROOT, "formula length differs from the exact length by %.0f mm",
-                        (length - exact) * 1000));
-            }
-            return new ShapeResult(code, dims[0], dims[1], dims[2], dims[3], dims[4], dims[5], length, exact, below,
-                    notes);
-        }
     }
 }

@@ -36,14 +36,14 @@ class ShapeClassifierTest {
             Affine.scale(-1, 1, 1).andThen(rotation(new Vec3(0, 1, 1), -0.7, new Vec3(0, 0, 3))),
             Affine.scale(1, -1, 1).andThen(rotation(new Vec3(1, 0, 0), Math.PI / 2, Vec3.ZERO)));
 
-    private static ShapeResult classify(List<Segment> bar, boolean closed, double d) {
+    static ShapeResult classify(List<Segment> bar, boolean closed, double d) {
         BenderProgram p = PieceForms.of(bar, closed, d, 0, Math.toRadians(0.01), 1e-5).program();
         double len = bar.stream().mapToDouble(Curves::length).sum();
         return ShapeClassifier.classify(p, closed, d, len);
     }
 
     /** Every view, forwards and reversed: the code is the same; A..E as given forwards, reversed as given. */
-    private static void check(List<Segment> bar, double d, ShapeCode code, Double[] dims, Double[] reversedDims,
+    static void check(List<Segment> bar, double d, ShapeCode code, Double[] dims, Double[] reversedDims,
             double formula, double exact) {
         for (Affine m : VIEWS) {
             List<Segment> seen = bar.stream().map(s -> s.transformed(m)).toList();
@@ -189,7 +189,7 @@ class ShapeClassifierTest {
         assertTrue(MinimumRadius.forDiameterM(0.014).isEmpty());
     }
 
-    private static List<Segment> filleted(double radius, Vec3... corners) {
+    static List<Segment> filleted(double radius, Vec3... corners) {
         List<Segment> out = new ArrayList<>();
         Vec3 from = corners[0];
         for (int i = 1; i + 1 < corners.length; i++) {
