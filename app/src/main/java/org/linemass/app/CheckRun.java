@@ -24,16 +24,9 @@ import org.linemass.reports.csv.SummaryCsvWriter;
 import org.linemass.reports.dxf.DxfMarkupWriter;
 import org.linemass.reports.html.HtmlReportWriter;
 import org.linemass.reports.json.JsonReportWriter;
-import org.linemass.plan.JobPlan;
-import org.linemass.plan.JobPlanner;
+import org.linemass.plan.cost.PriceTable;
 import org.linemass.plan.cutting.CutSettings;
 import org.linemass.plan.stock.StockTable;
-import org.linemass.reports.plan.PlanConsole;
-import org.linemass.reports.plan.PlanCsv;
-import org.linemass.reports.plan.PlanHtml;
-import org.linemass.reports.plan.PlanSheets;
-import org.linemass.reports.plan.PlanTable;
-import org.linemass.reports.plan.PlanTables;
 import org.linemass.reports.xlsx.CheckSheets;
 import org.linemass.reports.xlsx.XlsxSheet;
 import org.linemass.reports.xlsx.XlsxWorkbook;
@@ -119,7 +112,8 @@ final class CheckRun {
                 throw new InputProblem("two reports would be written to the same file " + t);
             }
         }
-        StockTable stock = plan.planning() || !plan.targets().isEmpty() ? plan.table() : null;
+        StockTable stock = plan.planning() || !plan.planTargets().isEmpty() ? plan.table() : null;
+        PriceTable prices = plan.costs.prices();
         CutSettings cutSettings = plan.settings();
         ImportOptions io = drawing.importOptions();
         AnalysisSettings settings = drawing.settings(ctx.sections());
@@ -160,32 +154,21 @@ final class CheckRun {
                     + "be read (see above); correct them or leave them out");
         }
         UnitSystem units = common.units();
-        List<PlanTable> planTables = List.of();
-        JobPlan job = null;
-        if (stock != null) {
-            job = JobPlanner.plan(reports.stream().map(Report::result).toList(), stock, cutSettings);
-            PlanTables pt = new PlanTables(units);
-            planTables = List.of(pt.summary(job), pt.order(job), pt.patterns(job));
-        }
-        List<PlanTable> tablesForReports = planTables;
-        List<String> htmlExtra = tablesForReports.isEmpty() ? List.of() : List.of(PlanHtml.section(tablesForReports));
+        JobReports job = JobReports.of(reports, stock, cutSettings, prices, plan, units);
+        List<String> htmlExtra = job.htmlSections();
         List<String> marked = new ArrayList<>();
         try {
-            sink.text(outputs.json, reports, JsonReportWriter::write);
+            sink.text(outputs.json, reports, (r, w) -> JsonReportWriter.write(r, job.jsonParts(), w));
             sink.text(outputs.bomCsv, outcomes, (r, w) -> BomCsvWriter.writeOutcomes(r, units, w), true);
             sink.text(outputs.piecesCsv, outcomes, (r, w) -> PiecesCsvWriter.writeOutcomes(r, units, w), true);
             sink.text(outputs.findingsCsv, outcomes, (r, w) -> FindingsCsvWriter.writeOutcomes(r, units, w), true);
             sink.text(outputs.summaryCsv, outcomes, (r, w) -> SummaryCsvWriter.write(r, units, w), true);
             sink.text(outputs.scheduleCsv, reports, ScheduleCsvWriter::write, true);
             sink.text(outputs.benderCsv, reports, BenderCsvWriter::write, true);
-            if (!tablesForReports.isEmpty()) {
-                sink.text(plan.planCsv, reports, (r, w) -> PlanCsv.write(tablesForReports.get(0), w), true);
-                sink.text(plan.orderCsv, reports, (r, w) -> PlanCsv.write(tablesForReports.get(1), w), true);
-                sink.text(plan.cuttingCsv, reports, (r, w) -> PlanCsv.write(tablesForReports.get(2), w), true);
-            }
+            job.writeCsv(sink, reports);
             if (outputs.xlsx != null) {
                 List<XlsxSheet> sheets = CheckSheets.of(reports, units);
-                tablesForReports.forEach(t -> sheets.add(PlanSheets.of(t)));
+                sheets.addAll(job.sheets());
                 sink.bytes(Path.of(outputs.xlsx), os -> XlsxWorkbook.write(sheets, os));
             }
             sink.text(outputs.html, reports, (r, w) -> new HtmlReportWriter(units).write(r, htmlExtra, w));
@@ -204,8 +187,8 @@ final class CheckRun {
                 marked.forEach(m -> ctx.out().println("marked-up drawing: " + m));
             }
         }
-        if (job != null && !quietStdout && !common.quiet) {
-            PlanConsole.print(job, units, ctx.out());
+        if (!quietStdout && !common.quiet) {
+            job.print(units, ctx.out());
         }
         ctx.out().flush();
         if (bad > 0) {

@@ -10,6 +10,7 @@ import org.linemass.plan.stock.SectionStock;
 import org.linemass.plan.stock.StockLength;
 import org.linemass.plan.stock.StockTable;
 import org.linemass.plan.stock.StockTableReader;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
@@ -18,6 +19,9 @@ import picocli.CommandLine.Option;
  * report files. A plan is made only when stock is given.
  */
 final class PlanOptions {
+
+    @Mixin
+    CostOptions costs = new CostOptions();
 
     @Option(names = "--stock-table", paramLabel = "CSV",
             description = "Stock per section: section,stock_lengths_mm,stock_counts,kerf_mm,min_offcut_mm,coil_kg.")
@@ -54,7 +58,15 @@ final class PlanOptions {
         return stockTable != null || stock != null;
     }
 
+    /** Every report file of the plan and cost options. */
     List<String> targets() {
+        List<String> t = planTargets();
+        t.addAll(costs.targets());
+        return t;
+    }
+
+    /** The report files of the cutting plan. */
+    List<String> planTargets() {
         List<String> t = new ArrayList<>();
         for (String s : new String[] {cuttingCsv, orderCsv, planCsv}) {
             if (s != null) {

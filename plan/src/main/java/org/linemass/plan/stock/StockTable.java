@@ -29,8 +29,8 @@ public record StockTable(List<SectionStock> rows) {
         return Optional.ofNullable(found);
     }
 
-    /** Glob match without backtracking blow-up: pieces between stars placed leftmost. */
-    static boolean matches(String pattern, String name) {
+    /** Glob match of lower-cased texts without backtracking blow-up: pieces between stars placed leftmost. */
+    public static boolean matches(String pattern, String name) {
         int p = 0;
         int n = 0;
         int star = -1;

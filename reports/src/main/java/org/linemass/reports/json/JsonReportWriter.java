@@ -50,6 +50,11 @@ public final class JsonReportWriter {
 
     /** Writes the report of {@code reports} (one or more drawings) to {@code out}, which stays open. */
     public static void write(List<Report> reports, Writer out) throws IOException {
+        write(reports, List.of(), out);
+    }
+
+    /** Writes the report with the job-level {@code parts} (cutting plan, costs) in it. */
+    public static void write(List<Report> reports, List<JsonPart> parts, Writer out) throws IOException {
         if (reports.isEmpty()) {
             throw new IllegalArgumentException("no drawing to report");
         }
@@ -57,15 +62,16 @@ public final class JsonReportWriter {
         try (JsonGenerator g = FACTORY.createGenerator(out)) {
             g.setPrettyPrinter(new DefaultPrettyPrinter().withObjectIndenter(lf));
             if (reports.size() == 1) {
-                drawingDocument(g, reports.get(0).result());
+                drawingDocument(g, reports.get(0).result(), parts);
             } else {
-                multiDocument(g, reports);
+                multiDocument(g, reports, parts);
             }
             g.writeRaw('\n');
         }
     }
 
-    private static void multiDocument(JsonGenerator g, List<Report> reports) throws IOException {
+    private static void multiDocument(JsonGenerator g, List<Report> reports, List<JsonPart> parts)
+            throws IOException {
         List<Totals> totals = new ArrayList<>();
         List<String> reasons = new ArrayList<>();
         for (Report r : reports) {
@@ -77,18 +83,26 @@ public final class JsonReportWriter {
         g.writeStartObject();
         g.writeArrayFieldStart("drawings");
         for (Report r : reports) {
-            drawingDocument(g, r.result());
+            drawingDocument(g, r.result(), List.of());
         }
         g.writeEndArray();
         g.writeFieldName("totals");
         totals(g, CombinedTotals.of(totals));
+        parts(g, parts);
         g.writeBooleanField("complete", reasons.isEmpty());
         strings(g, "incomplete_reasons", reasons);
         g.writeStringField("caution", Caution.TEXT);
         g.writeEndObject();
     }
 
-    private static void drawingDocument(JsonGenerator g, DrawingResult r) throws IOException {
+    private static void parts(JsonGenerator g, List<JsonPart> parts) throws IOException {
+        for (JsonPart p : parts) {
+            g.writeFieldName(p.key());
+            p.write(g);
+        }
+    }
+
+    private static void drawingDocument(JsonGenerator g, DrawingResult r, List<JsonPart> parts) throws IOException {
         g.writeStartObject();
         g.writeObjectFieldStart("drawing");
         g.writeStringField("file", r.drawing().file());
@@ -130,6 +144,7 @@ public final class JsonReportWriter {
             section(g, s);
         }
         g.writeEndArray();
+        parts(g, parts);
         g.writeBooleanField("complete", r.complete());
         strings(g, "incomplete_reasons", r.incompleteReasons());
         g.writeStringField("caution", Caution.TEXT);
