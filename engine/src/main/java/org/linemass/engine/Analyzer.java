@@ -8,6 +8,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import org.linemass.drawing.Drawing;
+import org.linemass.engine.assemble.CoincidentFindings;
 import org.linemass.engine.assemble.ImportFindings;
 import org.linemass.engine.assemble.LayerAssembler;
 import org.linemass.engine.assemble.MaterialPlan;
@@ -121,10 +122,13 @@ public final class Analyzer {
             Optional<List<Segment>> world = resolved.worldSegments();
             if (world.isPresent()) {
                 SectionLookup lookup = sectionLookup(plan, resolved);
+                CoincidentFindings.Output coincident = CoincidentFindings.of(resolved.coincident(), lookup,
+                        tol.integrationRelative());
                 PieceAnalysis pa = stage.analyze(world.get(), tol, lookup, settings.mirrorGrouping());
-                removed = removedMoments(pa.removed(), tol);
+                removed = plus(removedMoments(pa.removed(), tol), coincident.removedByLayer());
                 pieces = PieceAssembler.assemble(pa, plan, tol);
-                stageFindings = pa.findings();
+                stageFindings = new ArrayList<>(coincident.findings());
+                stageFindings.addAll(pa.findings());
                 Map<Integer, List<Segment>> ordered = new TreeMap<>();
                 for (int i = 0; i < pa.pieces().size(); i++) {
                     ordered.put(pieces.idByStageIndex().get(i), pa.pieces().get(i).segments());
@@ -248,6 +252,16 @@ public final class Analyzer {
             byLayer.put(layer, plan.forLayer(layer).section());
         }
         return layer -> byLayer.getOrDefault(layer, Optional.empty());
+    }
+
+    /** Per-layer sums of two maps of removed moments. */
+    private static Map<String, Moments> plus(Map<String, Moments> a, Map<String, Moments> b) {
+        if (b.isEmpty()) {
+            return a;
+        }
+        Map<String, Moments> out = new TreeMap<>(a);
+        b.forEach((k, v) -> out.merge(k, v, (x, y) -> new MomentsAccumulator().add(x).add(y).result()));
+        return out;
     }
 
     private static Map<String, Moments> removedMoments(List<Segment> removed, Tolerances tol) {

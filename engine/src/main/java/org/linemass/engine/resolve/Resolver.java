@@ -37,10 +37,13 @@ public final class Resolver {
         long expanded = layers.totalSegments();
         Optional<List<Segment>> segments;
         double extent;
+        List<CoincidentCopies.Group> coincident = List.of();
         if (expanded <= settings.maxExpandedSegments()) {
-            List<Segment> list = WorldExpander.expand(drawing, new LayerRules(drawing, settings.includeLayers(),
-                    settings.excludeLayers(), settings.includeHiddenLayers()), world, settings.maxExpandedSegments(),
-                    instancer::placesSegments);
+            CoincidentCopies placed = WorldExpander.expand(drawing, new LayerRules(drawing,
+                    settings.includeLayers(), settings.excludeLayers(), settings.includeHiddenLayers()), world,
+                    settings.maxExpandedSegments(), instancer::placesSegments);
+            List<Segment> list = placed.segments();
+            coincident = placed.groups();
             segments = Optional.of(list);
             Box3 box = Box3.EMPTY;
             for (Segment s : list) {
@@ -56,7 +59,8 @@ public final class Resolver {
                     settings.maxExpandedSegments()));
             extent = estimatedExtent(layers);
         }
-        return new ResolvedDrawing(unit, layers, EntityCounter.count(drawing), segments, expanded, extent, reasons);
+        return new ResolvedDrawing(unit, layers, EntityCounter.count(drawing), segments, expanded, extent, reasons,
+                coincident.stream().map(g -> new ResolvedDrawing.Coincident(g.kept(), g.copies())).toList());
     }
 
     /** Length of a straight rod with the same radius of gyration: sqrt(12 trace(C) / m). */

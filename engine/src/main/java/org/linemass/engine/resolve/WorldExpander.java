@@ -18,8 +18,9 @@ import org.linemass.geometry.Segment;
  * of every block placed by its full transform, with the effective layer and the block path (outermost
  * first) in its provenance. Same rules as {@link BlockInstancer} (layer filters, layer-0
  * inheritance, frozen inserts, arrays, cycles and undefined blocks skipped). Walks with an explicit
- * stack and stops after {@code limit} segments (the caller checks the count first). Order: model space
- * entities in file order, each insert's copies column by column, depth first.
+ * stack and stops after {@code limit} distinct segments (the caller checks the count first). Exact
+ * coincident copies of one entity are collected once and counted ({@link CoincidentCopies}). Order:
+ * model space entities in file order, each insert's copies column by column, depth first.
  */
 final class WorldExpander {
 
@@ -69,8 +70,8 @@ final class WorldExpander {
      * @param occupied lets the walk skip inserts of blocks that place nothing, so an array or nest of
      *        10^12 empty copies costs nothing
      */
-    static List<Segment> expand(Drawing drawing, LayerRules rules, Affine world, long limit, Occupancy occupied) {
-        List<Segment> out = new ArrayList<>();
+    static CoincidentCopies expand(Drawing drawing, LayerRules rules, Affine world, long limit, Occupancy occupied) {
+        CoincidentCopies out = new CoincidentCopies();
         Block model = drawing.modelSpace();
         if (model == null) {
             return out;
@@ -109,7 +110,7 @@ final class WorldExpander {
         return out;
     }
 
-    private static void emit(Frame f, LayerRules rules, List<Segment> out, long limit) {
+    private static void emit(Frame f, LayerRules rules, CoincidentCopies out, long limit) {
         for (Segment seg : f.block.segments()) {
             if (out.size() >= limit) {
                 return;

@@ -53,6 +53,11 @@ class InstancingPropertyTest {
             acc.computeIfAbsent(s.source().layer(), k -> new MomentsAccumulator())
                     .add(MomentIntegrator.lengthMoments(s, 1e-10));
         }
+        // exact coincident copies are expanded once and counted: weigh them as often as they are placed
+        for (ResolvedDrawing.Coincident c : r.coincident()) {
+            acc.get(c.kept().source().layer())
+                    .add(MomentIntegrator.lengthMoments(c.kept(), 1e-10).scaledDensity(c.copies() - 1));
+        }
         assertEquals(acc.keySet(), r.layers().moments().keySet());
         for (Map.Entry<String, MomentsAccumulator> e : acc.entrySet()) {
             Moments want = e.getValue().result();
