@@ -8,10 +8,12 @@ import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import org.linemass.drawing.Drawing;
 import org.linemass.importer.parse.DrawingReader;
+import org.linemass.importer.parse.ReadSettings;
 import org.linemass.importer.read.AsciiGroupSource;
 import org.linemass.importer.read.BinaryGroupSource;
 import org.linemass.importer.read.ForeignFormat;
 import org.linemass.importer.read.GroupSource;
+import org.linemass.importer.read.ReadException;
 
 /**
  * Reads one DXF file (ASCII or binary) into a {@link Drawing}. The file is opened read-only and
@@ -92,7 +94,9 @@ public final class DxfImporter {
 
     private static Drawing guarded(String name, GroupSource src, ImportOptions options) throws DxfInputException {
         try {
-            return DrawingReader.read(src, options);
+            return DrawingReader.read(src, settings(options));
+        } catch (ReadException e) {
+            throw inputError(e);
         } catch (IOException e) {
             throw new DxfInputException(name, 0, "", "", "cannot read the file: " + e.getMessage());
         } catch (StackOverflowError | OutOfMemoryError e) {
@@ -102,6 +106,21 @@ public final class DxfImporter {
             throw new DxfInputException(name, 0, "", "", "internal error while reading the drawing ("
                     + e.getClass().getSimpleName() + ": " + e.getMessage() + "); please report this file");
         }
+    }
+
+    /** What the reading packages need of the options. */
+    private static ReadSettings settings(ImportOptions o) {
+        return new ReadSettings(o.unitOverride(), o.maxBlockDepth(), o.maxControlPoints(), o.maxVertices(),
+                o.paperSpace(), o.invisible(), o.faceEdges(), o.mlinesAndLeaders());
+    }
+
+    /** The public input error for a reading failure: the same message, by line or by byte offset. */
+    private static DxfInputException inputError(ReadException e) {
+        if (e.binary()) {
+            return DxfInputException.atByte(e.file(), e.position(), e.entityType(), e.handle(), e.problem());
+        }
+        return new DxfInputException(e.file(), (int) Math.min(e.position(), Integer.MAX_VALUE), e.entityType(),
+                e.handle(), e.problem());
     }
 
     private static boolean startsWithBom(byte[] head, int length) {

@@ -1,5 +1,7 @@
 package org.linemass.importer;
 
+import org.linemass.importer.read.ReadException;
+
 /**
  * A file that cannot be read as a drawing. The message is one line naming the file, the DXF line
  * number, the entity type and handle where known, and what was expected. This is the only
@@ -60,15 +62,7 @@ public final class DxfInputException extends Exception {
 
     /** {@code s} with control characters replaced by '?' and cut to {@code max} characters. */
     public static String oneLine(String s, int max) {
-        StringBuilder sb = new StringBuilder(Math.min(s.length(), max) + 3);
-        for (int i = 0; i < s.length() && i < max; i++) {
-            char c = s.charAt(i);
-            sb.append(c == '\n' || c == '\r' ? ' ' : Character.isISOControl(c) ? '?' : c);
-        }
-        if (s.length() > max) {
-            sb.append("...");
-        }
-        return sb.toString();
+        return ReadException.oneLine(s, max);
     }
 
     public String file() {

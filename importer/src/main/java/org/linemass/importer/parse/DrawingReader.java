@@ -15,11 +15,10 @@ import org.linemass.drawing.Layer;
 import org.linemass.drawing.LengthUnit;
 import org.linemass.drawing.UnitSource;
 import org.linemass.geometry.Vec3;
-import org.linemass.importer.DxfInputException;
-import org.linemass.importer.ImportOptions;
 import org.linemass.importer.entity.EntitySkip;
 import org.linemass.importer.entity.MlineStyle;
 import org.linemass.importer.read.GroupSource;
+import org.linemass.importer.read.ReadException;
 import org.linemass.importer.read.Record;
 import org.linemass.importer.read.RecordReader;
 
@@ -38,7 +37,7 @@ public final class DrawingReader {
     private static final int GROUPS_PER_VERTEX = 8;
 
     private final GroupSource src;
-    private final ImportOptions options;
+    private final ReadSettings options;
     private final String file;
     private final List<ImportNote> notes = new ArrayList<>();
     private final Map<String, Layer> layers = new LinkedHashMap<>();
@@ -47,7 +46,7 @@ public final class DrawingReader {
     private final RecordStream in;
     private HeaderData header = HeaderData.NONE;
 
-    private DrawingReader(GroupSource src, ImportOptions options) {
+    private DrawingReader(GroupSource src, ReadSettings options) {
         this.src = src;
         this.options = options;
         this.file = src.file();
@@ -62,11 +61,11 @@ public final class DrawingReader {
     }
 
     /** Reads the whole drawing from {@code src}. */
-    public static Drawing read(GroupSource src, ImportOptions options) throws DxfInputException, IOException {
+    public static Drawing read(GroupSource src, ReadSettings options) throws ReadException, IOException {
         return new DrawingReader(src, options).read();
     }
 
-    private Drawing read() throws DxfInputException, IOException {
+    private Drawing read() throws ReadException, IOException {
         Record r = in.next();
         if (r == null) {
             throw src.error(0, "", "", "empty file: no DXF group codes");
@@ -143,7 +142,7 @@ public final class DrawingReader {
      * a stray {@code 0 ENDSEC} followed by more variables (they are read too), a HEADER closed by
      * the next {@code 0 SECTION} or by the end of the file.
      */
-    private Record readHeader(Record r) throws DxfInputException, IOException {
+    private Record readHeader(Record r) throws ReadException, IOException {
         if (r.hasBadValue()) {
             throw src.error(r.badPosition(), "HEADER", "", "value of group code " + r.badCode()
                     + " is not a number: '" + r.badText() + "'");
@@ -194,7 +193,7 @@ public final class DrawingReader {
      * end of the file before {@code 0 ENDSEC}): a warning names the line and says what was read.
      */
     private Record nextInSection(String section, long lastPos, String lastType, String lastHandle)
-            throws DxfInputException, IOException {
+            throws ReadException, IOException {
         return nextInSection(section, lastPos, lastType, lastHandle, -1);
     }
 
@@ -203,7 +202,7 @@ public final class DrawingReader {
      * entity loops keep no handle string per record).
      */
     private Record nextInSection(String section, long lastPos, String lastType, String lastHandle,
-            long lastHandleValue) throws DxfInputException, IOException {
+            long lastHandleValue) throws ReadException, IOException {
         Record r = in.next();
         if (r == null || r.type().equals("EOF")) {
             ended = true;
@@ -221,7 +220,7 @@ public final class DrawingReader {
         return r;
     }
 
-    private Record skipSection(String name) throws DxfInputException, IOException {
+    private Record skipSection(String name) throws ReadException, IOException {
         long pos = lastPosition;
         String type = "SECTION";
         String handle = "";
@@ -239,7 +238,7 @@ public final class DrawingReader {
         }
     }
 
-    private Record readTables() throws DxfInputException, IOException {
+    private Record readTables() throws ReadException, IOException {
         String table = "";
         long pos = lastPosition;
         String type = "SECTION";
@@ -269,7 +268,7 @@ public final class DrawingReader {
         }
     }
 
-    private void readLayer(Record r) throws DxfInputException {
+    private void readLayer(Record r) throws ReadException {
         if (r.hasBadValue()) {
             throw src.error(r.badPosition(), "LAYER", r.handle(), "value of group code " + r.badCode()
                     + " is not a number: '" + r.badText() + "'");
@@ -281,7 +280,7 @@ public final class DrawingReader {
         layers.put(name, new Layer(name, colour >= 0, (((long) flags) & 1) != 0, c, true));
     }
 
-    private Record readBlocks() throws DxfInputException, IOException {
+    private Record readBlocks() throws ReadException, IOException {
         long pos = lastPosition;
         String type = "SECTION";
         String handle = "";
@@ -311,7 +310,7 @@ public final class DrawingReader {
         }
     }
 
-    private void readBlock(Record r) throws DxfInputException, IOException {
+    private void readBlock(Record r) throws ReadException, IOException {
         if (r.hasBadValue()) {
             throw src.error(r.badPosition(), "BLOCK", r.handle(), "value of group code " + r.badCode()
                     + " is not a number: '" + r.badText() + "'");
@@ -374,7 +373,7 @@ public final class DrawingReader {
         return true;
     }
 
-    private Record readEntities() throws DxfInputException, IOException {
+    private Record readEntities() throws ReadException, IOException {
         BlockBuilder model = blocks.get(Drawing.MODEL_SPACE);
         long pos = lastPosition;
         String type = "SECTION";
@@ -406,7 +405,7 @@ public final class DrawingReader {
      * The OBJECTS section: MLINESTYLE objects are kept for the MLINEs (a style that cannot be used
      * gets a warning, and its MLINEs keep their own element parameters); everything else is passed.
      */
-    private Record readObjects() throws DxfInputException, IOException {
+    private Record readObjects() throws ReadException, IOException {
         long pos = lastPosition;
         String type = "SECTION";
         String handle = "";
@@ -509,7 +508,7 @@ public final class DrawingReader {
     /** The unit, where it came from, and the note that says it was guessed. */
     record UnitChoice(LengthUnit unit, UnitSource source, java.util.Optional<ImportNote> note) {
 
-        static UnitChoice of(HeaderData h, ImportOptions o, String file) {
+        static UnitChoice of(HeaderData h, ReadSettings o, String file) {
             if (o.unitOverride().isPresent()) {
                 return new UnitChoice(o.unitOverride().get(), UnitSource.OPTION, java.util.Optional.empty());
             }

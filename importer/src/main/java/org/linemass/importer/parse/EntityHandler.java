@@ -4,8 +4,6 @@ import java.io.IOException;
 import java.util.List;
 import org.linemass.drawing.ImportNote;
 import org.linemass.geometry.Provenance;
-import org.linemass.importer.DxfInputException;
-import org.linemass.importer.ImportOptions;
 import org.linemass.importer.entity.Converters;
 import org.linemass.importer.entity.EntitySkip;
 import org.linemass.importer.entity.FaceEdges;
@@ -13,6 +11,7 @@ import org.linemass.importer.entity.InsertSpec;
 import org.linemass.importer.entity.MlinePath;
 import org.linemass.importer.entity.MlineStyle;
 import org.linemass.importer.entity.PolylineBuilder;
+import org.linemass.importer.read.ReadException;
 import org.linemass.importer.read.Record;
 
 /**
@@ -29,7 +28,7 @@ final class EntityHandler {
     static final String KNOTS_ASSUMED = "knots_assumed";
 
     private final String file;
-    private final ImportOptions options;
+    private final ReadSettings options;
     private final List<ImportNote> notes;
     private final boolean binary;
     /** Block name put in the provenance of paper-space entities read into model space. */
@@ -59,7 +58,7 @@ final class EntityHandler {
     /** The layer name last added to {@link #usedLayers}. */
     private String lastLayer;
 
-    EntityHandler(String file, boolean binary, ImportOptions options, List<ImportNote> notes) {
+    EntityHandler(String file, boolean binary, ReadSettings options, List<ImportNote> notes) {
         this.file = file;
         this.binary = binary;
         this.options = options;
@@ -67,7 +66,7 @@ final class EntityHandler {
     }
 
     /** Handles {@code r}; reads its follower records from {@code in}. Null target = paper space. */
-    void handle(Record r, RecordStream in, BlockBuilder target) throws DxfInputException, IOException {
+    void handle(Record r, RecordStream in, BlockBuilder target) throws ReadException, IOException {
         boolean fromPaper = target == null && paperTarget != null;
         if (fromPaper) {
             target = paperTarget;
@@ -191,7 +190,7 @@ final class EntityHandler {
      * Counts an invisible entity and reads past the records that belong to it (the vertices of a
      * POLYLINE, the attributes of an INSERT), so that none of it reaches the block.
      */
-    private void leaveOutInvisible(Record r, RecordStream in) throws DxfInputException, IOException {
+    private void leaveOutInvisible(Record r, RecordStream in) throws ReadException, IOException {
         String type = r.type();
         invisible.merge(type.isEmpty() ? "(unnamed)" : type, 1, Integer::sum);
         if (type.equals("POLYLINE")) {
@@ -235,7 +234,7 @@ final class EntityHandler {
     }
 
     private void handlePolyline(Record r, RecordStream in, BlockBuilder target, Provenance p)
-            throws DxfInputException, IOException {
+            throws ReadException, IOException {
         boolean bad = r.hasBadValue();
         String badMessage = bad ? badValue(r) : "";
         PolylineBuilder b = PolylineBuilder.start(r, options.maxVertices());
@@ -283,7 +282,7 @@ final class EntityHandler {
     }
 
     private void skipFollowers(RecordStream in, String followerType, BlockBuilder target)
-            throws DxfInputException, IOException {
+            throws ReadException, IOException {
         while (true) {
             Record a = in.next();
             if (a == null) {

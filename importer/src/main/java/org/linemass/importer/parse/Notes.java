@@ -1,7 +1,7 @@
 package org.linemass.importer.parse;
 
 import org.linemass.drawing.ImportNote;
-import org.linemass.importer.DxfInputException;
+import org.linemass.importer.read.ReadException;
 
 /** Builds {@link ImportNote}s whose message is one printable line, whatever names the file holds. */
 final class Notes {
@@ -15,6 +15,6 @@ final class Notes {
     static ImportNote of(String severity, String kind, String file, int line, String entityType, String handle,
             String layer, String message) {
         return new ImportNote(severity, kind, file, line, entityType, handle, layer,
-                DxfInputException.oneLine(message, MAX_MESSAGE));
+                ReadException.oneLine(message, MAX_MESSAGE));
     }
 }

@@ -1,8 +1,8 @@
 package org.linemass.importer.parse;
 
 import java.io.IOException;
-import org.linemass.importer.DxfInputException;
 import org.linemass.importer.read.GroupSource;
+import org.linemass.importer.read.ReadException;
 import org.linemass.importer.read.Record;
 import org.linemass.importer.read.RecordReader;
 
@@ -26,7 +26,7 @@ final class RecordStream {
     }
 
     /** The next record, or null at the end of the input. */
-    Record next() throws DxfInputException, IOException {
+    Record next() throws ReadException, IOException {
         if (pushedBack) {
             pushedBack = false;
             return rec;
@@ -44,7 +44,7 @@ final class RecordStream {
     }
 
     /** An input error located at {@code r}. */
-    DxfInputException error(Record r, String problem) {
+    ReadException error(Record r, String problem) {
         return reader.source().error(r.position(), r.type(), r.handle(), problem);
     }
 }

@@ -6,7 +6,6 @@ import java.lang.invoke.MethodHandles;
 import java.lang.invoke.VarHandle;
 import java.nio.ByteOrder;
 import java.nio.channels.ReadableByteChannel;
-import org.linemass.importer.DxfInputException;
 
 /**
  * Tokenizer for ASCII DXF: lines end in LF or CRLF; a group code line may be padded with spaces;
@@ -30,6 +29,8 @@ public final class AsciiGroupSource extends GroupSource {
     private int lineEnd;
     private int code;
     private long codeLine;
+    /** Absolute byte offset of the current pair's code line. */
+    private long codeOffset;
 
     private AsciiGroupSource(String file, ByteWindow w, int maxLineBytes) {
         super(file);
@@ -49,7 +50,7 @@ public final class AsciiGroupSource extends GroupSource {
     }
 
     /** Reads one line into [lineStart, lineEnd); false at end of input. */
-    private boolean readLine() throws DxfInputException, IOException {
+    private boolean readLine() throws ReadException, IOException {
         int i = w.pos;
         while (true) {
             byte[] b = w.buf;
@@ -127,12 +128,13 @@ public final class AsciiGroupSource extends GroupSource {
     }
 
     @Override
-    public boolean next() throws DxfInputException, IOException {
+    public boolean next() throws ReadException, IOException {
         while (true) {
             if (!readLine()) {
                 return false;
             }
             codeLine = lineNo;
+            codeOffset = w.base + lineStart;
             code = parseCode();
             if (code == 999 || (code != 0 && unwanted.test(code))) {
                 if (!skipLine()) {
@@ -156,7 +158,7 @@ public final class AsciiGroupSource extends GroupSource {
         }
     }
 
-    private int parseCode() throws DxfInputException {
+    private int parseCode() throws ReadException {
         byte[] b = w.buf;
         int s = lineStart;
         int e = lineEnd;
@@ -185,13 +187,28 @@ public final class AsciiGroupSource extends GroupSource {
         return neg ? -v : v;
     }
 
-    private DxfInputException badCode() {
+    private ReadException badCode() {
         return error(lineNo, "", "", "expected a group code (an integer), got '" + excerpt() + "'");
     }
 
     @Override
     public int code() {
         return code;
+    }
+
+    /** Byte offset in the input of the current pair's code line (where a copy can splice before it). */
+    public long pairOffset() {
+        return codeOffset;
+    }
+
+    /** Byte offset in the input of the current pair's value line. */
+    public long valueOffset() {
+        return w.base + lineStart;
+    }
+
+    /** Length in bytes of the current pair's value line, without its line end. */
+    public int valueLength() {
+        return lineEnd - lineStart;
     }
 
     @Override

@@ -4,7 +4,6 @@ import ch.randelshofer.fastdoubleparser.JavaDoubleParser;
 import java.io.IOException;
 import java.nio.channels.ReadableByteChannel;
 import java.nio.charset.StandardCharsets;
-import org.linemass.importer.DxfInputException;
 
 /**
  * Tokenizer for binary DXF (DXF Reference, binary DXF; FACTS.md §7.6): after the 22-byte sentinel,
@@ -70,7 +69,7 @@ public final class BinaryGroupSource extends GroupSource {
     }
 
     @Override
-    public boolean next() throws DxfInputException, IOException {
+    public boolean next() throws ReadException, IOException {
         if (!w.ensure(1)) {
             return false;
         }
@@ -138,7 +137,7 @@ public final class BinaryGroupSource extends GroupSource {
      * else means the stream slipped on an earlier value width, and reading on would invent
      * entity types.
      */
-    private void checkType() throws DxfInputException {
+    private void checkType() throws ReadException {
         boolean ok = valEnd > valStart;
         for (int i = valStart; i < valEnd && ok; i++) {
             int c = w.buf[i] & 0xff;
@@ -151,7 +150,7 @@ public final class BinaryGroupSource extends GroupSource {
         }
     }
 
-    private void readString() throws DxfInputException, IOException {
+    private void readString() throws ReadException, IOException {
         int i = w.pos;
         while (true) {
             while (i < w.limit && w.buf[i] != 0) {
@@ -178,7 +177,7 @@ public final class BinaryGroupSource extends GroupSource {
     }
 
     /** Steps over a NUL-terminated string of any length without holding it; it reads as empty. */
-    private void skipString() throws DxfInputException, IOException {
+    private void skipString() throws ReadException, IOException {
         while (true) {
             int i = w.pos;
             while (i < w.limit && w.buf[i] != 0) {
@@ -197,7 +196,7 @@ public final class BinaryGroupSource extends GroupSource {
         }
     }
 
-    private void need(int n, String what) throws DxfInputException, IOException {
+    private void need(int n, String what) throws ReadException, IOException {
         if (!w.ensure(n)) {
             throw error(codePos, "", "", "file ends where a " + what + " was expected");
         }

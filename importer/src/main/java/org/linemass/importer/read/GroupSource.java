@@ -2,7 +2,6 @@ package org.linemass.importer.read;
 
 import java.io.IOException;
 import java.nio.charset.Charset;
-import org.linemass.importer.DxfInputException;
 
 /**
  * A stream of DXF (group code, value) pairs. After {@link #next()} returns true the current pair's
@@ -40,7 +39,7 @@ public abstract class GroupSource {
     }
 
     /** Advances to the next pair; false at the clean end of the input. */
-    public abstract boolean next() throws DxfInputException, IOException;
+    public abstract boolean next() throws ReadException, IOException;
 
     public abstract int code();
 
@@ -100,17 +99,14 @@ public abstract class GroupSource {
     }
 
     /** Builds the input error for the current position, in the location style of this source. */
-    public final DxfInputException error(long where, String entityType, String handle, String problem) {
+    public final ReadException error(long where, String entityType, String handle, String problem) {
         lastErrorPosition = where;
         return error(file, binary(), where, entityType, handle, problem);
     }
 
-    public static DxfInputException error(String file, boolean binary, long where, String entityType,
+    public static ReadException error(String file, boolean binary, long where, String entityType,
             String handle, String problem) {
-        if (binary) {
-            return DxfInputException.atByte(file, where, entityType, handle, problem);
-        }
-        return new DxfInputException(file, (int) Math.min(where, Integer.MAX_VALUE), entityType, handle, problem);
+        return new ReadException(file, binary, where, entityType, handle, problem);
     }
 
     /** Position passed to the most recent {@link #error(long, String, String, String)}. */

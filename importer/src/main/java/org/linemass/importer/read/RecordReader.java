@@ -1,7 +1,6 @@
 package org.linemass.importer.read;
 
 import java.io.IOException;
-import org.linemass.importer.DxfInputException;
 
 /**
  * Groups the pair stream of a {@link GroupSource} into {@link Record}s. The reader keeps one pair
@@ -66,7 +65,7 @@ public final class RecordReader {
      * Reads the next record into {@code rec}; false when the input has no more records. Groups
      * before the first {@code 0} group are an error (not a DXF).
      */
-    public boolean read(Record rec) throws DxfInputException, IOException {
+    public boolean read(Record rec) throws ReadException, IOException {
         if (!started) {
             started = true;
             if (!src.next()) {
@@ -111,7 +110,7 @@ public final class RecordReader {
                     addGroup(rec, code);
                 }
             }
-        } catch (DxfInputException e) {
+        } catch (ReadException e) {
             if (e.entityType().isEmpty() && !rec.type.isEmpty()) {
                 throw withContext(e, rec);
             }
@@ -137,7 +136,7 @@ public final class RecordReader {
         return flags;
     }
 
-    private DxfInputException withContext(DxfInputException e, Record rec) {
+    private ReadException withContext(ReadException e, Record rec) {
         return src.error(src.lastErrorPosition(), rec.type, rec.handle(), e.problem());
     }
 
