@@ -3,7 +3,7 @@ package org.linemass.reports.dxf;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.linemass.reports.dxf.DxfPairScanner.Pair;
+import org.linemass.importer.DxfPairs.Pair;
 
 /**
  * Where {@link DxfMarkupWriter} splices, found in one pass over the pairs of an ASCII DXF: the

@@ -13,6 +13,9 @@ import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.PieceResult;
 import org.linemass.geometry.Vec3;
+import org.linemass.importer.DxfInputException;
+import org.linemass.importer.DxfPairs;
+import org.linemass.importer.DxfPairs.Pair;
 
 /**
  * Writes a copy of an ASCII DXF drawing with a markup layer added. The original bytes are copied
@@ -27,7 +30,9 @@ import org.linemass.geometry.Vec3;
  * of gravity (or the length centroid without mass) gets a CIRCLE, two LINEs and the TEXT "CG"; a
  * drawing read incompletely gets one more TEXT saying so. Sizes are 1 % of the drawing's extent.
  * Coordinates are converted back from metres to drawing units. Files from R13 on get subclass
- * markers; R12 files get the plain R12 form. Binary DXF is refused (IOException), and so is a
+ * markers; R12 files get the plain R12 form. The pairs and their byte places come from the importer's
+ * own tokenizer ({@link DxfPairs}), so the copy is spliced where the reader sees the pairs. Binary
+ * DXF is refused (IOException), and so is a
  * drawing whose group pairs are out of step before its 0/EOF (a code line that is not a number,
  * an unpaired last line, no EOF): the message names the line. Anything after 0/EOF is not copied,
  * so the copy always has whole pairs and ends with 0/EOF.
@@ -43,40 +48,35 @@ public final class DxfMarkupWriter {
     private static final int COG_COLOUR = 5;
     /** Line pitch of stacked labels, in text heights. */
     private static final double LABEL_PITCH = 1.5;
-    private static final String BINARY_SENTINEL = "AutoCAD Binary DXF";
 
     private DxfMarkupWriter() {
     }
 
     /** Writes the marked-up copy of {@code original} (the input file's bytes) to {@code out}. */
     public static void write(byte[] original, DrawingResult result, OutputStream out) throws IOException {
-        String text = new String(original, StandardCharsets.ISO_8859_1);
-        if (text.startsWith(BINARY_SENTINEL)) {
-            throw new IOException(result.drawing().file() + ": a marked-up copy can only be written for ASCII DXF, "
-                    + "this file is binary DXF");
+        String file = result.drawing().file();
+        if (DxfPairs.isBinary(original)) {
+            throw new IOException(file + ": a marked-up copy can only be written for ASCII DXF, this file is binary DXF");
         }
-        String eol = text.contains("\r\n") ? "\r\n" : "\n";
-        List<DxfPairScanner.Pair> pairs = DxfPairScanner.scan(text);
-        int eof = -1;
-        for (int i = 0; i < pairs.size() && eof < 0; i++) {
-            if (pairs.get(i).code() == 0 && pairs.get(i).value().equals("EOF")) {
-                eof = i;
-            }
-        }
-        if (eof < 0) {
+        List<Pair> pairs;
+        try {
+            // the importer's own tokenizer: the copy splices where the reader sees the pairs
+            pairs = DxfPairs.upToEof(file, original);
+        } catch (DxfInputException e) {
             // the pairs are out of step (a code line that is not a number, an unpaired last line) or
             // the file has no 0/EOF: a copy would carry the break into every reader
-            int at = pairs.isEmpty() ? 0 : end(text, pairs.get(pairs.size() - 1));
-            throw new IOException(result.drawing().file() + ":" + lineOf(text, at) + ": cannot write a marked-up "
-                    + "copy: the group pairs of the drawing are out of step from here on, or it does not end with 0/EOF");
+            throw new IOException(file + (e.line() > 0 ? ":" + e.line() : "") + ": cannot write a marked-up copy: "
+                    + e.problem());
         }
-        DxfPairScanner.Pair last = pairs.get(eof);
+        String text = new String(original, StandardCharsets.ISO_8859_1);
+        String eol = text.contains("\r\n") ? "\r\n" : "\n";
+        Pair last = pairs.get(pairs.size() - 1);
         // everything after 0/EOF is ignored by readers and is not copied: the copy ends with the EOF line
         int copyEnd = end(text, last);
         boolean addEol = copyEnd == 0 || text.charAt(copyEnd - 1) != '\n';
-        DxfLayout layout = DxfLayout.of(pairs.subList(0, eof + 1));
+        DxfLayout layout = DxfLayout.of(pairs);
         if (layout.entitiesEnd < 0) {
-            throw new IOException(result.drawing().file() + ":" + lineOf(text, last.offset()) + ": no ENTITIES section "
+            throw new IOException(file + ":" + lineOf(text, last.offset()) + ": no ENTITIES section "
                     + "before the end of the drawing to add the markup to");
         }
         String layer = LAYER;
@@ -150,7 +150,7 @@ public final class DxfMarkupWriter {
     }
 
     /** Offset just past the value line of {@code p}, with its line end. */
-    private static int end(String text, DxfPairScanner.Pair p) {
+    private static int end(String text, Pair p) {
         int e = p.valueOffset() + p.valueLength();
         if (e < text.length() && text.charAt(e) == '\r') {
             e++;

@@ -22,9 +22,10 @@ import org.linemass.engine.result.Severity;
 import org.linemass.geometry.Vec3;
 import org.linemass.importer.DxfImporter;
 import org.linemass.importer.DxfInputException;
+import org.linemass.importer.DxfPairs;
+import org.linemass.importer.DxfPairs.Pair;
 import org.linemass.importer.ImportOptions;
 import org.linemass.reports.Fixtures;
-import org.linemass.reports.dxf.DxfPairScanner.Pair;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -53,6 +54,15 @@ class DxfMarkupWriterTest {
         return d;
     }
 
+    /** The pairs of a text, read with the importer's tokenizer as the writer reads them. */
+    private static List<Pair> scan(String text) {
+        try {
+            return DxfPairs.upToEof("t.dxf", text.getBytes(StandardCharsets.ISO_8859_1));
+        } catch (DxfInputException e) {
+            throw new AssertionError("not whole pairs up to 0/EOF: " + e.getMessage(), e);
+        }
+    }
+
     private static String markup(byte[] original, DrawingResult r) throws IOException {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         DxfMarkupWriter.write(original, r, out);
@@ -64,8 +74,8 @@ class DxfMarkupWriterTest {
         DrawingResult r = Fixtures.flatFrame("bars.dxf");
         String out = markup(R12.getBytes(StandardCharsets.ISO_8859_1), r);
         assertFalse(out.replace("\r\n", "").contains("\n"), "line ends stay CR LF");
-        List<Pair> pairs = DxfPairScanner.scan(out);
-        assertEquals(withoutRaisedValues(DxfPairScanner.scan(R12)), withoutRaisedValues(withoutMarkup(pairs)),
+        List<Pair> pairs = scan(out);
+        assertEquals(withoutRaisedValues(scan(R12)), withoutRaisedValues(withoutMarkup(pairs)),
                 "original pairs untouched apart from the LAYER table's entry count");
         assertLayerCountMatchesRecords(pairs);
         // two findings have a place, plus the centre-of-gravity circle
@@ -86,8 +96,8 @@ class DxfMarkupWriterTest {
         assumeTrue(demo != null && Files.exists(demo), "demo drawing not found beside the module");
         byte[] original = Files.readAllBytes(demo);
         String out = markup(original, Fixtures.frame("garden-planter.dxf", 0.3, false));
-        List<Pair> pairs = DxfPairScanner.scan(out);
-        List<String> before = withoutRaisedValues(DxfPairScanner.scan(new String(original, StandardCharsets.ISO_8859_1)));
+        List<Pair> pairs = scan(out);
+        List<String> before = withoutRaisedValues(scan(new String(original, StandardCharsets.ISO_8859_1)));
         List<String> after = withoutRaisedValues(withoutMarkup(pairs));
         assertTrue(before.equals(after), "original pairs untouched apart from $HANDSEED and the LAYER count");
         assertLayerCountMatchesRecords(pairs);
@@ -119,8 +129,8 @@ class DxfMarkupWriterTest {
         for (Path f : files) {
             byte[] original = Files.readAllBytes(f);
             String out = markup(original, Fixtures.frame(f.getFileName().toString(), 0.3, false));
-            List<Pair> pairs = DxfPairScanner.scan(out);
-            assertEquals(withoutRaisedValues(DxfPairScanner.scan(new String(original, StandardCharsets.ISO_8859_1))),
+            List<Pair> pairs = scan(out);
+            assertEquals(withoutRaisedValues(scan(new String(original, StandardCharsets.ISO_8859_1))),
                     withoutRaisedValues(withoutMarkup(pairs)), f + ": original pairs untouched");
             assertLayerCountMatchesRecords(pairs);
             assertHandlesUniqueBelowSeed(pairs);
@@ -135,7 +145,7 @@ class DxfMarkupWriterTest {
                 .replaceFirst("0\r\nLINE\r\n8", "0\r\nLINE\r\n5\r\n2A\r\n8")
                 .replaceFirst("0\r\nLINE\r\n8", "0\r\nLINE\r\n5\r\n2B\r\n8");
         assertTrue(withHandles.contains("$HANDLING") && withHandles.contains("5\r\n2A"), "fixture edited");
-        List<Pair> pairs = DxfPairScanner.scan(markup(withHandles.getBytes(StandardCharsets.ISO_8859_1),
+        List<Pair> pairs = scan(markup(withHandles.getBytes(StandardCharsets.ISO_8859_1),
                 Fixtures.flatFrame("bars.dxf")));
         assertHandlesUniqueBelowSeed(pairs);
         int circle = indexOf(pairs, 0, "CIRCLE");
@@ -205,7 +215,7 @@ class DxfMarkupWriterTest {
         }
         DrawingResult r = new DrawingResult(base.drawing(), base.entities(), base.layers(), base.pieces(), base.groups(),
                 findings, base.totals(), base.sections(), base.incompleteReasons());
-        List<Pair> pairs = DxfPairScanner.scan(markup(R12.getBytes(StandardCharsets.ISO_8859_1), r));
+        List<Pair> pairs = scan(markup(R12.getBytes(StandardCharsets.ISO_8859_1), r));
         Set<String> labelYs = new HashSet<>();
         for (int i = 0; i < pairs.size(); i++) {
             if (pairs.get(i).code() == 0 && pairs.get(i).value().equals("TEXT")) {
