@@ -94,7 +94,7 @@ final class CheckRun {
         if (jobs < 1) {
             throw new InputProblem("--jobs must be 1 or more, got " + jobs);
         }
-        ReportFiles sink = new ReportFiles(ctx.out(), drawing.protectedFiles(files));
+        ReportFiles sink = new ReportFiles(ctx.out(), plan.protect(drawing.protectedFiles(files)));
         java.util.Set<Path> seen = new java.util.HashSet<>();
         List<String> allTargets = new ArrayList<>(outputs.targets());
         allTargets.addAll(plan.targets());
@@ -112,7 +112,7 @@ final class CheckRun {
                 throw new InputProblem("two reports would be written to the same file " + t);
             }
         }
-        StockTable stock = plan.planning() || !plan.planTargets().isEmpty() ? plan.table() : null;
+        StockTable stock = plan.table(drawing.sectionTable);
         PriceTable prices = plan.costs.prices();
         CutSettings cutSettings = plan.settings();
         ImportOptions io = drawing.importOptions();

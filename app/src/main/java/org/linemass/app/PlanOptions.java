@@ -16,7 +16,7 @@ import picocli.CommandLine.Option;
 /**
  * The cutting plan options of {@code check}: where the stock comes from (a stock table, or one
  * set of stock lengths for every section), kerf, minimum offcut, the solver's time, and the plan
- * report files. A plan is made only when stock is given.
+ * report files. A plan is made only when stock is given (here or in the section table).
  */
 final class PlanOptions {
 
@@ -24,7 +24,8 @@ final class PlanOptions {
     CostOptions costs = new CostOptions();
 
     @Option(names = "--stock-table", paramLabel = "CSV",
-            description = "Stock per section: section,stock_lengths_mm,stock_counts,kerf_mm,min_offcut_mm,coil_kg.")
+            description = "Stock per section: section,stock_lengths_mm,stock_counts,kerf_mm,min_offcut_mm,coil_kg "
+                    + "(the same columns may also be in the section table).")
     Path stockTable;
 
     @Option(names = "--stock", paramLabel = "LENGTHS", split = ",", converter = Converters.Length.class,
@@ -53,9 +54,15 @@ final class PlanOptions {
             description = "Write the plan summary (bought, used, waste, bound, gap per section) as CSV.")
     String planCsv;
 
-    /** True when stock was given, so a plan is made. */
-    boolean planning() {
-        return stockTable != null || stock != null;
+    /** {@code inputs} with the stock and price tables added, so no report overwrites them. */
+    org.linemass.reports.io.ProtectedFiles protect(org.linemass.reports.io.ProtectedFiles inputs) {
+        if (stockTable != null) {
+            inputs.add(stockTable, "stock table");
+        }
+        if (costs.priceTable != null) {
+            inputs.add(costs.priceTable, "price table");
+        }
+        return inputs;
     }
 
     /** Every report file of the plan and cost options. */
@@ -83,12 +90,23 @@ final class PlanOptions {
         return new CutSettings(CutSettings.DEFAULT.resolutionM(), Math.max(1, (long) (planSeconds * 1000)));
     }
 
-    /** The stock table: the file's rows after a catch-all row from --stock, so the file wins. */
-    StockTable table() throws InputProblem, IOException {
+    /**
+     * The stock of the run, or null when none is given and no plan report is asked for: a catch-all
+     * row from --stock, then the stock columns of the section table ({@code sectionTable}, may be
+     * null), then the stock table's rows, so that the more particular source wins.
+     */
+    StockTable table(Path sectionTable) throws InputProblem, IOException {
         List<SectionStock> rows = new ArrayList<>();
         if (stock != null) {
             rows.add(new SectionStock("*", stock.stream().map(l -> new StockLength(l, null)).toList(),
                     kerfM == null ? 0 : kerfM, minOffcutM == null ? 0 : minOffcutM, null));
+        }
+        if (sectionTable != null) {
+            try {
+                rows.addAll(StockTableReader.readColumns(sectionTable).rows());
+            } catch (PlanInputException e) {
+                throw new InputProblem(e.getMessage());
+            }
         }
         if (stockTable != null) {
             try {
@@ -98,7 +116,11 @@ final class PlanOptions {
             }
         }
         if (rows.isEmpty()) {
-            throw new InputProblem("--cutting-csv, --order-csv and --plan-csv need --stock or --stock-table");
+            if (planTargets().isEmpty()) {
+                return null;
+            }
+            throw new InputProblem("--cutting-csv, --order-csv and --plan-csv need --stock, --stock-table or "
+                    + "stock columns in the section table");
         }
         return new StockTable(rows);
     }

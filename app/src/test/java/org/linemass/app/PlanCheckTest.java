@@ -78,6 +78,29 @@ class PlanCheckTest {
     void check_planReportWithoutStock_refused() {
         AppFixtures.Run r = demo("--cutting-csv", tmp.resolve("c.csv").toString());
         assertEquals(2, r.code());
-        assertTrue(r.err().contains("need --stock or --stock-table"), r.err());
+        assertTrue(r.err().contains("need --stock, --stock-table or stock columns in the section table"), r.err());
+    }
+
+    @Test
+    void check_stockColumnsInSectionTable_planWithoutStockOptions() throws Exception {
+        // the demo's section table with stock columns added (invented stock: 6 m bars of 8 mm, 25 kg coils of 4 mm)
+        Path demo = CorpusJsonTest.repo().resolve("testdata/demo");
+        List<String> rows = Files.readAllLines(demo.resolve("garden-planter-section-table.csv"));
+        StringBuilder t = new StringBuilder(rows.get(0) + ",stock_lengths_mm,kerf_mm,coil_kg\n");
+        for (String row : rows.subList(1, rows.size())) {
+            String stock = row.startsWith("PLANTER-D8,") ? ",6000,3," : row.startsWith("PLANTER-D4,") ? ",,0,25" : ",,,";
+            t.append(row).append(stock).append('\n');
+        }
+        Path sections = Files.writeString(tmp.resolve("sections.csv"), t.toString());
+        Path plan = tmp.resolve("plan.csv");
+        AppFixtures.Run r = AppFixtures.run(new EnginePipeline(), "check", demo.resolve("garden-planter.dxf").toString(),
+                "--fail-at", "never", "-q", "--section-table", sections.toString(),
+                "--assign-file", demo.resolve("garden-planter-layers.csv").toString(), "--plan-csv", plan.toString());
+        assertEquals(0, r.code(), r.err());
+        String text = Files.readString(plan);
+        // 4.367 m of 8 mm bar in one 6 m bar; the 4 mm wire in one coil (demo README lengths)
+        assertTrue(text.contains("\nPLANTER-D4,1,"), text);
+        assertTrue(text.contains("\nPLANTER-D8,1,"), text);
+        assertTrue(!text.contains("PLANTER-D3"), "the 3 mm row has no stock: not planned\n" + text);
     }
 }

@@ -1,19 +1,17 @@
 package org.linemass.plan.cost;
 
 import java.io.IOException;
-import java.io.StringReader;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
+import org.linemass.plan.stock.CsvText;
 import org.linemass.plan.stock.PlanInputException;
 
 /**
@@ -33,18 +31,11 @@ import org.linemass.plan.stock.PlanInputException;
  */
 public final class PriceTableReader {
 
-    private static final CSVFormat FORMAT = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true)
-            .setCommentMarker('#').setIgnoreEmptyLines(true).setTrim(true).setIgnoreHeaderCase(true)
-            .setAllowMissingColumnNames(true).get();
-
     private PriceTableReader() {
     }
 
     public static PriceTable read(Path file) throws IOException, PlanInputException {
         String text = Files.readString(file, StandardCharsets.UTF_8);
-        if (text.startsWith("\uFEFF")) {
-            text = text.substring(1);
-        }
         String name = file.getFileName() == null ? file.toString() : file.getFileName().toString();
         return read(text, file.toString(), name);
     }
@@ -53,17 +44,17 @@ public final class PriceTableReader {
     static PriceTable read(String text, String where, String fileName) throws PlanInputException {
         List<UnitPrice> rows = new ArrayList<>();
         Map<String, Integer> currencies = new TreeMap<>();
-        try (CSVParser p = CSVParser.builder().setReader(new StringReader(text)).setFormat(FORMAT).get()) {
-            Map<String, Integer> header = p.getHeaderMap();
+        CsvText csv = CsvText.of(text);
+        try (CSVParser p = csv.parser()) {
             for (String need : List.of("charge", "unit_price")) {
-                if (header.keySet().stream().noneMatch(h -> h != null && h.equalsIgnoreCase(need))) {
+                if (!CsvText.has(p, need)) {
                     throw new PlanInputException(where + ": the header has no '" + need + "' column");
                 }
             }
             for (CSVRecord r : p) {
-                int line = (int) p.getCurrentLineNumber();
+                int line = (int) csv.lineOf(r);
                 rows.add(row(r, where + ": line " + line + ": ", line));
-                String c = get(r, "currency");
+                String c = CsvText.cell(r, "currency");
                 if (!c.isEmpty()) {
                     currencies.putIfAbsent(c, line);
                 }
@@ -85,11 +76,11 @@ public final class PriceTableReader {
         if (!r.isConsistent()) {
             throw new PlanInputException(where + r.size() + " fields, the header has " + r.getParser().getHeaderNames().size());
         }
-        String chargeText = get(r, "charge");
+        String chargeText = CsvText.cell(r, "charge");
         Charge charge = Charge.of(chargeText).orElseThrow(() -> new PlanInputException(where + "charge: '" + chargeText
                 + "' is not one of " + Charge.names()));
-        double price = number(where, "unit_price", get(r, "unit_price"));
-        String lengthText = get(r, "stock_length_mm");
+        double price = number(where, "unit_price", CsvText.cell(r, "unit_price"));
+        String lengthText = CsvText.cell(r, "stock_length_mm");
         Double length = null;
         if (!lengthText.isEmpty()) {
             if (charge != Charge.PER_BAR) {
@@ -100,16 +91,7 @@ public final class PriceTableReader {
                 throw new PlanInputException(where + "stock_length_mm: " + lengthText + " is not positive");
             }
         }
-        return new UnitPrice(charge, get(r, "section"), get(r, "material"), length, price, line);
-    }
-
-    private static String get(CSVRecord r, String column) {
-        for (Map.Entry<String, Integer> e : r.getParser().getHeaderMap().entrySet()) {
-            if (e.getKey() != null && e.getKey().toLowerCase(Locale.ROOT).equals(column)) {
-                return e.getValue() < r.size() ? r.get(e.getValue()) : "";
-            }
-        }
-        return "";
+        return new UnitPrice(charge, CsvText.cell(r, "section"), CsvText.cell(r, "material"), length, price, line);
     }
 
     private static double number(String where, String column, String text) throws PlanInputException {

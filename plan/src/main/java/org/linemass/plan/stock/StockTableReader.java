@@ -1,72 +1,79 @@
 package org.linemass.plan.stock;
 
-import java.io.BufferedReader;
 import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
-import java.util.Locale;
+import java.util.Map;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
 
 /**
- * Reads a stock table: a CSV file with a header row naming the columns {@code section} (a name or
- * glob), {@code stock_lengths_mm} (lengths separated by {@code ;}), {@code stock_counts} (optional,
- * counts in the same order, an empty entry for unlimited), {@code kerf_mm}, {@code min_offcut_mm} and
- * {@code coil_kg} (for wire in coils; then no stock lengths). Columns may come in any order;
- * unknown columns and blank lines and lines starting with {@code #} are ignored. Every error names
- * the file, the line and the column.
+ * Reads stock from CSV (RFC 4180, UTF-8, an optional byte-order mark) with a header row naming the
+ * columns {@code section} (a name or glob), {@code stock_lengths_mm} (lengths separated by
+ * {@code ;}), {@code stock_counts} (optional, counts in the same order, an empty entry for
+ * unlimited), {@code kerf_mm}, {@code min_offcut_mm} and {@code coil_kg} (for wire in coils; then
+ * no stock lengths). Columns may come in any order and any case; unknown columns, blank lines and
+ * lines starting with {@code #} are ignored. Every error names the file, the line and the column.
+ *
+ * <p>{@link #read} reads a stock table, where every row must give stock. {@link #readColumns}
+ * reads the same columns from a section table, where they are optional: rows that give neither
+ * stock lengths nor a coil mass are skipped, and a table without those columns has no stock.
  */
 public final class StockTableReader {
 
     private StockTableReader() {
     }
 
+    /** A stock table: at least one row, each with stock lengths or a coil mass. */
     public static StockTable read(Path file) throws IOException, PlanInputException {
+        StockTable t = read(file, false);
+        if (t.rows().isEmpty()) {
+            throw new PlanInputException(file + ": no stock rows");
+        }
+        return t;
+    }
+
+    /** The stock columns of a section table (possibly none: an empty table). */
+    public static StockTable readColumns(Path sectionTable) throws IOException, PlanInputException {
+        return read(sectionTable, true);
+    }
+
+    private static StockTable read(Path file, boolean optional) throws IOException, PlanInputException {
+        CsvText csv = CsvText.of(Files.readString(file, StandardCharsets.UTF_8));
         List<SectionStock> rows = new ArrayList<>();
-        try (BufferedReader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            List<String> header = null;
-            String line;
-            int no = 0;
-            while ((line = r.readLine()) != null) {
-                no++;
-                if (no == 1 && line.startsWith("\uFEFF")) {
-                    line = line.substring(1);
+        try (CSVParser p = csv.parser()) {
+            Map<String, Integer> header = p.getHeaderMap();
+            if (!CsvText.has(p, "section")) {
+                throw new PlanInputException(file + ": line 1: the header has no 'section' column");
+            }
+            for (CSVRecord r : p) {
+                String where = file + ": line " + csv.lineOf(r) + ": ";
+                if (!r.isConsistent() && r.size() > header.size()) {
+                    throw new PlanInputException(where + r.size() + " fields, the header has " + header.size());
                 }
-                if (line.isBlank() || line.startsWith("#")) {
+                if (optional && CsvText.cell(r, "stock_lengths_mm").isEmpty() && CsvText.cell(r, "coil_kg").isEmpty()) {
                     continue;
                 }
-                List<String> cells = Arrays.stream(line.split(",", -1)).map(String::strip).toList();
-                if (header == null) {
-                    header = cells.stream().map(c -> c.toLowerCase(Locale.ROOT)).toList();
-                    if (!header.contains("section")) {
-                        throw new PlanInputException(file + ": line " + no + ": the header has no 'section' column");
-                    }
-                    continue;
-                }
-                rows.add(row(file, no, header, cells));
+                rows.add(row(where, r));
             }
-            if (rows.isEmpty()) {
-                throw new PlanInputException(file + ": no stock rows");
-            }
+        } catch (IOException | UncheckedIOException | IllegalArgumentException | IllegalStateException e) {
+            throw new PlanInputException(file + ": not a readable CSV table: " + e.getMessage());
         }
         return new StockTable(rows);
     }
 
-    private static SectionStock row(Path file, int no, List<String> header, List<String> cells)
-            throws PlanInputException {
-        String where = file + ": line " + no + ": ";
-        if (cells.size() > header.size()) {
-            throw new PlanInputException(where + cells.size() + " fields, the header has " + header.size());
-        }
-        String section = cell(header, cells, "section");
+    private static SectionStock row(String where, CSVRecord r) throws PlanInputException {
+        String section = CsvText.cell(r, "section");
         if (section.isEmpty()) {
             throw new PlanInputException(where + "empty section");
         }
-        List<Double> lengths = numbers(where, "stock_lengths_mm", cell(header, cells, "stock_lengths_mm"));
+        List<Double> lengths = numbers(where, "stock_lengths_mm", CsvText.cell(r, "stock_lengths_mm"));
         List<Double> counts = new ArrayList<>();
-        String countText = cell(header, cells, "stock_counts");
+        String countText = CsvText.cell(r, "stock_counts");
         if (!countText.isEmpty()) {
             for (String part : countText.split(";", -1)) {
                 counts.add(single(where, "stock_counts", part.strip(), -1));
@@ -88,9 +95,9 @@ public final class StockTableReader {
             }
             stock.add(new StockLength(lengths.get(i) / 1000.0, c >= 0 ? (int) c : null));
         }
-        double kerf = single(where, "kerf_mm", cell(header, cells, "kerf_mm"), 0) / 1000.0;
-        double min = single(where, "min_offcut_mm", cell(header, cells, "min_offcut_mm"), 0) / 1000.0;
-        String coilText = cell(header, cells, "coil_kg");
+        double kerf = single(where, "kerf_mm", CsvText.cell(r, "kerf_mm"), 0) / 1000.0;
+        double min = single(where, "min_offcut_mm", CsvText.cell(r, "min_offcut_mm"), 0) / 1000.0;
+        String coilText = CsvText.cell(r, "coil_kg");
         Double coil = coilText.isEmpty() ? null : single(where, "coil_kg", coilText, 0);
         if (stock.isEmpty() == (coil == null)) {
             throw new PlanInputException(where + "give either stock_lengths_mm or coil_kg for " + section);
@@ -100,11 +107,6 @@ public final class StockTableReader {
         } catch (IllegalArgumentException e) {
             throw new PlanInputException(where + e.getMessage());
         }
-    }
-
-    private static String cell(List<String> header, List<String> cells, String name) {
-        int i = header.indexOf(name);
-        return i < 0 || i >= cells.size() ? "" : cells.get(i);
     }
 
     private static List<Double> numbers(String where, String column, String text) throws PlanInputException {
