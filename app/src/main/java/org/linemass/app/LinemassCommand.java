@@ -7,7 +7,7 @@ import picocli.CommandLine.Command;
         description = "Centre-line length, mass, centre of gravity and drawing checks for wire, bar, tube and "
                 + "cable drawn in DXF.",
         subcommands = {CheckCommand.class, DemoCommand.class, SectionsCommand.class, MaterialsCommand.class,
-            IntegrateCommand.class, ServeCommand.class})
+            IntegrateCommand.class, ServeCommand.class, CompareCommand.class})
 final class LinemassCommand implements Runnable {
 
     @picocli.CommandLine.Spec
@@ -18,6 +18,6 @@ final class LinemassCommand implements Runnable {
     public void run() {
         spec.commandLine().usage(spec.commandLine().getErr());
         throw new picocli.CommandLine.ParameterException(spec.commandLine(),
-                "missing command: use check, demo, sections, materials, integrate or serve");
+                "missing command: use check, demo, sections, materials, integrate, serve or compare");
     }
 }
