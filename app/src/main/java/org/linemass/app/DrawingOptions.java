@@ -8,7 +8,9 @@ import java.util.Optional;
 import org.linemass.drawing.LengthUnit;
 import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.settings.AnalysisSettings;
+import org.linemass.engine.section.AssignmentReader;
 import org.linemass.engine.section.LayerAssignment;
+import org.linemass.engine.section.LayerJoin;
 import org.linemass.engine.section.SectionTable;
 import org.linemass.importer.ImportOptions;
 import org.linemass.reports.dxf.DxfMarkupWriter;
@@ -64,6 +66,12 @@ public final class DrawingOptions {
     @Option(names = {"-a", "--assign"}, paramLabel = "LAYER=SECTION",
             description = "Layers matching LAYER (a glob) are made of SECTION; repeatable, later rules win.")
     List<String> assign = new ArrayList<>();
+
+    @Option(names = "--join-layers", paramLabel = "GLOB+GLOB[=LAYER]",
+            description = "Pieces on layers matching any of the GLOBs join one another end to end (a bar and its "
+                    + "hooks drawn on two layers); a joined piece is reported on LAYER, or else on the layer with the "
+                    + "longest run, and takes its section. Repeatable. Default: ends join on one layer only.")
+    List<String> joinLayers = new ArrayList<>();
 
     @Option(names = "--density", paramLabel = "LAYER=EXPR",
             description = "Layers matching LAYER (a glob) have the linear density EXPR in kg/m instead of their "
@@ -157,11 +165,22 @@ public final class DrawingOptions {
         for (String g : densities.keySet()) {
             requirePattern("--density", g);
         }
+        List<LayerJoin> joins = new ArrayList<>();
+        for (Path p : assignFiles) {
+            joins.addAll(AssignmentReader.readJoins(p));
+        }
+        for (String j : joinLayers) {
+            try {
+                joins.add(LayerJoin.parse(j, "--join-layers " + j));
+            } catch (IllegalArgumentException e) {
+                throw new InputProblem("bad --join-layers: " + e.getMessage());
+            }
+        }
         try {
             // the settings check the tolerances themselves (the gap limit covers the join tolerance)
             return new AnalysisSettings(Optional.ofNullable(joinM), Optional.ofNullable(gapLimitM), Optional.empty(),
                     AnalysisSettings.defaults(table).integrationRelative(), mirrorAlike, onlyLayers, skipped(),
-                    hiddenLayers, table, rules, densities, expansionLimit);
+                    hiddenLayers, table, rules, densities, expansionLimit, joins);
         } catch (IllegalArgumentException e) {
             throw new InputProblem("bad --join or --gap-limit: " + e.getMessage());
         }

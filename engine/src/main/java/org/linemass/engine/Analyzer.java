@@ -90,7 +90,7 @@ public final class Analyzer {
         watch.entering("expanding blocks and adding up layers");
         return analyze(drawing, settings, (world, tol, lookup, mirror) -> {
             watch.entering("joining and checking pieces");
-            PieceAnalysis pa = PieceAnalyzer.analyze(world, tol, lookup, mirror);
+            PieceAnalysis pa = PieceAnalyzer.analyze(world, tol, lookup, mirror, settings.layerJoins());
             watch.entering("grouping marks and writing totals");
             return pa;
         });

@@ -192,4 +192,65 @@ public record Tolerances(double joinM, double gapLimitM, double noiseM, double g
      * (dimensionless): far below anything they compare. Common practice, no source.
      */
     public static final double CHECK_LENGTH_RELATIVE = 1e-9;
+
+    // ---- bends, coils and schedule shapes (engine.bender, engine.shape; fixed, not user-set) ----
+
+    /**
+     * Bend angles within this of 90, 135 or 180 degrees count as those angles when a bar is given a
+     * shape code (degrees). Common practice, no source: drawn angles are exact to far better, and a
+     * shop's bender holds about half a degree.
+     */
+    public static final double SHAPE_ANGLE_DEG = 0.5;
+
+    /**
+     * Rotations of the bending plane within this of 0 or 180 degrees keep two bends in one plane for a
+     * shape code (degrees): rounding of a drawn plane is far below; any deliberate tilt far above.
+     */
+    public static final double SHAPE_PLANE_DEG = 1e-6;
+
+    /**
+     * Slack when an inside radius is compared with a radius table in whole millimetres (metres): half a
+     * millimetre, since BS 8666:2005 Table 2 prints whole millimetres (87 for 87.5 on 25 mm bars).
+     */
+    public static final double RADIUS_TABLE_SLACK_M = 5e-4;
+
+    /** A section diameter is a table bar size when within this of it (millimetres; rounding of mm to m). */
+    public static final double BAR_SIZE_MATCH_MM = 1e-6;
+
+    /**
+     * Legs a symmetric shape code takes as equal may differ by this before a note says so (metres): one
+     * millimetre, the resolution of a schedule.
+     */
+    public static final double SHAPE_LEG_MATCH_M = 1e-3;
+
+    /** A straight shorter than this is no straight at all in a shape (metres; rounding of zero-length feeds). */
+    public static final double SHAPE_NO_STRAIGHT_M = 1e-12;
+
+    /**
+     * Bends within this of a half turn have parallel legs and no corner point, and signed plane rotations
+     * within it of -180 degrees are written as +180 (radians, and degrees for the rotation): double
+     * rounding of an angle is about 1e-16, so 1e-9 only catches rounding.
+     */
+    public static final double BEND_HALF_TURN_SLACK = 1e-9;
+
+    /**
+     * Cross products of two unit tangents shorter than this give no bend axis (dimensionless): the bend is
+     * then a reversal whose plane is taken from the bend before it.
+     */
+    public static final double BEND_AXIS_MIN = 1e-12;
+
+    /**
+     * Parameter step, as a share of an element's parameter range, for a one-sided tangent at a spline
+     * knot (dimensionless): the tangent's direction then moves by about 1e-9 of the element's turning.
+     */
+    public static final double BEND_TANGENT_STEP = 1e-9;
+
+    /**
+     * Sine of the angle between two sampled tangents below which their binormal is noise, not a change
+     * of turning direction (dimensionless).
+     */
+    public static final double BEND_INFLECTION_NOISE = 1e-9;
+
+    /** A curved run winding at least 1 minus this many turns is a coil (turns; rounding of a full turn). */
+    public static final double COIL_TURN_SLACK = 1e-9;
 }

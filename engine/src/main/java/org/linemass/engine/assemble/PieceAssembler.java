@@ -139,7 +139,7 @@ public final class PieceAssembler {
                     c.mass() == null ? c.length().centroid() : c.mass().centroid(), c.length().inertia(),
                     c.mass() == null ? null : c.mass().inertia(), start, end, p.closed(), p.segments().size(),
                     markOf[k + 1], p.bends(), sources, c.length().errorBound(),
-                    PieceForms.of(p.segments(), p.closed(), c.section().map(Section::diameterM).orElse(null),
+                    PieceForms.ofSection(p.segments(), p.closed(), c.section().orElse(null),
                             c.length().mass(), tol.angleRad(), tol.joinM())));
         }
         Map<String, Moments> fm = new TreeMap<>();

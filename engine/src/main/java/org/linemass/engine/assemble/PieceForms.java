@@ -7,6 +7,9 @@ import org.linemass.engine.bender.Coil;
 import org.linemass.engine.bender.FormRun;
 import org.linemass.engine.bender.RunSplitter;
 import org.linemass.engine.result.PieceForm;
+import org.linemass.engine.section.Section;
+import org.linemass.engine.shape.BendLimit;
+import org.linemass.engine.shape.BendLimits;
 import org.linemass.engine.shape.ShapeClassifier;
 import org.linemass.geometry.Segment;
 
@@ -30,8 +33,25 @@ public final class PieceForms {
      */
     public static PieceForm of(List<Segment> segments, boolean closed, Double diameterM, double lengthM,
             double angleRad, double joinM) {
+        return of(segments, closed, diameterM, BendLimit.none("no section: no minimum bend radius known, bends not"
+                + " checked"), lengthM, angleRad, joinM);
+    }
+
+    /**
+     * As {@link #of(List, boolean, Double, double, double, double)} for a piece on {@code section} (null
+     * when it has none), whose diameter is the bar size and whose {@link BendLimits bend limit} the form
+     * carries.
+     */
+    public static PieceForm ofSection(List<Segment> segments, boolean closed, Section section, double lengthM,
+            double angleRad, double joinM) {
+        return of(segments, closed, section == null ? null : section.diameterM(), BendLimits.of(section), lengthM,
+                angleRad, joinM);
+    }
+
+    private static PieceForm of(List<Segment> segments, boolean closed, Double diameterM, BendLimit limit,
+            double lengthM, double angleRad, double joinM) {
         if (segments.isEmpty()) {
-            return PieceForm.NONE;
+            return new PieceForm(PieceForm.NONE.program(), List.of(), null, limit);
         }
         List<FormRun> runs = RunSplitter.split(segments, closed, angleRad, joinM);
         List<Coil> coils = new ArrayList<>();
@@ -41,6 +61,6 @@ public final class PieceForms {
             }
         }
         var program = BenderPrograms.of(runs);
-        return new PieceForm(program, coils, ShapeClassifier.classify(program, closed, diameterM, lengthM));
+        return new PieceForm(program, coils, ShapeClassifier.classify(program, closed, diameterM, lengthM), limit);
     }
 }

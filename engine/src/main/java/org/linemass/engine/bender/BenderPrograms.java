@@ -3,6 +3,7 @@ package org.linemass.engine.bender;
 import java.util.ArrayList;
 import java.util.List;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Builds the {@link BenderProgram} of a piece from its {@link FormRun}s. Feeds add up until the next
@@ -14,9 +15,6 @@ import org.linemass.geometry.Vec3;
  * reversal of 180 degrees or more, whose lines do not meet ahead of the bar.
  */
 public final class BenderPrograms {
-
-    /** Bends within this of 180 degrees have parallel legs: no corner point (radians). */
-    private static final double PARALLEL_RAD = 1e-9;
 
     private BenderPrograms() {
     }
@@ -76,14 +74,14 @@ public final class BenderPrograms {
     static double signedAngleDeg(Vec3 a, Vec3 b, Vec3 about) {
         double deg = Math.toDegrees(Math.atan2(a.cross(b).dot(about), a.dot(b)));
         // a half turn is +180, never -180, so the output does not depend on rounding
-        return deg <= -180 + 1e-9 ? 180 : deg;
+        return deg <= -180 + Tolerances.BEND_HALF_TURN_SLACK ? 180 : deg;
     }
 
     private static Vec3 corner(FormRun.Turn t) {
         if (t.sharp()) {
             return t.start();
         }
-        if (Math.PI - t.angleRad() <= PARALLEL_RAD || t.angleRad() > Math.PI) {
+        if (Math.PI - t.angleRad() <= Tolerances.BEND_HALF_TURN_SLACK || t.angleRad() > Math.PI) {
             return t.middle();
         }
         // closest points of the lines start + s tin and end + u tout

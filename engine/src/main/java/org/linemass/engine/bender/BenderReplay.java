@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Rebuilds the centre-line a {@link BenderProgram} makes, in closed form: straight feeds, and bends
@@ -44,7 +45,7 @@ public final class BenderReplay {
             double a = Math.toRadians(s.angleDeg());
             double r = s.radiusM();
             Vec3 n = b.cross(t);
-            if (a < Math.PI - 1e-9) {
+            if (a < Math.PI - Tolerances.BEND_HALF_TURN_SLACK) {
                 corners.add(p.plus(t.times(r * Math.tan(a / 2))));
             } else {
                 // legs parallel or crossing behind: the middle of the bend, as BenderPrograms gives it

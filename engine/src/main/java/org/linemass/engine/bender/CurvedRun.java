@@ -6,6 +6,7 @@ import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Measures one curved run (smoothly joined curved elements) as a bend, a coil or, when it hardly
@@ -14,7 +15,7 @@ import org.linemass.geometry.Vec3;
 final class CurvedRun {
 
     /** Sine of the angle between two samples' tangents below which their binormal is noise. */
-    private static final double INFLECTION_NOISE = 1e-9;
+    private static final double INFLECTION_NOISE = Tolerances.BEND_INFLECTION_NOISE;
 
     private CurvedRun() {
     }
@@ -136,7 +137,7 @@ final class CurvedRun {
         if (allArcs) {
             axis = ((CircularArc) first.segment()).normal().unit();
         } else {
-            axis = axisSum.norm() > 1e-12 ? axisSum.unit() : null;
+            axis = axisSum.norm() > Tolerances.BEND_AXIS_MIN ? axisSum.unit() : null;
         }
         boolean planar = axis != null;
         if (planar) {
@@ -149,7 +150,7 @@ final class CurvedRun {
         }
         if (ring || turning > Math.PI) {
             CoilFit.Fit fit = CoilFit.fit(pts, tans, planar ? axis : null);
-            if (fit != null && (ring || fit.turns() >= 1 - 1e-9)) {
+            if (fit != null && (ring || fit.turns() >= 1 - Tolerances.COIL_TURN_SLACK)) {
                 double turns = ring ? 1 : fit.turns();
                 double pitch = ring ? 0 : fit.pitchM();
                 return new FormRun.Wind(start, end, tin, tout, turns, pitch, fit.meanDiameterM(), fit.axis(), length,

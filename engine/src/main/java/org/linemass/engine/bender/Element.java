@@ -8,6 +8,7 @@ import org.linemass.geometry.Nurbs;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * One smooth stretch of a segment between its parameters {@code t0 < t1}: a whole straight, arc or
@@ -25,7 +26,7 @@ record Element(Segment segment, double t0, double t1, boolean straight) {
      * spline (which may be a corner) and where the derivative vanishes. Small enough that the tangent's
      * direction moves by about 1e-9 of the element's turning.
      */
-    private static final double STEP = 1e-9;
+    private static final double STEP = Tolerances.BEND_TANGENT_STEP;
 
     /** The elements of a segment in order of travel. */
     static List<Element> of(Segment s) {

@@ -7,6 +7,7 @@ import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Splits one oriented run of segments (a piece) into {@link FormRun}s. The segments become smooth
@@ -116,7 +117,7 @@ public final class RunSplitter {
         Vec3 tin = a.endTangent();
         Vec3 tout = b.startTangent();
         Vec3 c = tin.cross(tout);
-        Vec3 axis = c.norm() > 1e-12 ? c.unit() : null;
+        Vec3 axis = c.norm() > Tolerances.BEND_AXIS_MIN ? c.unit() : null;
         Vec3 at = a.end();
         List<Provenance> who = a.segment().source().equals(b.segment().source()) && a.segment() == b.segment()
                 ? List.of(a.segment().source()) : List.of(a.segment().source(), b.segment().source());

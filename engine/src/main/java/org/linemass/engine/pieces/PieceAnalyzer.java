@@ -2,7 +2,6 @@ package org.linemass.engine.pieces;
 
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
@@ -26,11 +25,14 @@ import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.engine.pieces.index.DerivedIndex;
 import org.linemass.engine.pieces.index.SegmentIndex;
 import org.linemass.engine.pieces.join.Chain;
+import org.linemass.engine.pieces.join.AcrossLayers;
+import org.linemass.engine.pieces.join.JoinClasses;
 import org.linemass.engine.pieces.join.JoinResult;
 import org.linemass.engine.pieces.join.Joiner;
 import org.linemass.engine.pieces.marks.Grouper;
 import org.linemass.engine.result.Bend;
 import org.linemass.engine.result.Finding;
+import org.linemass.engine.section.LayerJoin;
 import org.linemass.engine.section.Section;
 import org.linemass.geometry.Segment;
 import org.linemass.tolerance.Tolerances;
@@ -63,10 +65,21 @@ public final class PieceAnalyzer {
      */
     public static PieceAnalysis analyze(List<Segment> world, Tolerances tol, SectionLookup sections,
             boolean mirrorGrouping) {
+        return analyze(world, tol, sections, mirrorGrouping, List.of());
+    }
+
+    /**
+     * As {@link #analyze(List, Tolerances, SectionLookup, boolean)}, joining ends across the layers each
+     * of {@code joins} puts together ({@link JoinClasses}); a piece spanning layers is reported on its
+     * lead layer with a {@code joined_across_layers} finding (info) naming the layers it spans.
+     */
+    public static PieceAnalysis analyze(List<Segment> world, Tolerances tol, SectionLookup sections,
+            boolean mirrorGrouping, List<LayerJoin> joins) {
         Objects.requireNonNull(world, "world segments");
         Objects.requireNonNull(tol, "tolerances");
         Objects.requireNonNull(sections, "section lookup");
         SectionCache cache = new SectionCache(sections);
+        JoinClasses classes = new JoinClasses(joins);
         SegmentIndex index = new SegmentIndex(world, tol.joinM());
         // every layer: welds between layers (cross wires on a frame layer) count as contacts
         CandidatePairs pairs = CandidatePairs.of(index, world.size(), (i, j) -> true);
@@ -90,18 +103,15 @@ public final class PieceAnalyzer {
             if (f != null) {
                 findings.add(f);
                 if (len > tol.noiseM()) {
-                    pieces.add(piece(List.of(s), false, cache, tol, findings));
+                    pieces.add(piece(List.of(s), false, cache, tol, findings, classes));
                 }
             } else {
                 origin[joinable.size()] = keptOrigin[k];
                 joinable.add(s);
             }
         }
-        Map<String, Integer> layerIds = new HashMap<>();
-        int[] layerOf = new int[joinable.size()];
-        for (int i = 0; i < layerOf.length; i++) {
-            layerOf[i] = layerIds.computeIfAbsent(joinable.get(i).source().layer(), k -> layerIds.size());
-        }
+        // join classes: each layer its own unless a layer join puts several together
+        int[] layerOf = classes.classes(joinable);
         JoinResult joined = Joiner.join(joinable, layerOf, tol);
         findings.addAll(joined.findings());
         double[] chainLength = new double[joined.chains().size()];
@@ -110,7 +120,7 @@ public final class PieceAnalyzer {
             for (Segment s : chain.segments()) {
                 chainLength[c] += Curves.length(s);
             }
-            pieces.add(piece(chain.segments(), chain.closed(), cache, tol, findings));
+            pieces.add(piece(chain.segments(), chain.closed(), cache, tol, findings, classes));
         }
         boolean[] gapEnds = new boolean[joined.freeEnd().length];
         findings.addAll(GapCheck.check(joinable, layerOf, joined.freeEnd(), joined.endPoint(),
@@ -132,8 +142,13 @@ public final class PieceAnalyzer {
     }
 
     private static Piece piece(List<Segment> segments, boolean closed, SectionCache cache, Tolerances tol,
-            List<Finding> findings) {
-        String layer = segments.get(0).source().layer();
+            List<Finding> findings, JoinClasses classes) {
+        String layer = classes.leadLayer(segments, Curves::length);
+        List<String> spanned = JoinClasses.layers(segments);
+        if (spanned.size() > 1) {
+            findings.add(AcrossLayers.finding(segments, spanned, layer, classes.ruleOf(segments.get(0).source()
+                    .layer())));
+        }
         Optional<Section> section = cache.forLayer(layer);
         List<BendFinder.Located> located = BendFinder.located(segments, closed, section, tol);
         if (!located.isEmpty() && section.isPresent()) {

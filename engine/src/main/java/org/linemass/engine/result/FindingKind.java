@@ -10,6 +10,8 @@ public final class FindingKind {
     public static final String T_JUNCTION = "t_junction";
     public static final String CROSSING = "crossing";
     public static final String BRANCH = "branch";
+    /** A piece joined end to end across layers by a layer join (info: which layers, which one it is on). */
+    public static final String JOINED_ACROSS_LAYERS = "joined_across_layers";
     public static final String ZERO_LENGTH = "zero_length";
     public static final String TINY_SEGMENT = "tiny_segment";
     public static final String SELF_CROSSING = "self_crossing";

@@ -49,6 +49,34 @@ public final class AssignmentReader {
         }
     }
 
+    /**
+     * The layer joins of an assignment file: a row whose optional {@code joins} column is not empty
+     * ({@code GLOB+GLOB...}) makes the layers of its {@code layer} column join the layers it lists; a
+     * joined piece is then reported on the row's layer when it spans it (a {@link LayerJoin} whose lead
+     * layer is the row's layer pattern). A file without the column has none.
+     */
+    public static List<LayerJoin> readJoins(Path file) throws AnalysisException {
+        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+            CsvRows csv = CsvRows.read(in);
+            List<LayerJoin> out = new ArrayList<>();
+            if (!csv.has("joins")) {
+                return out;
+            }
+            for (CsvRows.Row r : csv.rows()) {
+                String joins = r.get("joins").orElse("").trim();
+                if (!joins.isEmpty()) {
+                    String layer = r.require("layer");
+                    out.add(LayerJoin.parse(layer + "+" + joins + "=" + layer, file + " line " + r.line()));
+                }
+            }
+            return out;
+        } catch (IllegalArgumentException e) {
+            throw new AnalysisException(file + ": " + e.getMessage());
+        } catch (IOException e) {
+            throw new AnalysisException("cannot read layer assignments " + file + ": " + e.getMessage());
+        }
+    }
+
     /** Parses one {@code LAYER=SECTION} argument. */
     public static LayerAssignment parseArgument(String argument) {
         int eq = argument.lastIndexOf('=');

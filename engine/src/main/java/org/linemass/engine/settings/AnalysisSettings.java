@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.linemass.engine.section.LayerAssignment;
+import org.linemass.engine.section.LayerJoin;
 import org.linemass.engine.section.SectionTable;
 import org.linemass.tolerance.Tolerances;
 
@@ -30,11 +31,13 @@ import org.linemass.tolerance.Tolerances;
  * @param assignments layer-to-section rules; the last matching rule wins
  * @param densityExpressions layer glob to a linear-density expression in x, y, z, s (kg/m); overrides the section's constant
  * @param maxExpandedSegments most world segments expanded for joining and checks; beyond it those stages are skipped and reports say so
+ * @param layerJoins layers whose pieces join one another end to end (empty: ends join on one layer only)
  */
 public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimitM, Optional<Double> groupM,
         double integrationRelative, boolean mirrorGrouping, List<String> includeLayers,
         List<String> excludeLayers, boolean includeHiddenLayers, SectionTable sections,
-        List<LayerAssignment> assignments, Map<String, String> densityExpressions, long maxExpandedSegments) {
+        List<LayerAssignment> assignments, Map<String, String> densityExpressions, long maxExpandedSegments,
+        List<LayerJoin> layerJoins) {
 
     public static final long DEFAULT_MAX_EXPANDED_SEGMENTS = 2_000_000L;
 
@@ -50,6 +53,16 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
         excludeLayers = List.copyOf(excludeLayers);
         assignments = List.copyOf(assignments);
         densityExpressions = Map.copyOf(densityExpressions);
+        layerJoins = List.copyOf(layerJoins);
+    }
+
+    /** The settings without layer joins (ends join on one layer only, as before joins existed). */
+    public AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimitM, Optional<Double> groupM,
+            double integrationRelative, boolean mirrorGrouping, List<String> includeLayers,
+            List<String> excludeLayers, boolean includeHiddenLayers, SectionTable sections,
+            List<LayerAssignment> assignments, Map<String, String> densityExpressions, long maxExpandedSegments) {
+        this(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers, excludeLayers,
+                includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments, List.of());
     }
 
     /** Defaults with the given section table and no assignments. */
@@ -62,7 +75,8 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
     /** The same settings without layer filters (every visible layer counts). */
     public AnalysisSettings unfiltered() {
         return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, List.of(),
-                List.of(), includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments);
+                List.of(), includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments,
+                layerJoins);
     }
 
     /**
@@ -89,6 +103,13 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
 
     public AnalysisSettings withAssignments(List<LayerAssignment> a) {
         return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers,
-                excludeLayers, includeHiddenLayers, sections, a, densityExpressions, maxExpandedSegments);
+                excludeLayers, includeHiddenLayers, sections, a, densityExpressions, maxExpandedSegments, layerJoins);
+    }
+
+    /** The same settings with {@code joins} as the layer joins. */
+    public AnalysisSettings withLayerJoins(List<LayerJoin> joins) {
+        return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers,
+                excludeLayers, includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments,
+                joins);
     }
 }

@@ -1,6 +1,7 @@
 package org.linemass.engine.shape;
 
 import java.util.OptionalDouble;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * BS 8666:2005 Table 2, minimum scheduling radius r (inside radius, mm) by nominal bar size d (mm):
@@ -21,7 +22,7 @@ public final class MinimumRadius {
     public static OptionalDouble forDiameterM(double diameterM) {
         for (int i = 0; i < SIZES.length; i++) {
             // sizes are whole millimetres; a section given in metres may carry rounding
-            if (Math.abs(diameterM * 1000 - SIZES[i]) < 1e-6) {
+            if (Math.abs(diameterM * 1000 - SIZES[i]) < Tolerances.BAR_SIZE_MATCH_MM) {
                 return OptionalDouble.of(RADII[i] / 1000.0);
             }
         }

@@ -2,6 +2,7 @@ package org.linemass.engine.shape;
 
 import java.util.List;
 import org.linemass.engine.bender.BenderStep;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * The BS 8666 shapes of {@link ShapeCode} 25, 33, 34, 36, 41, 44, 47, 51, 52 and 63, matched on a planar
@@ -65,7 +66,7 @@ final class MoreShapes {
             double a = l.leg(1);
             double width = 2 * (inside[v.bend(1)] + d);
             double c = l.leg(0);
-            if (Math.abs(l.leg(3) - c) > 0.001 || Math.abs(l.leg(2) - a) > 0.001) {
+            if (Math.abs(l.leg(3) - c) > Tolerances.SHAPE_LEG_MATCH_M || Math.abs(l.leg(2) - a) > Tolerances.SHAPE_LEG_MATCH_M) {
                 b.note("legs not symmetric: the standard takes both A legs as A and both end legs as C");
             }
             return b.dims(a, width, c, null, null, inside[0]).length(2 * a + 1.7 * width + 2 * c - 4 * d)

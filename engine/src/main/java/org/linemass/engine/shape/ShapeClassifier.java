@@ -6,6 +6,7 @@ import java.util.Locale;
 import java.util.OptionalDouble;
 import org.linemass.engine.bender.BenderProgram;
 import org.linemass.engine.bender.BenderStep;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Classifies a piece's bender data into a {@link ShapeCode} from its geometry alone: the number of
@@ -27,18 +28,22 @@ import org.linemass.engine.bender.BenderStep;
  * <p>Flags: an inside radius below Table 2 (tolerance half a millimetre: the table is in whole
  * millimetres and rounds 87.5 down to 87 for 25 mm bars), and a formula length differing from the exact
  * centre-line length by more than {@link #ROUNDING_M} (the standard rounds cut lengths up to the next
- * 25 mm: from memory, BS 8666:2005; not checked against the clause).
+ * 25 mm: from memory, BS 8666:2005; neither the team's reference sheet nor any page read lists the
+ * clause: unverified).
  */
 public final class ShapeClassifier {
 
-    /** Drawn angles within this of 90 or 180 degrees count as those angles (common practice, no source). */
-    public static final double ANGLE_DEG = 0.5;
-    /** Rotations within this of 0 or 180 degrees keep the bends in one plane (degrees). */
-    private static final double PLANE_DEG = 1e-6;
-    /** Cut-length rounding of BS 8666:2005, metres (from memory). */
+    /** Drawn angles within this of 90 or 180 degrees count as those angles ({@link Tolerances#SHAPE_ANGLE_DEG}). */
+    public static final double ANGLE_DEG = Tolerances.SHAPE_ANGLE_DEG;
+    /** Rotations within this of 0 or 180 degrees keep the bends in one plane ({@link Tolerances#SHAPE_PLANE_DEG}). */
+    private static final double PLANE_DEG = Tolerances.SHAPE_PLANE_DEG;
+    /**
+     * Formula and exact lengths further apart than this are noted, metres: the cut-length rounding of
+     * BS 8666:2005 as remembered (25 mm). Unverified: not in the team's reference sheet.
+     */
     public static final double ROUNDING_M = 0.025;
-    /** Table 2 radii are whole millimetres (metres). */
-    private static final double TABLE_SLACK_M = 0.0005;
+    /** Table 2 radii are whole millimetres ({@link Tolerances#RADIUS_TABLE_SLACK_M}). */
+    private static final double TABLE_SLACK_M = Tolerances.RADIUS_TABLE_SLACK_M;
 
     private ShapeClassifier() {
     }
@@ -85,12 +90,14 @@ public final class ShapeClassifier {
             return b.done(ShapeCode.OTHER);
         }
         if (steps.stream().anyMatch(s -> s.kind() == BenderStep.Kind.COIL)) {
-            if (n == 1 && feed[0] < d + 1e-12 && feed[1] < d + 1e-12) {
+            if (n == 1 && feed[0] < d + Tolerances.SHAPE_NO_STRAIGHT_M && feed[1] < d + Tolerances.SHAPE_NO_STRAIGHT_M) {
                 BenderStep c = steps.get(0);
                 double a = 2 * c.radiusM() + d;
                 double len = c.turns() * Math.PI * (a - d);
                 if (c.pitchM() > a / 5) {
-                    // for a pitch over A/5 the helix length (from memory, BS 8666:2005 shape 77 note)
+                    // for a pitch over A/5 the helix length: from memory of the BS 8666:2005 shape 77 note; a
+                    // public model of the 2020 edition applies the same rule; the printed note was not seen:
+                    // unverified
                     len = c.turns() * Math.hypot(Math.PI * (a - d), c.pitchM());
                     notes.add("pitch over A/5: helix length C sqrt((pi(A - d))^2 + B^2) (from memory)");
                 }
@@ -126,7 +133,7 @@ public final class ShapeClassifier {
         }
         if (n == 1) {
             BenderStep s = steps.get(0);
-            if (feed[0] <= 1e-12 && feed[1] <= 1e-12) {
+            if (feed[0] <= Tolerances.SHAPE_NO_STRAIGHT_M && feed[1] <= Tolerances.SHAPE_NO_STRAIGHT_M) {
                 return b.dims(exactLengthM, null, null, null, null, inside[0]).length(exactLengthM)
                         .done(ShapeCode.S67);
             }

@@ -8,6 +8,7 @@ import org.linemass.engine.bender.BenderProgram;
 import org.linemass.engine.bender.BenderStep;
 import org.linemass.engine.result.DrawingResult;
 import org.linemass.engine.result.PieceResult;
+import org.linemass.engine.shape.BendLimit;
 import org.linemass.geometry.Vec3;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
@@ -19,7 +20,9 @@ import org.linemass.reports.UnitSystem;
  * feed, rotation of the bending plane about the feed direction, right-handed, degrees; bend angle;
  * centre-line radius; arc length; for a coil turns and pitch; whether the step reproduces the drawing
  * exactly), an {@code end} row with the last feed, then {@code corner} rows: the corner points of the
- * straights (start, the intersection of the straight lines at each bend, end). Lengths in mm to 0.001,
+ * straights (start, the intersection of the straight lines at each bend, end), and a {@code limit} row:
+ * the section's minimum inside bend radius in the radius column (empty when none is known) with its
+ * basis and the number of bends below it in the note column. Lengths in mm to 0.001,
  * points in world mm, angles to 0.0001 degree. Geometry only: springback is the machine's business.
  */
 public final class BenderCsvWriter {
@@ -31,7 +34,7 @@ public final class BenderCsvWriter {
         boolean multi = reports.size() > 1;
         CsvTable table = CsvTable.withDrawingColumn(out, multi, List.of("piece", "mark", "row", "feed [mm]",
                 "rotation [deg]", "bend angle [deg]", "radius [mm]", "arc length [mm]", "turns", "pitch [mm]",
-                "x [mm]", "y [mm]", "z [mm]", "exact"));
+                "x [mm]", "y [mm]", "z [mm]", "exact", "note"));
         for (Report report : reports) {
             DrawingResult r = report.result();
             for (PieceResult p : r.pieces()) {
@@ -54,6 +57,13 @@ public final class BenderCsvWriter {
                 for (Vec3 c : prog.cornersM()) {
                     table.row(row(multi, r, id, mark, "corner", "", "", "", "", "", "", "", c, ""));
                 }
+                BendLimit limit = p.form().limit();
+                List<String> last = row(multi, r, id, mark, "limit", "", "", "", limit.known()
+                        ? len(limit.insideRadiusM()) : "", "", "", "", null, "");
+                long below = p.form().bendsBelowLimit();
+                last.set(last.size() - 1, CsvCell.text(limit.known() ? "minimum inside radius (" + limit.basis() + "); "
+                        + below + (below == 1 ? " bend" : " bends") + " below it" : "none known: " + limit.basis()));
+                table.row(last);
             }
         }
     }
@@ -74,12 +84,13 @@ public final class BenderCsvWriter {
             row.add(len(point.z()));
         }
         row.add(exact);
+        row.add("");
         return row;
     }
 
     /** The row with the unit vector's components (to 1e-9) in the x, y, z columns. */
     private static List<String> unit(List<String> row, Vec3 v) {
-        int x = row.size() - 4;
+        int x = row.size() - 5;
         row.set(x, UnitSystem.fixed(v.x(), 9));
         row.set(x + 1, UnitSystem.fixed(v.y(), 9));
         row.set(x + 2, UnitSystem.fixed(v.z(), 9));

@@ -4,29 +4,22 @@ import java.io.IOException;
 import java.io.Writer;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
-import java.util.TreeMap;
-import org.linemass.engine.result.DrawingResult;
-import org.linemass.engine.result.MarkResult;
-import org.linemass.engine.result.PieceResult;
-import org.linemass.engine.shape.ShapeResult;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
+import org.linemass.reports.schedule.ScheduleLine;
+import org.linemass.reports.schedule.ScheduleLines;
+import org.linemass.reports.schedule.SizeTotal;
 
 /**
- * The bar bending schedule: one row per mark, in the column order of a BS 8666 schedule (member, bar
- * mark, type and size, number, length of each bar, shape code, A, B, C, D, E, R), always in
- * millimetres as the standard schedules them, then the exact centre-line length, the formula length
- * minus the exact one and the notes; then one TOTAL row per bar size with its mass. The length of
- * each bar is the standard's formula length (the exact length for shapes 98 and 99) rounded up to
- * the next 25 mm (BS 8666:2005 cut-length rounding, from memory: check the clause); dimensions are to
- * the millimetre. Member is the layer; type and size is the section. With several drawings the first
- * column names the drawing.
+ * The bar bending schedule as CSV: one row per mark ({@link ScheduleLines}), in the column order of a
+ * BS 8666 schedule as remembered (member, bar mark, type and size, number, length of each bar, shape
+ * code, A, B, C, D, E, R; the order was not checked against the standard's schedule form:
+ * unverified), always in millimetres as the standard schedules them, then the exact centre-line
+ * length, the formula length minus the exact one and the notes; then one TOTAL row per bar size with
+ * its mass. Dimensions are to the millimetre. With several drawings the first column names the
+ * drawing.
  */
 public final class ScheduleCsvWriter {
-
-    /** Cut-length rounding step, mm (from memory, BS 8666:2005). */
-    static final double STEP_MM = 25;
 
     private ScheduleCsvWriter() {
     }
@@ -36,63 +29,40 @@ public final class ScheduleCsvWriter {
         CsvTable table = CsvTable.withDrawingColumn(out, multi, List.of("member", "bar mark", "type and size",
                 "number", "length of each bar [mm]", "shape code", "A [mm]", "B [mm]", "C [mm]", "D [mm]", "E [mm]",
                 "R [mm]", "exact centre-line length [mm]", "formula minus exact [mm]", "notes"));
-        Map<String, Double> massBySize = new TreeMap<>();
-        Map<String, Boolean> massKnown = new TreeMap<>();
         for (Report report : reports) {
-            DrawingResult r = report.result();
-            for (MarkResult m : r.groups()) {
-                int id = m.pieceIds().get(0);
-                PieceResult p = id >= 1 && id <= r.pieces().size() && r.pieces().get(id - 1).id() == id
-                        ? r.pieces().get(id - 1) : r.pieces().stream().filter(q -> q.id() == id).findFirst().orElseThrow();
-                ShapeResult s = p.form().shape();
+            for (ScheduleLine l : ScheduleLines.of(report)) {
                 List<String> row = new ArrayList<>();
                 if (multi) {
-                    row.add(CsvCell.text(r.drawing().file()));
+                    row.add(CsvCell.text(l.drawing()));
                 }
-                row.add(CsvCell.text(m.layer()));
-                row.add(CsvCell.text(m.mark()));
-                row.add(CsvCell.text(m.section()));
-                row.add(Integer.toString(m.quantity()));
-                if (s == null) {
-                    row.add(mm(roundUp(p.lengthM())));
-                    row.addAll(List.of("", "", "", "", "", "", "", mm(p.lengthM()), "", "no shape worked out"));
-                } else {
-                    double cut = s.formulaLengthM() != null ? s.formulaLengthM() : s.exactLengthM();
-                    row.add(mm(roundUp(cut)));
-                    row.add(s.code().code());
-                    row.add(mm(s.aM()));
-                    row.add(mm(s.bM()));
-                    row.add(s.code() == org.linemass.engine.shape.ShapeCode.S77 ? turns(s.cM()) : mm(s.cM()));
-                    row.add(mm(s.dM()));
-                    row.add(mm(s.eM()));
-                    row.add(mm(s.rM()));
-                    row.add(mm(s.exactLengthM()));
-                    row.add(s.formulaLengthM() == null ? "" : mm(s.formulaLengthM() - s.exactLengthM()));
-                    row.add(CsvCell.text(String.join("; ", s.notes())));
-                }
+                row.add(CsvCell.text(l.member()));
+                row.add(CsvCell.text(l.mark()));
+                row.add(CsvCell.text(l.size()));
+                row.add(Integer.toString(l.number()));
+                row.add(mm(l.cutLengthM()));
+                row.add(l.shapeCode() == null ? "" : l.shapeCode());
+                row.add(mm(l.a()));
+                row.add(mm(l.b()));
+                row.add(l.cTurns() ? turns(l.c()) : mm(l.c()));
+                row.add(mm(l.d()));
+                row.add(mm(l.e()));
+                row.add(mm(l.r()));
+                row.add(mm(l.exactLengthM()));
+                row.add(mm(l.formulaMinusExactM()));
+                row.add(CsvCell.text(String.join("; ", l.notes())));
                 table.row(row);
-                String size = m.section() == null ? "" : m.section();
-                massBySize.merge(size, m.massTotalKg() == null ? 0 : m.massTotalKg(), Double::sum);
-                massKnown.merge(size, m.massTotalKg() != null, Boolean::logicalAnd);
             }
         }
-        for (Map.Entry<String, Double> e : massBySize.entrySet()) {
+        for (SizeTotal t : ScheduleLines.totals(reports)) {
             List<String> row = new ArrayList<>();
             if (multi) {
                 row.add("");
             }
-            boolean known = massKnown.get(e.getKey());
-            row.addAll(List.of("TOTAL", "", CsvCell.text(e.getKey()), "", "", "", "", "", "", "", "", "", "", "",
-                    CsvCell.text(known ? "mass " + UnitSystem.fixed(e.getValue(), 3) + " kg"
+            row.addAll(List.of("TOTAL", "", CsvCell.text(t.size()), "", "", "", "", "", "", "", "", "", "", "",
+                    CsvCell.text(t.massKg() != null ? "mass " + UnitSystem.fixed(t.massKg(), 3) + " kg"
                             : "mass unknown: no section")));
             table.row(row);
         }
-    }
-
-    private static double roundUp(double m) {
-        double mm = m * 1000;
-        // a length already on the step (to rounding) stays there
-        return Math.ceil(mm / STEP_MM - 1e-9) * STEP_MM / 1000;
     }
 
     private static String mm(Double m) {

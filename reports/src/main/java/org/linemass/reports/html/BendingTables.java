@@ -89,6 +89,7 @@ final class BendingTables {
             HtmlTables.cell(s, "last feed", false);
             HtmlTables.cell(s, UnitSystem.fixed(prog.lastFeedM() * 1000, 1), true);
             s.append("<td colspan=\"6\"></td></tr>\n</table>\n");
+            s.append("<p>").append(Html.escape(BendLimitText.of(p.form()))).append("</p>\n");
             List<Coil> coils = p.form().coils();
             for (Coil c : coils) {
                 s.append("<p>").append(c.closed() ? "Ring" : "Coil").append(": ").append(UnitSystem.fixed(c.turns(), 2))

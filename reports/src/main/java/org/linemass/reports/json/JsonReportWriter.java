@@ -145,6 +145,7 @@ public final class JsonReportWriter {
         }
         g.writeEndArray();
         parts(g, parts);
+        ScheduleJson.write(g, r);
         g.writeBooleanField("complete", r.complete());
         strings(g, "incomplete_reasons", r.incompleteReasons());
         g.writeStringField("caution", Caution.TEXT);

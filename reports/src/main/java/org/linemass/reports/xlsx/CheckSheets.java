@@ -7,7 +7,7 @@ import org.linemass.reports.UnitSystem;
 
 /**
  * The sheets {@code check --xlsx} writes, in tab order: about (drawings, units, completeness and
- * the caution), bill of materials, pieces, findings and layers. With several drawings each table
+ * the caution), bill of materials, pieces, findings, layers and the bending schedule. With several drawings each table
  * starts with a {@code drawing} column, as the combined CSV files do. Callers may append further
  * sheets (cutting plan, bending schedule) to the returned list before writing.
  */
@@ -27,6 +27,7 @@ public final class CheckSheets {
         sheets.add(new PiecesSheet(reports, units));
         sheets.add(new FindingsSheet(reports, units));
         sheets.add(new LayersSheet(reports, units));
+        sheets.add(new ScheduleSheet(reports));
         return sheets;
     }
 

@@ -87,7 +87,7 @@ class JsonReportWriterTest {
     void write_keysInContractOrder() throws IOException {
         JsonNode root = MAPPER.readTree(json(List.of(Report.of(Fixtures.flatFrame("a.dxf")))));
         assertEquals(List.of("drawing", "entities", "layers", "pieces", "groups", "findings", "totals", "sections",
-                "complete", "incomplete_reasons", "caution"), names(root));
+                "schedule", "complete", "incomplete_reasons", "caution"), names(root));
         assertEquals(List.of("name", "length_m", "drawn_length_m", "length_centroid_m", "length_inertia_m3", "section",
                 "mass_kg", "centroid_m", "inertia_kg_m2", "pieces", "error_bound_m", "principal_moments_kg_m2", "principal_axes",
                 "radii_of_gyration_m"), names(root.get("layers").get(0)));
