@@ -91,6 +91,10 @@ final class CheckRun {
             throw new InputProblem("--markup-dxf " + outputs.markupDxf + " names one file, but " + files.size()
                     + " drawings are checked: give a folder for their marked-up copies");
         }
+        if (plan.marks.file() != null && files.size() != 1) {
+            throw new InputProblem("--marks-from gives the marks of an earlier revision to one drawing, but "
+                    + files.size() + " are checked");
+        }
         if (jobs < 1) {
             throw new InputProblem("--jobs must be 1 or more, got " + jobs);
         }
@@ -137,8 +141,9 @@ final class CheckRun {
         List<Path> analysed = new ArrayList<>();
         for (DrawingBatch.Done d : done) {
             if (d.report() != null) {
-                outcomes.add(DrawingOutcome.of(d.report(), d.nanos()));
-                reports.add(d.report());
+                Report rep = plan.marks.apply(ctx.pipeline(), d.report(), io, settings);
+                outcomes.add(DrawingOutcome.of(rep, d.nanos()));
+                reports.add(rep);
                 analysed.add(d.file());
             } else {
                 outcomes.add(DrawingOutcome.failed(d.file().toString(), Cli.oneLine(d.error().getMessage()), d.nanos()));

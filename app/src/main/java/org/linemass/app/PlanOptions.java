@@ -23,6 +23,9 @@ final class PlanOptions {
     @Mixin
     CostOptions costs = new CostOptions();
 
+    @Mixin
+    MarksFromOption marks = new MarksFromOption();
+
     @Option(names = "--stock-table", paramLabel = "CSV",
             description = "Stock per section: section,stock_lengths_mm,stock_counts,kerf_mm,min_offcut_mm,coil_kg "
                     + "(the same columns may also be in the section table).")
@@ -61,6 +64,9 @@ final class PlanOptions {
         }
         if (costs.priceTable != null) {
             inputs.add(costs.priceTable, "price table");
+        }
+        if (marks.file() != null) {
+            inputs.add(marks.file(), "earlier revision");
         }
         return inputs;
     }
