@@ -3,6 +3,7 @@ package org.linemass.engine.shape;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import org.linemass.engine.bender.BenderProgram;
 import org.linemass.engine.bender.BenderStep;
@@ -62,14 +63,20 @@ public final class ShapeClassifier {
             notes.add("bar size unknown: dimensions are centre-line, no radius check");
         }
         OptionalDouble table = diameterM == null ? OptionalDouble.empty() : MinimumRadius.forDiameterM(d);
-        if (diameterM != null && table.isEmpty()) {
+        Optional<AciRadius.Bar> us = diameterM != null && table.isEmpty() ? AciRadius.forDiameterM(d) : Optional.empty();
+        if (us.isPresent()) {
+            notes.add(usNote(us.get()));
+        } else if (diameterM != null && table.isEmpty()) {
             notes.add("not a BS 8666 Table 2 bar size: no minimum radius");
         }
+        // the piece's role (hook or stirrup) is not known: the smaller of the two ACI minimums is checked
+        double usMin = us.map(u -> u.stirrupRadiusM() != null ? u.stirrupRadiusM() : u.hookRadiusM()).orElse(0.0);
         List<BenderStep> steps = program.steps();
         int n = steps.size();
         double[] feed = new double[n + 1];
         double[] inside = new double[n];
         boolean below = false;
+        boolean belowUs = false;
         for (int i = 0; i < n; i++) {
             feed[i] = steps.get(i).feedM();
             inside[i] = Math.max(0, steps.get(i).radiusM() - d / 2);
@@ -77,14 +84,22 @@ public final class ShapeClassifier {
                     && inside[i] < table.getAsDouble() - TABLE_SLACK_M) {
                 below = true;
             }
+            if (us.isPresent() && steps.get(i).kind() == BenderStep.Kind.BEND && inside[i] < usMin - TABLE_SLACK_M) {
+                belowUs = true;
+            }
         }
         feed[n] = program.lastFeedM();
         if (below) {
             notes.add(String.format(Locale.ROOT, "inside radius below the BS 8666 Table 2 minimum of %.0f mm",
                     table.getAsDouble() * 1000));
         }
+        if (belowUs) {
+            notes.add(String.format(Locale.ROOT, "inside radius below the ACI 318-19 minimum of %.1f mm for %s",
+                    usMin * 1000, us.get().stirrupRadiusM() != null ? "stirrups and ties (Table 25.3.2)"
+                            : "standard hooks (Table 25.3.1)"));
+        }
         double r = table.isPresent() ? table.getAsDouble() : n > 0 ? inside[0] : 0;
-        ShapeResultBuilder b = new ShapeResultBuilder(exactLengthM, below, notes, ROUNDING_M);
+        ShapeResultBuilder b = new ShapeResultBuilder(exactLengthM, below || belowUs, notes, ROUNDING_M);
         if (closed) {
             notes.add("closed loop with no lap or hooks: not a standard shape");
             return b.done(ShapeCode.OTHER);
@@ -187,6 +202,16 @@ public final class ShapeClassifier {
         }
         notes.add(n + " bends in a pattern not classified here");
         return b.done(ShapeCode.OTHER);
+    }
+
+    /** The schedule note of a US bar: the two ACI 318-19 minimum inside radii, with their tables. */
+    private static String usNote(AciRadius.Bar u) {
+        String hooks = String.format(Locale.ROOT, "%.1f mm for standard hooks (Table 25.3.1)", u.hookRadiusM() * 1000);
+        String stirrups = u.stirrupRadiusM() == null ? "" : String.format(Locale.ROOT,
+                ", %.1f mm for stirrups and ties (Table 25.3.2%s)", u.stirrupRadiusM() * 1000,
+                u.stirrupFromMemory() ? ", from memory" : "");
+        return "US bar " + u.number() + ", not a BS 8666 Table 2 size: ACI 318-19 minimum inside radius " + hooks
+                + stirrups + "; shape codes are still BS 8666's (ACI 315 bar types not covered)";
     }
 
     private static boolean square(BenderStep s) {
