@@ -66,6 +66,40 @@ class BendingScheduleTest {
         assertEquals(2, main);
     }
 
+    /**
+     * v07 with its stirrup and hook layers joined: the stirrups of the plain, rotated, scaled and
+     * mirrored cage bays (2 + 7 marks' worth in the drawing's STIRRUP layer, the corpus manifest's
+     * contents) open where their 135 degree hooks leave, and schedule as shape 52 (a link with two 135
+     * degree hooks); without the option no stirrup is 52.
+     */
+    @Test
+    void v07JoinedHooks_stirrupsBecomeShape52(@TempDir Path tmp) throws Exception {
+        Path apart = tmp.resolve("apart.csv");
+        Path joined = tmp.resolve("joined.csv");
+        String v07 = drawing("v07_rebar_cage_blocks_r2000_mm.dxf").toString();
+        AppFixtures.Run run = AppFixtures.run(new EnginePipeline(), "check", "-q", v07, "-a", "REBAR_*_D8=RB8",
+                "--schedule-csv=" + apart);
+        assertTrue(run.code() == 0 || run.code() == 1, run.err());
+        run = AppFixtures.run(new EnginePipeline(), "check", "-q", v07, "-a", "REBAR_*_D8=RB8",
+                "--join-layers", "REBAR_STIRRUP_D8+REBAR_HOOK_D8=REBAR_STIRRUP_D8", "--schedule-csv=" + joined);
+        assertTrue(run.code() == 0 || run.code() == 1, run.err());
+        int before = 0;
+        for (String[] r : csv(apart)) {
+            if (r[0].equals("REBAR_STIRRUP_D8") && r[5].equals("52")) {
+                before++;
+            }
+        }
+        assertEquals(0, before);
+        int bars = 0;
+        for (String[] r : csv(joined)) {
+            if (r[0].equals("REBAR_STIRRUP_D8") && r[5].equals("52")) {
+                bars += Integer.parseInt(r[3]);
+            }
+        }
+        // the bays under a non-uniform scale have hooks no longer at 135 degrees: they stay 99
+        assertEquals(9, bars, "stirrups scheduled as shape 52");
+    }
+
     @Test
     void benderCsv_rebuildsEveryExactPiece(@TempDir Path tmp) throws Exception {
         for (String name : List.of("v03_tubular_handrail_lwpoly_r2018_mm.dxf", "v07_rebar_cage_blocks_r2000_mm.dxf")) {

@@ -71,6 +71,55 @@ class JoinAcrossLayersTest {
         assertEquals("HOOK", pa.pieces().get(0).layer());
     }
 
+    /**
+     * A closed stirrup 300 x 400 on layer S with corner arcs of radius 25 mm, and two 60 mm hooks on
+     * layer H leaving the two ends of the top-left corner arc at 135 degrees to the sides they continue
+     * (45 degrees to the arc). Joined, each hook pairs with the side it turns 135 degrees from, so the
+     * stirrup opens into one bar (hooks, four sides, three corners) and the top-left arc is left on its
+     * own; without the join the loop stays closed and the hooks are two pieces.
+     */
+    @Test
+    void analyze_hooksAtAClosedLoop_openTheLoopWhenJoined() {
+        double r = 0.025;
+        double s = Math.sqrt(0.5);
+        Provenance ps = Provenance.of("bar.dxf", "S", 1, "1", "LWPOLYLINE");
+        List<Segment> segs = new java.util.ArrayList<>(List.of(
+                new Straight(new Vec3(0.025, 0, 0), new Vec3(0.275, 0, 0), ps),
+                org.linemass.geometry.CircularArc.of(new Vec3(0.275, 0.025, 0), r, Vec3.X, Vec3.Y, 1.5 * Math.PI,
+                        2 * Math.PI, ps),
+                new Straight(new Vec3(0.3, 0.025, 0), new Vec3(0.3, 0.375, 0), ps),
+                org.linemass.geometry.CircularArc.of(new Vec3(0.275, 0.375, 0), r, Vec3.X, Vec3.Y, 0, Math.PI / 2, ps),
+                new Straight(new Vec3(0.275, 0.4, 0), new Vec3(0.025, 0.4, 0), ps),
+                org.linemass.geometry.CircularArc.of(new Vec3(0.025, 0.375, 0), r, Vec3.X, Vec3.Y, Math.PI / 2, Math.PI,
+                        ps),
+                new Straight(new Vec3(0, 0.375, 0), new Vec3(0, 0.025, 0), ps),
+                org.linemass.geometry.CircularArc.of(new Vec3(0.025, 0.025, 0), r, Vec3.X, Vec3.Y, Math.PI,
+                        1.5 * Math.PI, ps)));
+        Vec3 p1 = new Vec3(0, 0.375, 0);
+        Vec3 p2 = new Vec3(0.025, 0.4, 0);
+        Vec3 in = new Vec3(s, -s, 0).times(0.06);
+        segs.add(line("H", 2, p1, p1.plus(in)));
+        segs.add(line("H", 3, p2, p2.plus(in)));
+        Tolerances tol = Tolerances.defaultsFor(1.0);
+        PieceAnalysis apart = PieceAnalyzer.analyze(segs, tol, layer -> Optional.empty(), false, List.of());
+        assertEquals(3, apart.pieces().size());
+        assertEquals(1, apart.pieces().stream().filter(Piece::closed).count());
+        PieceAnalysis joined = PieceAnalyzer.analyze(segs, tol, layer -> Optional.empty(), false,
+                List.of(LayerJoin.parse("S+H", "test")));
+        assertEquals(2, joined.pieces().size());
+        double arc = Math.PI / 2 * r;
+        Piece bar = joined.pieces().stream().filter(p -> p.segments().size() > 1).findFirst().orElseThrow();
+        assertEquals("S", bar.layer());
+        // hooks 2 x 60, sides 250 + 350 + 250 + 350, three corner arcs
+        assertEquals(0.12 + 1.2 + 3 * arc, arcLength(bar), 1e-12);
+        Piece corner = joined.pieces().stream().filter(p -> p.segments().size() == 1).findFirst().orElseThrow();
+        assertEquals(arc, arcLength(corner), 1e-12);
+    }
+
+    private static double arcLength(Piece p) {
+        return p.segments().stream().mapToDouble(org.linemass.engine.pieces.geom.Curves::length).sum();
+    }
+
     @Test
     void parse_emptyPattern_isRefused() {
         assertThrows(IllegalArgumentException.class, () -> LayerJoin.parse("BAR++HOOK", "test"));

@@ -9,6 +9,7 @@ import org.apache.commons.math3.linear.SingularValueDecomposition;
 import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Decides which ends continue into which at every node. Two ends at a node are always paired (a
@@ -19,7 +20,9 @@ import org.linemass.geometry.Vec3;
  * less than {@link #MAX_BRANCH_TURN_DEG} are joined: a pair that turns more sharply is not a run
  * going through the node, and those ends start or stop separate pieces there (our own
  * convention, no source). Ties are broken by the far ends' coordinates so the result does not
- * depend on input order.
+ * depend on input order. Only where a layer join brings several layers to one node, the end that is
+ * alone of its layer there is paired first, with the other layer's end it turns into most sharply
+ * short of folding back (see {@code acrossLayers}; our own convention, no source).
  *
  * <p>Work per node is bounded: up to {@link #EXACT_LIMIT} ends every pair is a candidate; above
  * it the ends are sorted by the angle of their line in the node's best-fit plane of directions
@@ -84,10 +87,7 @@ final class EndPairing {
             into[i] = atEnd ? Curves.endTangent(s) : Curves.startTangent(s).negate();
             far[i] = nodes.point[e ^ 1];
         }
-        int[] open = new int[size];
-        for (int i = 0; i < size; i++) {
-            open[i] = i;
-        }
+        int[] open = acrossLayers(segments, nodes, f, size, into, far, partner);
         for (int pass = 0; pass < MAX_PASSES && open.length > 1; pass++) {
             int paired = pairAmong(open, nodes, f, into, far, partner);
             if (paired == 0) {
@@ -102,6 +102,67 @@ final class EndPairing {
             }
             open = left;
         }
+    }
+
+    /**
+     * Where a layer join brings ends of several layers to one node: each end that is the only one of
+     * its layer there (a hook meeting a bar or a closed loop) is paired first, with the end of another
+     * layer it turns most sharply into, short of folding back (a hook is a bend of the bar it leaves,
+     * so a 135 degree hook at a loop's corner joins the side, not the corner arc, which is left as a
+     * piece of its own). Lone ends are taken in order of their far ends. Returns the positions left
+     * for the greedy rounds; all of them when the node holds one layer (always, without layer joins).
+     */
+    private static int[] acrossLayers(List<Segment> segments, EndNodes nodes, int f, int size, Vec3[] into, Vec3[] far,
+            int[] partner) {
+        String[] layer = new String[size];
+        java.util.Map<String, Integer> count = new java.util.HashMap<>();
+        for (int i = 0; i < size; i++) {
+            layer[i] = segments.get(nodes.ends[f + i] >> 1).source().layer();
+            count.merge(layer[i], 1, Integer::sum);
+        }
+        List<Integer> lone = new ArrayList<>();
+        if (count.size() > 1) {
+            for (int i = 0; i < size; i++) {
+                if (count.get(layer[i]) == 1) {
+                    lone.add(i);
+                }
+            }
+            lone.sort(Comparator.comparing(i -> far[i], Curves::compare));
+        }
+        for (int i : lone) {
+            int a = nodes.ends[f + i];
+            if (partner[a] >= 0) {
+                continue;
+            }
+            int best = -1;
+            double bestTurn = -1;
+            for (int j = 0; j < size; j++) {
+                int b = nodes.ends[f + j];
+                if (j == i || partner[b] >= 0 || layer[j].equals(layer[i])) {
+                    continue;
+                }
+                double turn = Math.PI - Curves.angleBetween(into[i], into[j]);
+                boolean better = turn > bestTurn || turn == bestTurn && best >= 0
+                        && Curves.compare(far[j], far[best]) < 0;
+                if (turn < Math.PI - Tolerances.BEND_HALF_TURN_SLACK && better) {
+                    best = j;
+                    bestTurn = turn;
+                }
+            }
+            if (best >= 0) {
+                int b = nodes.ends[f + best];
+                partner[a] = b;
+                partner[b] = a;
+            }
+        }
+        int[] open = new int[size];
+        int n = 0;
+        for (int i = 0; i < size; i++) {
+            if (partner[nodes.ends[f + i]] < 0) {
+                open[n++] = i;
+            }
+        }
+        return java.util.Arrays.copyOf(open, n);
     }
 
     /**
