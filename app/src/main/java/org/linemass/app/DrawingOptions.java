@@ -12,6 +12,7 @@ import org.linemass.engine.section.AssignmentReader;
 import org.linemass.engine.section.LayerAssignment;
 import org.linemass.engine.section.LayerJoin;
 import org.linemass.engine.section.SectionTable;
+import org.linemass.engine.shape.BendStandard;
 import org.linemass.importer.ImportOptions;
 import org.linemass.reports.dxf.DxfMarkupWriter;
 import picocli.CommandLine.Option;
@@ -72,6 +73,12 @@ public final class DrawingOptions {
                     + "hooks drawn on two layers); a joined piece is reported on LAYER, or else on the layer with the "
                     + "longest run, and takes its section. Repeatable. Default: ends join on one layer only.")
     List<String> joinLayers = new ArrayList<>();
+
+    @Option(names = "--bend-standard", paramLabel = "STANDARD",
+            description = "Minimum bend radii the bending schedule checks bars against: auto (default; BS 8666:2005 "
+                    + "Table 2 for its sizes, ACI 318-19 for ASTM A615 sizes), bs8666 or aci318. Shape codes stay "
+                    + "BS 8666's.")
+    String bendStandard = "auto";
 
     @Option(names = "--density", paramLabel = "LAYER=EXPR",
             description = "Layers matching LAYER (a glob) have the linear density EXPR in kg/m instead of their "
@@ -176,11 +183,17 @@ public final class DrawingOptions {
                 throw new InputProblem("bad --join-layers: " + e.getMessage());
             }
         }
+        BendStandard standard;
+        try {
+            standard = BendStandard.parse(bendStandard);
+        } catch (IllegalArgumentException e) {
+            throw new InputProblem("bad --bend-standard: " + e.getMessage());
+        }
         try {
             // the settings check the tolerances themselves (the gap limit covers the join tolerance)
             return new AnalysisSettings(Optional.ofNullable(joinM), Optional.ofNullable(gapLimitM), Optional.empty(),
                     AnalysisSettings.defaults(table).integrationRelative(), mirrorAlike, onlyLayers, skipped(),
-                    hiddenLayers, table, rules, densities, expansionLimit, joins);
+                    hiddenLayers, table, rules, densities, expansionLimit, joins, standard);
         } catch (IllegalArgumentException e) {
             throw new InputProblem("bad --join or --gap-limit: " + e.getMessage());
         }

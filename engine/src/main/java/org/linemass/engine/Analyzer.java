@@ -126,7 +126,7 @@ public final class Analyzer {
                         tol.integrationRelative());
                 PieceAnalysis pa = stage.analyze(world.get(), tol, lookup, settings.mirrorGrouping());
                 removed = plus(removedMoments(pa.removed(), tol), coincident.removedByLayer());
-                pieces = PieceAssembler.assemble(pa, plan, tol);
+                pieces = PieceAssembler.assemble(pa, plan, tol, settings.bendStandard());
                 stageFindings = new ArrayList<>(coincident.findings());
                 stageFindings.addAll(pa.findings());
                 Map<Integer, List<Segment>> ordered = new TreeMap<>();

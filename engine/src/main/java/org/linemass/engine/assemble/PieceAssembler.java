@@ -21,6 +21,7 @@ import org.linemass.engine.section.Section;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Vec3;
 import org.linemass.tolerance.Tolerances;
+import org.linemass.engine.shape.BendStandard;
 
 /**
  * Turns the piece stage's output into piece results and marks. Per piece: length moments (every
@@ -64,6 +65,12 @@ public final class PieceAssembler {
     }
 
     public static Output assemble(PieceAnalysis analysis, MaterialPlan plan, Tolerances tol)
+            throws AnalysisException {
+        return assemble(analysis, plan, tol, BendStandard.AUTO);
+    }
+
+    /** As {@link #assemble(PieceAnalysis, MaterialPlan, Tolerances)}, schedule radii checked by {@code standard}. */
+    public static Output assemble(PieceAnalysis analysis, MaterialPlan plan, Tolerances tol, BendStandard standard)
             throws AnalysisException {
         double relative = tol.integrationRelative();
         List<Computed> computed = new ArrayList<>();
@@ -140,7 +147,7 @@ public final class PieceAssembler {
                     c.mass() == null ? null : c.mass().inertia(), start, end, p.closed(), p.segments().size(),
                     markOf[k + 1], p.bends(), sources, c.length().errorBound(),
                     PieceForms.ofSection(p.segments(), p.closed(), c.section().orElse(null),
-                            c.length().mass(), tol.angleRad(), tol.joinM())));
+                            c.length().mass(), tol.angleRad(), tol.joinM(), standard)));
         }
         Map<String, Moments> fm = new TreeMap<>();
         fieldMass.forEach((l, a) -> fm.put(l, a.result()));

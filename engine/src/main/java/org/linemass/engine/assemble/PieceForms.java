@@ -10,6 +10,7 @@ import org.linemass.engine.result.PieceForm;
 import org.linemass.engine.section.Section;
 import org.linemass.engine.shape.BendLimit;
 import org.linemass.engine.shape.BendLimits;
+import org.linemass.engine.shape.BendStandard;
 import org.linemass.engine.shape.ShapeClassifier;
 import org.linemass.geometry.Segment;
 
@@ -34,7 +35,7 @@ public final class PieceForms {
     public static PieceForm of(List<Segment> segments, boolean closed, Double diameterM, double lengthM,
             double angleRad, double joinM) {
         return of(segments, closed, diameterM, BendLimit.none("no section: no minimum bend radius known, bends not"
-                + " checked"), lengthM, angleRad, joinM);
+                + " checked"), lengthM, angleRad, joinM, BendStandard.AUTO);
     }
 
     /**
@@ -44,12 +45,18 @@ public final class PieceForms {
      */
     public static PieceForm ofSection(List<Segment> segments, boolean closed, Section section, double lengthM,
             double angleRad, double joinM) {
+        return ofSection(segments, closed, section, lengthM, angleRad, joinM, BendStandard.AUTO);
+    }
+
+    /** As {@link #ofSection(List, boolean, Section, double, double, double)}, radii checked by {@code standard}. */
+    public static PieceForm ofSection(List<Segment> segments, boolean closed, Section section, double lengthM,
+            double angleRad, double joinM, BendStandard standard) {
         return of(segments, closed, section == null ? null : section.diameterM(), BendLimits.of(section), lengthM,
-                angleRad, joinM);
+                angleRad, joinM, standard);
     }
 
     private static PieceForm of(List<Segment> segments, boolean closed, Double diameterM, BendLimit limit,
-            double lengthM, double angleRad, double joinM) {
+            double lengthM, double angleRad, double joinM, BendStandard standard) {
         if (segments.isEmpty()) {
             return new PieceForm(PieceForm.NONE.program(), List.of(), null, limit);
         }
@@ -61,6 +68,7 @@ public final class PieceForms {
             }
         }
         var program = BenderPrograms.of(runs);
-        return new PieceForm(program, coils, ShapeClassifier.classify(program, closed, diameterM, lengthM), limit);
+        return new PieceForm(program, coils, ShapeClassifier.classify(program, closed, diameterM, lengthM, standard),
+                limit);
     }
 }

@@ -6,6 +6,7 @@ import java.util.Optional;
 import org.linemass.engine.section.LayerAssignment;
 import org.linemass.engine.section.LayerJoin;
 import org.linemass.engine.section.SectionTable;
+import org.linemass.engine.shape.BendStandard;
 import org.linemass.tolerance.Tolerances;
 
 /**
@@ -32,12 +33,13 @@ import org.linemass.tolerance.Tolerances;
  * @param densityExpressions layer glob to a linear-density expression in x, y, z, s (kg/m); overrides the section's constant
  * @param maxExpandedSegments most world segments expanded for joining and checks; beyond it those stages are skipped and reports say so
  * @param layerJoins layers whose pieces join one another end to end (empty: ends join on one layer only)
+ * @param bendStandard whose minimum bend radii the schedule checks bars against
  */
 public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimitM, Optional<Double> groupM,
         double integrationRelative, boolean mirrorGrouping, List<String> includeLayers,
         List<String> excludeLayers, boolean includeHiddenLayers, SectionTable sections,
         List<LayerAssignment> assignments, Map<String, String> densityExpressions, long maxExpandedSegments,
-        List<LayerJoin> layerJoins) {
+        List<LayerJoin> layerJoins, BendStandard bendStandard) {
 
     public static final long DEFAULT_MAX_EXPANDED_SEGMENTS = 2_000_000L;
 
@@ -54,6 +56,20 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
         assignments = List.copyOf(assignments);
         densityExpressions = Map.copyOf(densityExpressions);
         layerJoins = List.copyOf(layerJoins);
+        if (bendStandard == null) {
+            throw new IllegalArgumentException("bend standard must be given (BendStandard.AUTO by default)");
+        }
+    }
+
+    /** The settings with the bend standard that follows the bar size ({@link BendStandard#AUTO}). */
+    public AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimitM, Optional<Double> groupM,
+            double integrationRelative, boolean mirrorGrouping, List<String> includeLayers,
+            List<String> excludeLayers, boolean includeHiddenLayers, SectionTable sections,
+            List<LayerAssignment> assignments, Map<String, String> densityExpressions, long maxExpandedSegments,
+            List<LayerJoin> layerJoins) {
+        this(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers, excludeLayers,
+                includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments, layerJoins,
+                BendStandard.AUTO);
     }
 
     /** The settings without layer joins (ends join on one layer only, as before joins existed). */
@@ -76,7 +92,7 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
     public AnalysisSettings unfiltered() {
         return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, List.of(),
                 List.of(), includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments,
-                layerJoins);
+                layerJoins, bendStandard);
     }
 
     /**
@@ -103,13 +119,21 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
 
     public AnalysisSettings withAssignments(List<LayerAssignment> a) {
         return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers,
-                excludeLayers, includeHiddenLayers, sections, a, densityExpressions, maxExpandedSegments, layerJoins);
+                excludeLayers, includeHiddenLayers, sections, a, densityExpressions, maxExpandedSegments, layerJoins,
+                bendStandard);
     }
 
     /** The same settings with {@code joins} as the layer joins. */
     public AnalysisSettings withLayerJoins(List<LayerJoin> joins) {
         return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers,
                 excludeLayers, includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments,
-                joins);
+                joins, bendStandard);
+    }
+
+    /** The same settings with {@code standard} for the schedule's radius check. */
+    public AnalysisSettings withBendStandard(BendStandard standard) {
+        return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers,
+                excludeLayers, includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments,
+                layerJoins, standard);
     }
 }

@@ -57,17 +57,26 @@ public final class ShapeClassifier {
      * @param exactLengthM the exact centre-line length (metres)
      */
     public static ShapeResult classify(BenderProgram program, boolean closed, Double diameterM, double exactLengthM) {
+        return classify(program, closed, diameterM, exactLengthM, BendStandard.AUTO);
+    }
+
+    /** As {@link #classify(BenderProgram, boolean, Double, double)}, checking radii by {@code standard}. */
+    public static ShapeResult classify(BenderProgram program, boolean closed, Double diameterM, double exactLengthM,
+            BendStandard standard) {
         List<String> notes = new ArrayList<>();
         double d = diameterM == null ? 0 : diameterM;
         if (diameterM == null) {
             notes.add("bar size unknown: dimensions are centre-line, no radius check");
         }
-        OptionalDouble table = diameterM == null ? OptionalDouble.empty() : MinimumRadius.forDiameterM(d);
-        Optional<AciRadius.Bar> us = diameterM != null && table.isEmpty() ? AciRadius.forDiameterM(d) : Optional.empty();
+        OptionalDouble table = diameterM == null || standard == BendStandard.ACI318 ? OptionalDouble.empty()
+                : MinimumRadius.forDiameterM(d);
+        Optional<AciRadius.Bar> us = diameterM != null && table.isEmpty() && standard != BendStandard.BS8666
+                ? AciRadius.forDiameterM(d) : Optional.empty();
         if (us.isPresent()) {
             notes.add(usNote(us.get()));
         } else if (diameterM != null && table.isEmpty()) {
-            notes.add("not a BS 8666 Table 2 bar size: no minimum radius");
+            notes.add(standard == BendStandard.ACI318 ? "not an ASTM A615 bar size: no ACI 318-19 minimum radius"
+                    : "not a BS 8666 Table 2 bar size: no minimum radius");
         }
         // the piece's role (hook or stirrup) is not known: the smaller of the two ACI minimums is checked
         double usMin = us.map(u -> u.stirrupRadiusM() != null ? u.stirrupRadiusM() : u.hookRadiusM()).orElse(0.0);
@@ -210,7 +219,7 @@ public final class ShapeClassifier {
         String stirrups = u.stirrupRadiusM() == null ? "" : String.format(Locale.ROOT,
                 ", %.1f mm for stirrups and ties (Table 25.3.2%s)", u.stirrupRadiusM() * 1000,
                 u.stirrupFromMemory() ? ", from memory" : "");
-        return "US bar " + u.number() + ", not a BS 8666 Table 2 size: ACI 318-19 minimum inside radius " + hooks
+        return "US bar " + u.number() + ": ACI 318-19 minimum inside radius " + hooks
                 + stirrups + "; shape codes are still BS 8666's (ACI 315 bar types not covered)";
     }
 

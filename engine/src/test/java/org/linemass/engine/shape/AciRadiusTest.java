@@ -7,6 +7,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.linemass.engine.assemble.PieceForms;
+import org.linemass.engine.bender.BenderProgram;
+import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Vec3;
 
@@ -33,6 +36,40 @@ class AciRadiusTest {
         assertEquals(4 * 1.128 * 0.0254, no9.hookRadiusM(), TOL);
         assertNull(no9.stirrupRadiusM());
         assertTrue(AciRadius.forDiameterM(0.012).isEmpty(), "12 mm is a metric size");
+    }
+
+    private static ShapeResult classify(List<Segment> bar, double d, BendStandard standard) {
+        BenderProgram p = PieceForms.of(bar, false, d, 0, Math.toRadians(0.01), 1e-5).program();
+        return ShapeClassifier.classify(p, false, d, bar.stream().mapToDouble(Curves::length).sum(), standard);
+    }
+
+    /**
+     * The chosen standard alone: a 12 mm bar at inside radius 10 mm (below Table 2's 24 mm) is not
+     * checked under ACI 318 (12 mm is no ASTM size) and is flagged under BS 8666; a #4 bar at inside
+     * radius 20 mm is flagged under ACI 318 and not checked under BS 8666.
+     */
+    @Test
+    void classify_chosenStandardOnly() {
+        List<Segment> metric = ShapeClassifierTest.filleted(0.016, new Vec3(0.4, 0, 0), Vec3.ZERO, new Vec3(0, 0.3, 0));
+        ShapeResult aci = classify(metric, 0.012, BendStandard.ACI318);
+        assertFalse(aci.belowMinimumRadius());
+        assertTrue(aci.notes().contains("not an ASTM A615 bar size: no ACI 318-19 minimum radius"), aci.notes()
+                .toString());
+        assertTrue(classify(metric, 0.012, BendStandard.BS8666).belowMinimumRadius());
+        List<Segment> us = ShapeClassifierTest.filleted(0.020 + NO4 / 2, new Vec3(0.4, 0, 0), Vec3.ZERO,
+                new Vec3(0, 0.3, 0));
+        assertTrue(classify(us, NO4, BendStandard.ACI318).belowMinimumRadius());
+        ShapeResult bs = classify(us, NO4, BendStandard.BS8666);
+        assertFalse(bs.belowMinimumRadius());
+        assertTrue(bs.notes().contains("not a BS 8666 Table 2 bar size: no minimum radius"), bs.notes().toString());
+    }
+
+    @Test
+    void parse_unknownStandard_namesTheKnownOnes() {
+        assertEquals(BendStandard.ACI318, BendStandard.parse("ACI318"));
+        IllegalArgumentException e = org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
+                () -> BendStandard.parse("din"));
+        assertTrue(e.getMessage().contains("auto, bs8666, aci318"), e.getMessage());
     }
 
     /** A #4 L-bar at inside radius 20 mm is below the stirrup minimum 25.4 mm; at 30 mm it is not. */
