@@ -1,8 +1,6 @@
 package org.linemass.engine.resolve;
 
-import java.util.ArrayDeque;
 import java.util.Arrays;
-import java.util.Deque;
 import java.util.HashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -12,6 +10,7 @@ import java.util.Set;
 import org.linemass.drawing.Block;
 import org.linemass.drawing.Drawing;
 import org.linemass.drawing.Insert;
+import org.linemass.drawing.InsertWalk;
 import org.linemass.engine.integrate.LinearDensity;
 import org.linemass.engine.integrate.MomentIntegrator;
 import org.linemass.engine.moments.Moments;
@@ -30,8 +29,9 @@ import org.linemass.tolerance.Tolerances;
  * a translation share the result, see {@link Key}), at most {@code directBudget} segment copies and
  * {@code directBudget} distinct maps in all; beyond that the remaining copies are left out and an
  * incompleteness reason is recorded.
- * Nesting is walked with an explicit stack, so any depth works; an insert that would place a block
- * inside itself is skipped and recorded. Single use, not thread-safe.
+ * Nesting is walked by {@link InsertWalk} (one entry per insert; a child's moments are added to its
+ * parent when the walk leaves the child, or at once when they are memoised); an insert that would
+ * place a block inside itself is skipped and recorded. Single use, not thread-safe.
  */
 final class BlockInstancer {
 
@@ -40,7 +40,6 @@ final class BlockInstancer {
     private final double relative;
     private final Map<String, Moments[]> segmentMoments = new HashMap<>();
     private final Map<Key, LayerTotals> memo = new HashMap<>();
-    private final Map<String, Integer> active = new HashMap<>();
     private final Set<String> reasons = new LinkedHashSet<>();
     private long directBudget;
     private final long maxFrames;
@@ -59,23 +58,32 @@ final class BlockInstancer {
         }
     }
 
+    /**
+     * One block being integrated: under {@code map} (null: its own frame), memoised under
+     * {@code memoKey}; {@code insert} and {@code composite} say how its parent places the result
+     * ({@code scale} the similarity scale, NaN for a linear map that is not one).
+     */
     private static final class Frame {
         final Block block;
         final String inherited;
         final Affine map;
         final Key memoKey;
         final Frame parent;
+        final Insert insert;
+        final Affine composite;
+        final double scale;
         final LayerTotals.Builder acc = new LayerTotals.Builder();
-        int nextInsert;
-        boolean segmentsDone;
-        LayerTotals childResult;
 
-        Frame(Block block, String inherited, Affine map, Key memoKey, Frame parent) {
+        Frame(Block block, String inherited, Affine map, Key memoKey, Frame parent, Insert insert, Affine composite,
+                double scale) {
             this.block = block;
             this.inherited = inherited;
             this.map = map;
             this.memoKey = memoKey;
             this.parent = parent;
+            this.insert = insert;
+            this.composite = composite;
+            this.scale = scale;
         }
     }
 
@@ -119,100 +127,93 @@ final class BlockInstancer {
         if (done != null) {
             return done;
         }
-        run(new Frame(block, inherited, null, key, null));
+        Frame root = new Frame(block, inherited, null, key, null, null, null, Double.NaN);
+        addSegments(root);
+        InsertWalk.walk(drawing.blocks()::get, root, new Walk());
         return memo.get(key);
     }
 
-    private void run(Frame root) {
-        Deque<Frame> stack = new ArrayDeque<>();
-        push(stack, root);
-        while (!stack.isEmpty()) {
-            Frame f = stack.peek();
-            if (!f.segmentsDone) {
-                addSegments(f);
-                f.segmentsDone = true;
-            }
-            List<Insert> inserts = f.block.inserts();
-            if (f.nextInsert < inserts.size()) {
-                Insert ins = inserts.get(f.nextInsert);
-                if (step(stack, f, ins)) {
-                    f.nextInsert++;
-                }
-                continue;
-            }
-            stack.pop();
-            active.merge(f.block.name(), -1, Integer::sum);
-            LayerTotals result = f.acc.build();
-            if (f.memoKey != null) {
-                memo.put(f.memoKey, result);
-            } else if (f.parent != null) {
-                f.parent.childResult = result;
-            }
+    /** The instancing walk: a child frame for each placement whose moments are not memoised yet. */
+    private final class Walk implements InsertWalk.Visitor<Frame> {
+
+        @Override
+        public Block block(Frame f) {
+            return f.block;
         }
-    }
 
-    private void push(Deque<Frame> stack, Frame f) {
-        stack.push(f);
-        active.merge(f.block.name(), 1, Integer::sum);
-    }
-
-    private boolean onStack(String block) {
-        return active.getOrDefault(block, 0) > 0;
-    }
-
-    /** Handles one insert of frame f; false when a child frame was pushed and the insert must be revisited. */
-    private boolean step(Deque<Frame> stack, Frame f, Insert ins) {
-        String inherited = LayerRules.effective(ins.source().layer(), f.inherited);
-        if (!rules.insertShown(inherited)) {
-            return true;
+        @Override
+        public String inherited(Frame f) {
+            return f.inherited;
         }
-        Block child = drawing.blocks().get(ins.blockName());
-        if (child == null) {
+
+        @Override
+        public long entries(Frame parent, Insert ins, Block child, String inherited) {
+            return rules.insertShown(inherited) ? 1 : 0;
+        }
+
+        @Override
+        public void undefined(Frame parent, Insert ins) {
             reasons.add("insert of undefined block " + ins.blockName() + " (" + ins.source().describe() + ") left out");
-            return true;
         }
-        Affine composite = f.map == null ? ins.placement() : ins.placement().andThen(f.map);
+
+        @Override
+        public void cycle(Frame parent, Insert ins, Block child) {
+            reasons.add("block " + child.name() + " inserts itself (" + ins.source().describe()
+                    + "); that insert was left out");
+        }
+
+        @Override
+        public Frame enter(Frame f, Insert ins, Block child, String inherited, long entry) {
+            Affine composite = f.map == null ? ins.placement() : ins.placement().andThen(f.map);
+            OptionalDouble s = composite.similarityScale(Tolerances.SIMILARITY_RELATIVE);
+            Key key;
+            Affine linear = null;
+            if (s.isPresent()) {
+                key = new Key(child.name(), inherited);
+            } else {
+                linear = Affine.of(composite.linearRowMajor(), Vec3.ZERO);
+                key = new Key(child.name(), inherited, Arrays.stream(composite.linearRowMajor()).boxed().toList());
+            }
+            double scale = s.isPresent() ? s.getAsDouble() : Double.NaN;
+            LayerTotals cached = memo.get(key);
+            if (cached != null) {
+                place(f, ins, composite, scale, cached);
+                return null;
+            }
+            if (linear != null) {
+                if (frameBudget <= 0) {
+                    reasons.add("too many distinct non-uniformly scaled placements (more than " + maxFrames
+                            + "); some copies of block " + child.name() + " were left out");
+                    return null;
+                }
+                frameBudget--;
+            }
+            Frame c = new Frame(child, inherited, linear, key, f, ins, composite, scale);
+            addSegments(c);
+            return c;
+        }
+
+        @Override
+        public void leave(Frame f) {
+            LayerTotals result = f.acc.build();
+            memo.put(f.memoKey, result);
+            if (f.parent != null) {
+                place(f.parent, f.insert, f.composite, f.scale, result);
+            }
+        }
+    }
+
+    /**
+     * Adds the moments {@code sub} of a child (in its block frame, or under its linear map when
+     * {@code scale} is NaN) to frame {@code f} as insert {@code ins} places them, arrays included.
+     */
+    private static void place(Frame f, Insert ins, Affine composite, double scale, LayerTotals sub) {
         Vec3 cs = f.map == null ? ins.columnStep() : f.map.applyLinear(ins.columnStep());
         Vec3 rs = f.map == null ? ins.rowStep() : f.map.applyLinear(ins.rowStep());
-        LayerTotals sub;
-        if (f.childResult != null) {
-            sub = f.childResult;
-            f.childResult = null;
-        } else {
-            OptionalDouble s = composite.similarityScale(Tolerances.SIMILARITY_RELATIVE);
-            if (onStack(child.name())) {
-                reasons.add("block " + child.name() + " inserts itself (" + ins.source().describe()
-                        + "); that insert was left out");
-                return true;
-            }
-            if (s.isPresent()) {
-                Key key = new Key(child.name(), inherited);
-                LayerTotals cached = memo.get(key);
-                if (cached == null) {
-                    push(stack, new Frame(child, inherited, null, key, f));
-                    return false;
-                }
-                sub = cached.transformed(composite, s.getAsDouble(), Tolerances.SIMILARITY_SLACK);
-            } else {
-                Affine linear = Affine.of(composite.linearRowMajor(), Vec3.ZERO);
-                Key key = new Key(child.name(), inherited,
-                        Arrays.stream(composite.linearRowMajor()).boxed().toList());
-                LayerTotals cached = memo.get(key);
-                if (cached == null) {
-                    if (frameBudget <= 0) {
-                        reasons.add("too many distinct non-uniformly scaled placements (more than " + maxFrames
-                                + "); some copies of block " + child.name() + " were left out");
-                        return true;
-                    }
-                    frameBudget--;
-                    push(stack, new Frame(child, inherited, linear, key, f));
-                    return false;
-                }
-                sub = cached.transformed(Affine.translation(composite.translationPart()), 1, 0);
-            }
-        }
-        f.acc.addAll(sub.arrayed(ins.columns(), ins.rows(), cs, rs));
-        return true;
+        LayerTotals placed = Double.isNaN(scale)
+                ? sub.transformed(Affine.translation(composite.translationPart()), 1, 0)
+                : sub.transformed(composite, scale, Tolerances.SIMILARITY_SLACK);
+        f.acc.addAll(placed.arrayed(ins.columns(), ins.rows(), cs, rs));
     }
 
     private void addSegments(Frame f) {

@@ -2,6 +2,7 @@ package org.linemass.engine.resolve;
 
 import java.util.List;
 import org.linemass.drawing.Drawing;
+import org.linemass.drawing.InsertWalk;
 import org.linemass.drawing.Layer;
 import org.linemass.engine.section.LayerGlob;
 
@@ -15,9 +16,6 @@ import org.linemass.engine.section.LayerGlob;
  * the content that inherits that layer. Caches its verdicts: not thread-safe.
  */
 final class LayerRules {
-
-    /** The layer that entities inside blocks inherit from. */
-    static final String LAYER_ZERO = "0";
 
     private final Drawing drawing;
     private final List<LayerGlobs> include;
@@ -37,10 +35,7 @@ final class LayerRules {
 
     /** The layer an entity on {@code own} counts on, given the layer inherited from its insert (null in model space). */
     static String effective(String own, String inherited) {
-        if (inherited != null && LAYER_ZERO.equals(own)) {
-            return inherited;
-        }
-        return own;
+        return InsertWalk.effectiveLayer(own, inherited);
     }
 
     boolean counts(String layer) {

@@ -1,14 +1,11 @@
 package org.linemass.engine.resolve;
 
-import java.util.ArrayDeque;
 import java.util.ArrayList;
-import java.util.Deque;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import org.linemass.drawing.Block;
 import org.linemass.drawing.Drawing;
 import org.linemass.drawing.Insert;
+import org.linemass.drawing.InsertWalk;
 import org.linemass.geometry.Affine;
 import org.linemass.geometry.Provenance;
 import org.linemass.geometry.Segment;
@@ -17,10 +14,11 @@ import org.linemass.geometry.Segment;
  * The expanded world segments (metres) of the counted layers, for joining and checks: every copy
  * of every block placed by its full transform, with the effective layer and the block path (outermost
  * first) in its provenance. Same rules as {@link BlockInstancer} (layer filters, layer-0
- * inheritance, frozen inserts, arrays, cycles and undefined blocks skipped). Walks with an explicit
- * stack and stops after {@code limit} distinct segments (the caller checks the count first). Exact
- * coincident copies of one entity are collected once and counted ({@link CoincidentCopies}). Order:
- * model space entities in file order, each insert's copies column by column, depth first.
+ * inheritance, frozen inserts, arrays, cycles and undefined blocks skipped), on the same walk
+ * ({@link InsertWalk}, one entry per array copy). Stops after {@code limit} distinct segments (the
+ * caller checks the count first). Exact coincident copies of one entity are collected once and
+ * counted ({@link CoincidentCopies}). Order: model space entities in file order, each insert's
+ * copies column by column, depth first.
  */
 final class WorldExpander {
 
@@ -33,8 +31,6 @@ final class WorldExpander {
         final Affine map;
         final PathNode path;
         List<String> materialised;
-        int nextInsert;
-        long copy;
 
         Frame(Block block, String inherited, Affine map, PathNode path) {
             this.block = block;
@@ -76,37 +72,40 @@ final class WorldExpander {
         if (model == null) {
             return out;
         }
-        Map<String, Integer> active = new HashMap<>();
-        Deque<Frame> stack = new ArrayDeque<>();
         Frame root = new Frame(model, null, world, null);
         emit(root, rules, out, limit);
-        stack.push(root);
-        active.merge(model.name(), 1, Integer::sum);
-        while (!stack.isEmpty() && out.size() < limit) {
-            Frame f = stack.peek();
-            if (f.nextInsert >= f.block.inserts().size()) {
-                stack.pop();
-                active.merge(f.block.name(), -1, Integer::sum);
-                continue;
+        InsertWalk.walk(drawing.blocks()::get, root, new InsertWalk.Visitor<Frame>() {
+            @Override
+            public Block block(Frame f) {
+                return f.block;
             }
-            Insert ins = f.block.inserts().get(f.nextInsert);
-            String inherited = LayerRules.effective(ins.source().layer(), f.inherited);
-            Block child = drawing.blocks().get(ins.blockName());
-            if (f.copy >= ins.copies() || !rules.insertShown(inherited) || child == null
-                    || active.getOrDefault(child.name(), 0) > 0 || !occupied.placesSegments(child.name(), inherited)) {
-                f.nextInsert++;
-                f.copy = 0;
-                continue;
+
+            @Override
+            public String inherited(Frame f) {
+                return f.inherited;
             }
-            int i = (int) (f.copy / ins.rows());
-            int j = (int) (f.copy % ins.rows());
-            f.copy++;
-            Affine map = ins.placement(i, j).andThen(f.map);
-            Frame c = new Frame(child, inherited, map, new PathNode(child.name(), f.path));
-            emit(c, rules, out, limit);
-            stack.push(c);
-            active.merge(child.name(), 1, Integer::sum);
-        }
+
+            @Override
+            public long entries(Frame parent, Insert ins, Block child, String inherited) {
+                boolean empty = child != null && !occupied.placesSegments(child.name(), inherited);
+                return !rules.insertShown(inherited) || empty ? 0 : ins.copies();
+            }
+
+            @Override
+            public Frame enter(Frame parent, Insert ins, Block child, String inherited, long entry) {
+                int i = (int) (entry / ins.rows());
+                int j = (int) (entry % ins.rows());
+                Frame c = new Frame(child, inherited, ins.placement(i, j).andThen(parent.map),
+                        new PathNode(child.name(), parent.path));
+                emit(c, rules, out, limit);
+                return c;
+            }
+
+            @Override
+            public boolean stop() {
+                return out.size() >= limit;
+            }
+        });
         return out;
     }
 

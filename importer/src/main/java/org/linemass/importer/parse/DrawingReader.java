@@ -463,7 +463,7 @@ public final class DrawingReader {
         u.note().ifPresent(n -> notes.add(0, n));
         paperSpaceNote().ifPresent(notes::add);
         invisibleNote().ifPresent(notes::add);
-        NotWeighed.notes(file, blocks, notes);
+        NotWeighed.notes(file, blocks, built, notes);
         if (!handler.draftingLeftOut.isEmpty()) {
             StringBuilder t = new StringBuilder();
             handler.draftingLeftOut.forEach((k, v) -> t.append(t.length() == 0 ? "" : ", ").append(v).append(' ').append(k));

@@ -1,15 +1,17 @@
 package org.linemass.importer.parse;
 
-import java.util.ArrayDeque;
-import java.util.Deque;
+import java.util.Arrays;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
+import java.util.function.Consumer;
+import org.linemass.drawing.Block;
 import org.linemass.drawing.Drawing;
 import org.linemass.drawing.ImportNote;
 import org.linemass.drawing.Insert;
+import org.linemass.drawing.InsertWalk;
 
 /**
  * Entities that may stand for material but that the importer cannot read as wire: ACIS bodies
@@ -21,16 +23,15 @@ import org.linemass.drawing.Insert;
  *
  * <p>The layer is the one the entity is drawn on: content of a block on layer {@code 0} takes the
  * layer of the insert that places it (through nested layer-0 inserts), so the walk starts at model
- * space and follows the resolved inserts; an entity of a block that model space never places is
- * not listed (it is in no total either). An entity is counted once per block definition and layer
- * it lands on, not once per copy. Each (block, inherited layer) pair is visited once, so the walk
- * costs what the engine's instancing costs. Not thread-safe.
+ * space and follows the resolved inserts ({@link InsertWalk}, the walk the engine's instancing
+ * uses); an entity of a block that model space never places is not listed (it is in no total
+ * either). An entity is counted once per block definition and layer it lands on, not once per
+ * copy. Each (block, inherited layer) pair is visited once, so the walk costs what the engine's
+ * instancing costs. Not thread-safe.
  */
 final class NotWeighed {
 
     static final String KIND = "not_weighed";
-
-    private static final String LAYER_ZERO = "0";
 
     private static final Set<String> TYPES = Set.of("REGION", "3DSOLID", "BODY", "SURFACE", "PLANESURFACE",
             "EXTRUDEDSURFACE", "LOFTEDSURFACE", "REVOLVEDSURFACE", "SWEPTSURFACE", "NURBSURFACE",
@@ -49,44 +50,59 @@ final class NotWeighed {
     }
 
     /** A block placed with the layer its layer-0 content takes (null in model space). */
-    private record Placed(String block, String inherited) {
+    private record Placed(Block block, String inherited) {
     }
 
     /**
-     * One note per layer, in layer order, for the blocks as resolved ({@link BlockBuilder#inserts}
-     * filled); nothing when no block holds such an entity.
+     * One note per layer, in layer order, for the blocks as built ({@code built}, inserts resolved)
+     * with what was counted while reading them ({@code blocks}); nothing when no block holds such an
+     * entity.
      */
-    static void notes(String file, Map<String, BlockBuilder> blocks, List<ImportNote> out) {
-        if (blocks.values().stream().allMatch(b -> b.notWeighed.isEmpty())) {
+    static void notes(String file, Map<String, BlockBuilder> blocks, Map<String, Block> built, List<ImportNote> out) {
+        Block model = built.get(Drawing.MODEL_SPACE);
+        if (model == null || blocks.values().stream().allMatch(b -> b.notWeighed.isEmpty())) {
             return;
         }
         Map<String, Map<String, Integer>> byLayer = new TreeMap<>();
         Set<String> wireLayers = new HashSet<>();
-        Set<Placed> seen = new HashSet<>();
-        Deque<Placed> todo = new ArrayDeque<>();
-        Placed root = new Placed(Drawing.MODEL_SPACE, null);
-        seen.add(root);
-        todo.push(root);
-        while (!todo.isEmpty()) {
-            Placed p = todo.pop();
-            BlockBuilder b = blocks.get(p.block);
-            if (b == null) {
-                continue;
-            }
+        Set<List<String>> seen = new HashSet<>();
+        Consumer<Placed> take = p -> {
+            BlockBuilder b = blocks.get(p.block().name());
             for (String layer : b.wireLayers) {
-                wireLayers.add(effective(layer, p.inherited));
+                wireLayers.add(InsertWalk.effectiveLayer(layer, p.inherited()));
             }
             b.notWeighed.forEach((layer, types) -> {
-                Map<String, Integer> into = byLayer.computeIfAbsent(effective(layer, p.inherited), k -> new TreeMap<>());
+                Map<String, Integer> into = byLayer.computeIfAbsent(InsertWalk.effectiveLayer(layer, p.inherited()),
+                        k -> new TreeMap<>());
                 types.forEach((t, n) -> into.merge(t, n, Integer::sum));
             });
-            for (Insert ins : b.inserts) {
-                Placed q = new Placed(ins.blockName(), effective(ins.source().layer(), p.inherited));
-                if (seen.add(q)) {
-                    todo.push(q);
-                }
+        };
+        Placed root = new Placed(model, null);
+        take.accept(root);
+        InsertWalk.walk(built::get, root, new InsertWalk.Visitor<Placed>() {
+            @Override
+            public Block block(Placed p) {
+                return p.block();
             }
-        }
+
+            @Override
+            public String inherited(Placed p) {
+                return p.inherited();
+            }
+
+            @Override
+            public long entries(Placed parent, Insert ins, Block child, String inherited) {
+                // each (block, inherited layer) once: its content lands on the same layers every time
+                return child == null || seen.add(Arrays.asList(child.name(), inherited)) ? 1 : 0;
+            }
+
+            @Override
+            public Placed enter(Placed parent, Insert ins, Block child, String inherited, long entry) {
+                Placed p = new Placed(child, inherited);
+                take.accept(p);
+                return p;
+            }
+        });
         for (Map.Entry<String, Map<String, Integer>> e : byLayer.entrySet()) {
             StringBuilder what = new StringBuilder();
             e.getValue().forEach((t, n) -> what.append(what.length() == 0 ? "" : ", ").append(n).append(' ').append(t));
@@ -101,8 +117,4 @@ final class NotWeighed {
         }
     }
 
-    /** The layer an entity drawn on {@code own} lands on: layer-0 content takes the inserting layer. */
-    private static String effective(String own, String inherited) {
-        return inherited != null && LAYER_ZERO.equals(own) ? inherited : own;
-    }
 }
