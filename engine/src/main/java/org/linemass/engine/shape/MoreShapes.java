@@ -5,7 +5,7 @@ import org.linemass.engine.bender.BenderStep;
 import org.linemass.tolerance.Tolerances;
 
 /**
- * The BS 8666 shapes of {@link ShapeCode} 25, 33, 34, 36, 41, 44, 47, 51, 52 and 63, matched on a planar
+ * The BS 8666 shapes of {@link ShapeCode} 22, 25, 33, 34, 36, 41, 44, 47, 51, 52 and 63, matched on a planar
  * open piece by its bend pattern: each bend's kind (90, 180, 135 degrees within
  * {@link ShapeClassifier#ANGLE_DEG}, or another angle) and whether it turns the same way as the bend
  * before it. A pattern read from either end matches; the dimensions are then taken from the end the
@@ -60,6 +60,18 @@ final class MoreShapes {
             double bb = l.leg(2);
             return b.dims(a, bb, a * Math.sin(a1), bb * Math.sin(a2), e, inside[0]).length(a + bb + e)
                     .done(ShapeCode.S25);
+        }
+        if ((v = View.of("RH", "S", k, t)) != null) {
+            // C is the width of the semicircle, "not less than 2(r + d)" in the standard's notes as reproduced
+            // on suppliers' pages; that the hook turns the same way as the right angle (its tail back over B)
+            // is read from those pages' drawings, not from the printed standard: unverified
+            Legs l = new Legs(v, steps, feed, inside, d, false);
+            double a = l.leg(0);
+            double bb = l.leg(1);
+            double width = 2 * (inside[v.bend(1)] + d);
+            double dd = l.leg(2);
+            return b.dims(a, bb, width, dd, null, inside[0]).length(a + bb + width + dd - 1.5 * r - 3 * d)
+                    .done(ShapeCode.S22);
         }
         if ((v = View.of("HHH", "SS", k, t)) != null) {
             Legs l = new Legs(v, steps, feed, inside, d, false);

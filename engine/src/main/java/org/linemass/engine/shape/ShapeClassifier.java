@@ -199,11 +199,6 @@ public final class ShapeClassifier {
                 return b.dims(out[0], out[1], out[2], out[3], null, inside[0])
                         .length(out[0] + out[1] + out[2] + out[3] - 1.5 * r - 3 * d).done(ShapeCode.S31);
             }
-            if (is(steps.get(2), 180)) {
-                double width = 2 * (inside[2] + d);
-                return b.dims(out[0], out[1], width, out[3], null, inside[0])
-                        .length(out[0] + out[1] + width + out[3] - 1.5 * r - 3 * d).done(ShapeCode.S22);
-            }
         }
         ShapeResult more = MoreShapes.match(steps, feed, inside, d, r, b);
         if (more != null) {

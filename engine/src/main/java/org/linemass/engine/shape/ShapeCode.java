@@ -24,7 +24,10 @@ public enum ShapeCode {
     S15("15", "A + (C)"),
     /** Two 90 degree bends turning the same way (a channel). L = A + B + (C) - r - 2d. */
     S21("21", "A + B + (C) - r - 2d"),
-    /** Two 90 degree bends then a 180 degree bend, all the same way. L = A + B + C + (D) - 1.5r - 3d. */
+    /**
+     * A 90 degree bend then a 180 degree bend the same way (a bar with a semicircular hook): legs A and B,
+     * C the width of the semicircle, D the tail. L = A + B + C + (D) - 1.5r - 3d.
+     */
     S22("22", "A + B + C + (D) - 1.5r - 3d"),
     /** Two 90 degree bends turning opposite ways (a joggle). L = A + B + (C) - r - 2d. */
     S23("23", "A + B + (C) - r - 2d"),

@@ -1,5 +1,6 @@
 package org.linemass.engine.shape;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.linemass.engine.shape.ShapeClassifierTest.check;
 import static org.linemass.engine.shape.ShapeClassifierTest.filleted;
 
@@ -13,7 +14,7 @@ import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
 
 /**
- * One drawn bar for each of the shape codes 25, 33, 34, 36, 41, 44, 47, 51, 52 and 63, classified in
+ * One drawn bar for each of the shape codes 22, 25, 33, 34, 36, 41, 44, 47, 51, 52 and 63, classified in
  * every view of {@link ShapeClassifierTest} (rotated, mirrored, read from either end). Each bar is a
  * 10 mm bar (Table 2 radius r = 20 mm, BS 8666:2005 Table 2 in the team reference sheet, section 6.1)
  * drawn with centre-line radius r + d/2 = 25 mm at every bend, so out-to-out legs are the centre-line
@@ -177,5 +178,28 @@ class MoreShapesTest {
         double exact = 1.8 + 3 * Math.PI * R;
         Double[] dims = {0.41, 0.31, 0.205, 0.205, null};
         check(bar, D, ShapeCode.S63, dims, dims, 2.04, exact);
+    }
+
+    /**
+     * Leg 300 down to a 90 degree corner, 400 along it, then a semicircular hook the same way whose tail runs
+     * back 250 over the leg (centre-line corners 50 = 2 x 25 apart): A 300 + d/2 = 305, B 400 + d = 410,
+     * C 2(r + d) = 60, D 250 + d/2 = 255 out-to-out; L = A + B + C + D - 1.5r - 3d = 1030 - 30 - 30 = 970 mm.
+     * Exact: straights 275 + 350 + 225, arcs three quarter turns of 25: 850 + 1.5 pi 25.
+     */
+    @Test
+    void shape22_rightAngleThenSemicircularHook() {
+        List<Segment> bar = filleted(R, new Vec3(0, 0.3, 0), Vec3.ZERO, new Vec3(0.4, 0, 0), new Vec3(0.4, 0.05, 0),
+                new Vec3(0.15, 0.05, 0));
+        double exact = 0.85 + 1.5 * Math.PI * R;
+        Double[] dims = {0.305, 0.41, 0.06, 0.255, null};
+        check(bar, D, ShapeCode.S22, dims, dims, 0.97, exact);
+    }
+
+    /** Two right angles then a semicircular hook: four legs, which shape 22's A to D cannot describe. */
+    @Test
+    void twoRightAnglesThenAHook_isNotShape22() {
+        List<Segment> bar = filleted(R, new Vec3(0, 0.3, 0), Vec3.ZERO, new Vec3(0.4, 0, 0), new Vec3(0.4, 0.3, 0),
+                new Vec3(0.35, 0.3, 0), new Vec3(0.35, 0.1, 0));
+        assertEquals(ShapeCode.OTHER, ShapeClassifierTest.classify(bar, false, D).code());
     }
 }
