@@ -39,6 +39,9 @@ public final class Campaign {
     private final Map<String, Failure> failures = new LinkedHashMap<>();
     private final Map<String, int[]> perKind = new TreeMap<>();
     private final Map<String, Integer> outcomes = new TreeMap<>();
+    private int referenceChecked;
+    private int referenceSkipped;
+    private int wrongBounds;
     private long slowestMillis;
     private String slowest = "";
     private int cliRuns;
@@ -65,25 +68,32 @@ public final class Campaign {
         for (int i = 0; i < cfg.count(); i++) {
             Seed seed = pick(cfg.seeds(), cumulative, rnd);
             Mutation kind = null;
-            byte[] bytes = null;
-            for (int tries = 0; bytes == null && tries < 20; tries++) {
+            Mutant mutant = null;
+            for (int tries = 0; mutant == null && tries < 20; tries++) {
                 kind = kinds.get(rnd.nextInt(kinds.size()));
-                bytes = kind.apply(seed, new Random(rnd.nextLong()));
+                mutant = kind.make(seed, new Random(rnd.nextLong()));
             }
-            if (bytes == null) {
+            if (mutant == null) {
                 continue;
             }
+            byte[] bytes = mutant.bytes();
             perKind.computeIfAbsent(kind.name(), k -> new int[2])[0]++;
             Path in = runDir.resolve("mutant.dxf");
             Files.write(in, bytes);
             MutantRun.clear(outDir);
             boolean binary = new Seed("", bytes).binary();
             boolean sections = (i & 1) == 1;
-            MutantRun.Result r = runner.run(MutantRun.args(in, outDir, binary, sections, false), outDir, bound(bytes));
+            MutantRun.Result r = runner.run(MutantRun.args(in, outDir, binary, sections, false, mutant.args()), outDir,
+                    bound(bytes));
             List<String> problems = classify(r, bytes, "mutant.dxf");
             if (r.code() == 3 && !r.overBound()) {
-                MutantRun.Result d = runner.run(MutantRun.args(in, outDir, binary, sections, true), outDir, bound(bytes));
+                MutantRun.Result d = runner.run(MutantRun.args(in, outDir, binary, sections, true, mutant.args()), outDir,
+                        bound(bytes));
                 problems = List.of("stack-trace: " + firstLines(d.err(), 12));
+            }
+            if (mutant.reference() != null && !r.overBound() && (r.code() == 0 || r.code() == 1)) {
+                problems = new ArrayList<>(problems);
+                problems.addAll(reference(mutant.reference(), outDir.resolve("r.json")));
             }
             if (r.millis() > slowestMillis) {
                 slowestMillis = r.millis();
@@ -154,6 +164,30 @@ public final class Campaign {
         int k = java.util.Arrays.binarySearch(cumulative, x);
         k = k >= 0 ? k : -k - 1;
         return seeds.get(Math.min(k, seeds.size() - 1));
+    }
+
+    /**
+     * The reference check of a mutant that has one, on its JSON report: counted as checked when
+     * the report holds what it checks, and as a wrong bound for each problem found.
+     */
+    List<String> reference(Mutant.Reference ref, Path json) throws IOException {
+        if (!Files.exists(json)) {
+            return List.of();
+        }
+        com.fasterxml.jackson.databind.JsonNode tree;
+        try {
+            tree = new com.fasterxml.jackson.databind.ObjectMapper().readTree(json.toFile());
+        } catch (IOException e) {
+            return List.of(); // json-invalid is reported by the output checks
+        }
+        List<String> p = ref.check(tree);
+        if (p == null) {
+            referenceSkipped++;
+            return List.of();
+        }
+        referenceChecked++;
+        wrongBounds += p.size();
+        return p;
     }
 
     /** Problems of one in-process run: stack traces, runs over the bound, bad messages, invalid outputs. */
@@ -247,6 +281,10 @@ public final class Campaign {
         sb.append(String.format(Locale.ROOT, "real command line: %d runs (%d of them killed part-way and followed "
                 + "by a second run into the same folder)%n", cliRuns, killRuns));
         sb.append("independent reader: ").append(ezdxfSummary).append('\n');
+        sb.append(String.format(Locale.ROOT, "runs over their bound: %d%n", outcomes.getOrDefault("over bound", 0)));
+        sb.append(String.format(Locale.ROOT, "reference checks (length and bound of an extreme-weight spline): %d made, "
+                + "%d skipped (the layer or its units not in the report), wrong bound: %d%n", referenceChecked,
+                referenceSkipped, wrongBounds));
         sb.append("\ndistinct failures: ").append(failures.size()).append('\n');
         for (Failure f : failures.values()) {
             sb.append("- ").append(f.detail().replace('\n', ' ')).append(" (").append(f.seen()[0]).append(" times; first ")

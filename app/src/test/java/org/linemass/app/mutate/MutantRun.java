@@ -39,6 +39,12 @@ final class MutantRun {
 
     /** The arguments of the run: every report into {@code outDir}; no marked-up copy for binary DXF. */
     static List<String> args(Path drawing, Path outDir, boolean binary, boolean withSections, boolean debug) {
+        return args(drawing, outDir, binary, withSections, debug, List.of());
+    }
+
+    /** The same with {@code extra} arguments (such as layer rules) before the drawing's name. */
+    static List<String> args(Path drawing, Path outDir, boolean binary, boolean withSections, boolean debug,
+            List<String> extra) {
         List<String> a = new ArrayList<>(List.of("check", "--fail-at", "never"));
         if (debug) {
             a.add("--debug");
@@ -52,6 +58,7 @@ final class MutantRun {
         if (!binary) {
             a.addAll(List.of("--markup-dxf", outDir.resolve("marked.dxf").toString()));
         }
+        a.addAll(extra);
         a.add(drawing.toString());
         return a;
     }

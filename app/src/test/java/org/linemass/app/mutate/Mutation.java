@@ -17,6 +17,16 @@ public interface Mutation {
      */
     byte[] apply(Seed seed, Random rnd);
 
+    /**
+     * The mutant with what else its run needs: extra command-line arguments and a reference
+     * check of the report. By default the bytes of {@link #apply} alone; kinds that need more
+     * override this (and may leave {@link #apply} to call it).
+     */
+    default Mutant make(Seed seed, Random rnd) {
+        byte[] b = apply(seed, rnd);
+        return b == null ? null : new Mutant(b, java.util.List.of(), null);
+    }
+
     /** A mutation from a name and a function. */
     static Mutation of(String name, java.util.function.BiFunction<Seed, Random, byte[]> f) {
         return new Mutation() {

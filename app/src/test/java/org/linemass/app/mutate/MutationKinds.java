@@ -19,6 +19,7 @@ public final class MutationKinds {
         List<Mutation> all = new ArrayList<>();
         all.addAll(ByteKinds.all(seeds));
         all.addAll(GroupKinds.all());
+        all.addAll(HostileModelKinds.all());
         // more families of kinds go here
         return List.copyOf(all);
     }
