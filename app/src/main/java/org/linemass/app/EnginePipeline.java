@@ -27,4 +27,18 @@ public final class EnginePipeline implements DrawingPipeline {
             throw OutOfResources.of(file, e);
         }
     }
+
+    /**
+     * As {@link #analyse}, for a drawing held in memory (the archive job's binary records);
+     * {@code name} stands for the file in the reports and messages.
+     */
+    public Report analyse(String name, byte[] content, ImportOptions importOptions, AnalysisSettings settings)
+            throws DxfInputException, AnalysisException {
+        try {
+            Drawing drawing = DxfImporter.read(name, content, importOptions);
+            return Report.of(Analyzer.analyze(drawing, settings));
+        } catch (OutOfMemoryError | StackOverflowError e) {
+            throw OutOfResources.of(name, e);
+        }
+    }
 }

@@ -1,6 +1,5 @@
 package org.linemass.app;
 
-import java.nio.file.Path;
 import java.util.Locale;
 import org.linemass.engine.error.AnalysisException;
 
@@ -17,7 +16,12 @@ final class OutOfResources {
     }
 
     /** The error for {@code file} when {@code e} is an out-of-memory or stack-overflow error. */
-    static AnalysisException of(Path file, VirtualMachineError e) {
+    static AnalysisException of(java.nio.file.Path file, VirtualMachineError e) {
+        return of(file.toString(), e);
+    }
+
+    /** As {@link #of(java.nio.file.Path, VirtualMachineError)} for a drawing named {@code file}. */
+    static AnalysisException of(String file, VirtualMachineError e) {
         AnalysisException a = new AnalysisException(file + ": " + what(e));
         a.initCause(e);
         return a;

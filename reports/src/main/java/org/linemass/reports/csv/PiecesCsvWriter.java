@@ -79,7 +79,7 @@ public final class PiecesCsvWriter {
      * Entity references as "line 1911 handle 3D" separated by "; " (the handle part left out when
      * empty). Spelled out rather than "1911:3D" because a spreadsheet reads "1911:32" as a time.
      */
-    static String refs(List<SourceRef> sources) {
+    public static String refs(List<SourceRef> sources) {
         return sources.stream()
                 .map(s -> "line " + s.line()
                         + (s.handle() == null || s.handle().isEmpty() ? "" : " handle " + s.handle()))
