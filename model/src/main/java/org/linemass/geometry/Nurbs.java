@@ -197,6 +197,66 @@ public final class Nurbs implements Segment {
         return out;
     }
 
+    /**
+     * The indices {@code s} of the non-empty knot spans [knot[s], knot[s + 1]] inside the domain, in
+     * ascending order: the pieces on which the curve is one rational polynomial.
+     */
+    public int[] spans() {
+        int[] out = new int[points.length - degree];
+        int n = 0;
+        for (int s = degree; s < points.length; s++) {
+            if (knots[s + 1] > knots[s]) {
+                out[n++] = s;
+            }
+        }
+        return Arrays.copyOf(out, n);
+    }
+
+    /**
+     * The curve on knot span {@code s} (one of {@link #spans()}) as a polynomial in homogeneous
+     * coordinates of the local variable {@code x} in [-1, 1], {@code u = mid + half x}: returns
+     * {@code 4 (degree + 1)} coefficients, {@code c[4k + d]} the coefficient of {@code x^k} in
+     * component {@code d} (x w, y w, z w, w). The weights are divided by the largest acting on the
+     * span, as {@link #evaluate} does. The coefficients are the Taylor coefficients at the span's
+     * middle, {@code H^(k)(mid) half^k / k!}, from all basis derivatives there (The NURBS Book,
+     * A2.3), so they are exact up to rounding.
+     */
+    public double[] spanPolynomial(int s) {
+        if (s < degree || s >= points.length || !(knots[s + 1] > knots[s])) {
+            throw new IllegalArgumentException("not a non-empty span of this spline: " + s);
+        }
+        double half = 0.5 * (knots[s + 1] - knots[s]);
+        double mid = knots[s] + half;
+        double[][] ders = basisDerivatives(s, mid, degree);
+        double wMax = 0;
+        for (int j = 0; j <= degree; j++) {
+            wMax = Math.max(wMax, weights[s - degree + j]);
+        }
+        double[] c = new double[4 * (degree + 1)];
+        double scale = 1;
+        for (int k = 0; k <= degree; k++) {
+            double ax = 0;
+            double ay = 0;
+            double az = 0;
+            double aw = 0;
+            for (int j = 0; j <= degree; j++) {
+                int i = s - degree + j;
+                double nw = ders[k][j] * (weights[i] / wMax);
+                Vec3 p = points[i];
+                ax += nw * p.x();
+                ay += nw * p.y();
+                az += nw * p.z();
+                aw += nw;
+            }
+            c[4 * k] = ax * scale;
+            c[4 * k + 1] = ay * scale;
+            c[4 * k + 2] = az * scale;
+            c[4 * k + 3] = aw * scale;
+            scale *= half / (k + 1);
+        }
+        return c;
+    }
+
     private int findSpan(double t) {
         int n = points.length - 1;
         if (t >= knots[n + 1]) {
@@ -273,7 +333,7 @@ public final class Nurbs implements Segment {
                 s2 = tmp;
             }
         }
-        int factor = p;
+        double factor = p; // p! / (p - k)!, which overflows an int for high degrees
         for (int k = 1; k <= n; k++) {
             for (int j = 0; j <= p; j++) {
                 ders[k][j] *= factor;

@@ -6,6 +6,7 @@ import org.linemass.engine.moments.Moments;
 import org.linemass.engine.moments.MomentsAccumulator;
 import org.linemass.engine.moments.Sym3;
 import org.linemass.geometry.CircularArc;
+import org.linemass.geometry.EllipticalArc;
 import org.linemass.geometry.Nurbs;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Straight;
@@ -81,7 +82,28 @@ public final class MomentIntegrator {
     }
 
     /**
-     * Moments of a segment under {@code density}.
+     * Length moments of a segment by the adaptive rule alone, cut as {@link #cuts} says, without the
+     * fixed rule of {@link SpanQuadrature}: the integrator as it was before the fixed rule, for
+     * cross-checks and benchmarks.
+     */
+    public static Result integrateAdaptive(Segment seg, double relative, long maxEvaluations) {
+        Sums sums = new Sums();
+        double[] cuts = cuts(seg);
+        sums.add(seg, cuts, LinearDensity.UNIT, null, relative, budget(maxEvaluations, cuts.length - 1));
+        Moments m = sums.acc.result();
+        double bound = sums.bound;
+        if (seg instanceof Nurbs n) {
+            bound = bracketed(m.mass(), bound, sums.chords, SplineParts.polygonLength(n));
+        }
+        return new Result(new Moments(m.mass(), m.centroid(), m.covariance(), bound), sums.evaluations,
+                sums.converged);
+    }
+
+    /**
+     * Moments of a segment under {@code density}. Under unit density a spline whose weights stay
+     * within {@link SplineParts#RATIO_TO_SPLIT} on every span, and an elliptical arc, are integrated
+     * by the fixed rule wherever its proved bound meets the target ({@link FixedPieces}), by the
+     * adaptive rule elsewhere.
      *
      * @param sOffsetM arc length of the piece before this segment's start (metres), for densities in s
      * @param relative target relative error
@@ -101,7 +123,9 @@ public final class MomentIntegrator {
         List<SplineParts.Part> parts = seg instanceof Nurbs n ? SplineParts.of(n) : null;
         Sums sums = new Sums();
         double length;
-        if (parts == null) {
+        if (density == LinearDensity.UNIT && parts == null && (seg instanceof Nurbs || seg instanceof EllipticalArc)) {
+            FixedPieces.integrate(seg, relative, maxEvaluations, sums);
+        } else if (parts == null) {
             ArcLengthMap arc = density.usesArcLength() ? ArcLengthMap.of(seg, relative, maxEvaluations) : null;
             length = arc == null ? 0 : arc.length();
             checkEnds(seg, density, sOffsetM, length);
@@ -179,12 +203,20 @@ public final class MomentIntegrator {
     }
 
     /** Moments, bound, chord sum and work summed over the ranges integrated so far. Not thread-safe. */
-    private static final class Sums {
+    static final class Sums {
         final MomentsAccumulator acc = new MomentsAccumulator();
         double bound;
         double chords;
         long evaluations;
         boolean converged = true;
+
+        /** Adds one piece integrated by the fixed rule. */
+        void add(SpanQuadrature.Piece p, double relative) {
+            acc.add(p.moments());
+            chords += p.chord();
+            bound += Math.max(p.moments().errorBound(), relative * p.moments().mass());
+            evaluations += p.evaluations();
+        }
 
         void add(Segment seg, double[] cuts, LinearDensity density, DoubleUnaryOperator sOf, double relative,
                 long budget) {

@@ -1,5 +1,6 @@
 package org.linemass.engine.pieces.geom;
 
+import org.linemass.engine.integrate.CurveSpeed;
 import org.linemass.engine.integrate.MomentIntegrator;
 import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Segment;
@@ -11,7 +12,8 @@ import org.linemass.tolerance.Tolerances;
  * Lengths, end tangents and parameter grids of segments, accurate enough for drawing checks
  * (tiny segment, gap, bend angle). Straights and circular arcs use closed forms; elliptical arcs
  * and splines use a composite 5-point Gauss-Legendre rule on {@link #SUBDIVISIONS} pieces per
- * knot span, which is exact to well below a micrometre for drawn curves.
+ * knot span ({@link CurveSpeed}, which evaluates a spline's speed from its span polynomials), which
+ * is exact to well below a micrometre for drawn curves.
  */
 public final class Curves {
 
@@ -20,12 +22,6 @@ public final class Curves {
 
     /** Chords per full turn of an arc or ellipse in {@link #polylineParams} (about 11 degrees each). */
     public static final int CHORDS_PER_TURN = 32;
-
-    // 5-point Gauss-Legendre nodes and weights on [-1, 1] (Abramowitz and Stegun 25.4.30).
-    private static final double[] GL_X = {0.0, -0.5384693101056831, 0.5384693101056831,
-        -0.9061798459386640, 0.9061798459386640};
-    private static final double[] GL_W = {0.5688888888888889, 0.4786286704993665, 0.4786286704993665,
-        0.2369268850561891, 0.2369268850561891};
 
     private Curves() {
     }
@@ -47,28 +43,7 @@ public final class Curves {
 
     /** Arc length between two parameters {@code a <= b} by composite Gauss-Legendre. */
     public static double lengthBetween(Segment s, double a, double b) {
-        double[] cuts = spans(s, a, b);
-        double sum = 0;
-        for (int i = 0; i + 1 < cuts.length; i++) {
-            double lo = cuts[i];
-            double hi = cuts[i + 1];
-            for (int k = 0; k < SUBDIVISIONS; k++) {
-                double x0 = lo + (hi - lo) * k / SUBDIVISIONS;
-                double x1 = lo + (hi - lo) * (k + 1) / SUBDIVISIONS;
-                sum += gauss(s, x0, x1);
-            }
-        }
-        return sum;
-    }
-
-    static double gauss(Segment s, double x0, double x1) {
-        double half = 0.5 * (x1 - x0);
-        double mid = 0.5 * (x1 + x0);
-        double acc = 0;
-        for (int i = 0; i < GL_X.length; i++) {
-            acc += GL_W[i] * s.derivative(mid + half * GL_X[i]).norm();
-        }
-        return acc * half;
+        return CurveSpeed.of(s).lengthBetween(a, b, SUBDIVISIONS);
     }
 
     /** {@code a}, the breakpoints strictly inside (a, b), then {@code b}. */

@@ -1,5 +1,6 @@
 package org.linemass.engine.pieces.marks;
 
+import org.linemass.engine.integrate.CurveSpeed;
 import org.linemass.engine.pieces.geom.Curves;
 import org.linemass.geometry.CircularArc;
 import org.linemass.geometry.Segment;
@@ -9,13 +10,19 @@ import org.linemass.geometry.Vec3;
 /**
  * The point at a given arc length along one segment: exact for straights and circular arcs; for
  * other curves, linear interpolation in a table of cumulative lengths at {@link #TABLE} parameter
- * steps (Gauss-Legendre per step). Rigid copies of a curve share their parametrisation, so the
+ * steps (Gauss-Legendre per step, {@link CurveSpeed}), built once per segment. Rigid copies of a curve share their parametrisation, so the
  * interpolation error is the same on both and does not hurt the congruence test.
  */
 final class ArcLength {
 
     /** Parameter steps of the length table for curves without a closed form (no source). */
     static final int TABLE = 64;
+
+    /**
+     * 5-point Gauss-Legendre rules per step (and knot span inside it): a step is 1/64 of the curve,
+     * over which a drawn curve's speed is smooth enough for one (no source).
+     */
+    static final int STEP_RULES = 1;
 
     private final Segment segment;
     private final double length;
@@ -33,10 +40,11 @@ final class ArcLength {
             cumulative = new double[TABLE + 1];
             double a = s.tStart();
             double b = s.tEnd();
+            CurveSpeed speed = CurveSpeed.of(s);
             for (int i = 0; i <= TABLE; i++) {
                 params[i] = a + (b - a) * i / TABLE;
                 if (i > 0) {
-                    cumulative[i] = cumulative[i - 1] + Curves.lengthBetween(s, params[i - 1], params[i]);
+                    cumulative[i] = cumulative[i - 1] + speed.lengthBetween(params[i - 1], params[i], STEP_RULES);
                 }
             }
             this.length = cumulative[TABLE];
