@@ -62,6 +62,11 @@ public class SpanQuadratureBenchmark {
 
     @Setup
     public void build() {
+        curves = sample(kind);
+    }
+
+    /** The sample of {@code kind}: curves drawn from a fixed seed until their spans add up to {@link #SPANS}. */
+    static Segment[] sample(String kind) {
         Random rng = new Random(13);
         java.util.List<Segment> out = new java.util.ArrayList<>();
         int spans = 0;
@@ -100,7 +105,7 @@ public class SpanQuadratureBenchmark {
                 spans += count - 3;
             }
         }
-        curves = out.toArray(new Segment[0]);
+        return out.toArray(new Segment[0]);
     }
 
     /** All the curves of the sample once; JMH divides by the spans. */
