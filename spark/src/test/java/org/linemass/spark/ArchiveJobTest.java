@@ -185,6 +185,31 @@ class ArchiveJobTest {
         assertEquals("linemass-spark: " + in + ": no file name matches *.dwg\n", run.err());
     }
 
+    @Test
+    void job_oneFileTooBig_failedWithoutReading() {
+        Path demo = in.resolve("garden-planter.dxf");
+        Path target = dir.resolve("too-big");
+        LocalSpark.Run run = LocalSpark.job(spark, demo.toString(), "*.dxf", target.toString(),
+                "--max-drawing-bytes", "1000");
+        assertEquals(0, run.code(), run.err());
+        List<Row> rows = spark.read().parquet(target.resolve(Tables.DRAWINGS).toString()).collectAsList();
+        assertEquals(1, rows.size());
+        long bytes = demo.toFile().length();
+        assertEquals(demo + ": " + bytes + " bytes, more than --max-drawing-bytes 1000; not read",
+                rows.get(0).getAs("message"));
+        assertEquals("failed", rows.get(0).getAs("status"));
+        assertEquals(0, spark.read().parquet(target.resolve(Tables.BILL).toString()).count());
+    }
+
+    @Test
+    void job_inputMissing_oneLineAndExitTwo() {
+        LocalSpark.Run run = LocalSpark.job(spark, dir.resolve("no-such-folder").toString(), "*.dxf",
+                dir.resolve("none").toString());
+        assertEquals(2, run.code());
+        assertEquals(1, run.err().lines().count(), run.err());
+        assertTrue(run.err().startsWith("linemass-spark: ") && run.err().contains("no-such-folder"), run.err());
+    }
+
     private static long[] counts(Path tables) {
         String[] names = {Tables.DRAWINGS, Tables.LAYERS, Tables.BILL, Tables.FINDINGS, Tables.COMBINED_BILL};
         long[] n = new long[names.length];
