@@ -13,6 +13,7 @@ import java.util.Map;
 import java.util.TreeMap;
 import java.util.function.Supplier;
 import java.util.function.UnaryOperator;
+import org.apache.spark.api.java.function.ForeachPartitionFunction;
 import org.apache.spark.api.java.function.MapFunction;
 import org.apache.spark.sql.Column;
 import org.apache.spark.sql.DataFrameWriter;
@@ -114,10 +115,15 @@ public final class ArchiveJob {
         MapFunction<Row, Row> tooBig = r -> ResultRows.failed(DrawingAnalysis.displayName(r.getString(0)),
                 r.getString(0), r.getLong(1), DrawingOutcome.FAILED, DrawingAnalysis.displayName(r.getString(0))
                         + ": " + r.getLong(1) + " bytes, more than --max-drawing-bytes " + max + "; not read", 0);
-        Dataset<Row> oversized = files.filter(col("length").gt(max)).select("path", "length")
+        // one task lists the few files over the limit: their rows need no reading
+        Dataset<Row> oversized = files.filter(col("length").gt(max)).select("path", "length").coalesce(1)
                 .map(tooBig, Encoders.row(Tables.ANALYSED));
-        Dataset<Row> all = analysed.union(oversized).persist(StorageLevel.MEMORY_AND_DISK());
+        Dataset<Row> persisted = analysed.union(oversized).persist(StorageLevel.MEMORY_AND_DISK());
         try {
+            // the analysis itself: every drawing once, in the file source's tasks (largest first)
+            persisted.foreachPartition((ForeachPartitionFunction<Row>) rows -> rows.forEachRemaining(r -> { }));
+            // the results are small: the tables are written from a few partitions, not one per task
+            Dataset<Row> all = persisted.coalesce(Math.max(1, 2 * spark.sparkContext().defaultParallelism()));
             Map<String, Long> byStatus = new TreeMap<>();
             for (Row r : all.groupBy("status").count().collectAsList()) {
                 byStatus.put(r.getString(0), r.getLong(1));
@@ -133,7 +139,7 @@ public final class ArchiveJob {
             write(CombinedBill.of(all), options, Tables.COMBINED_BILL);
             return byStatus;
         } finally {
-            all.unpersist();
+            persisted.unpersist();
         }
     }
 
