@@ -121,6 +121,10 @@ final class CheckRun {
         CutSettings cutSettings = plan.settings();
         ImportOptions io = drawing.importOptions();
         AnalysisSettings settings = drawing.settings(ctx.sections());
+        if (common.listNotes) {
+            // every T-junction and crossing note in the reports too, not only a sample
+            settings = settings.withListedNotes(Integer.MAX_VALUE);
+        }
 
         List<DrawingBatch.Done> done;
         DrawingBatch batch = new DrawingBatch(ctx.pipeline(), io, settings, jobs, MemoryGate.forThisHeap(),

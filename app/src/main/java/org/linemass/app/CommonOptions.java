@@ -13,7 +13,8 @@ public final class CommonOptions {
     boolean quiet;
 
     @Option(names = "--list-notes", description = "List every note (T-junctions, crossings, ...) in the console "
-            + "findings table instead of counting them; the file reports always list them.")
+            + "findings table instead of counting them, and every T-junction and crossing in the file reports "
+            + "(by default they list the first 1000 and count the rest).")
     boolean listNotes;
 
     @Option(names = "--imperial", description = "Show lengths in ft and in and masses in lb (JSON stays in SI).")

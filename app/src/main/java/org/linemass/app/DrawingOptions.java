@@ -118,6 +118,18 @@ public final class DrawingOptions {
             + "instancing, pieces and checks are skipped and the reports say so.")
     long maxExpandedSegments = AnalysisSettings.DEFAULT_MAX_EXPANDED_SEGMENTS;
 
+    @Option(names = "--threads", paramLabel = "N", description = "Threads each drawing's joining, checks and "
+            + "pieces may use (default: one per processor, here ${DEFAULT-VALUE}); the reports are the same "
+            + "for any number.")
+    int threads = Runtime.getRuntime().availableProcessors();
+
+    private int threads() throws InputProblem {
+        if (threads < 1) {
+            throw new InputProblem("--threads must be 1 or more, got " + threads);
+        }
+        return threads;
+    }
+
     /** Import options with the unit override, if any, and the resource limits. */
     ImportOptions importOptions() throws InputProblem {
         try {
@@ -193,7 +205,8 @@ public final class DrawingOptions {
             // the settings check the tolerances themselves (the gap limit covers the join tolerance)
             return new AnalysisSettings(Optional.ofNullable(joinM), Optional.ofNullable(gapLimitM), Optional.empty(),
                     AnalysisSettings.defaults(table).integrationRelative(), mirrorAlike, onlyLayers, skipped(),
-                    hiddenLayers, table, rules, densities, expansionLimit, joins, standard);
+                    hiddenLayers, table, rules, densities, expansionLimit, joins, standard,
+                    AnalysisSettings.DEFAULT_LISTED_NOTES, threads());
         } catch (IllegalArgumentException e) {
             throw new InputProblem("bad --join or --gap-limit: " + e.getMessage());
         }

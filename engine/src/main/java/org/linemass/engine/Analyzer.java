@@ -90,7 +90,8 @@ public final class Analyzer {
         watch.entering("expanding blocks and adding up layers");
         return analyze(drawing, settings, (world, tol, lookup, mirror) -> {
             watch.entering("joining and checking pieces");
-            PieceAnalysis pa = PieceAnalyzer.analyze(world, tol, lookup, mirror, settings.layerJoins());
+            PieceAnalysis pa = PieceAnalyzer.analyze(world, tol, lookup, mirror, settings.layerJoins(),
+                    settings.listedNotes(), settings.threads());
             watch.entering("grouping marks and writing totals");
             return pa;
         });
@@ -126,7 +127,7 @@ public final class Analyzer {
                         tol.integrationRelative());
                 PieceAnalysis pa = stage.analyze(world.get(), tol, lookup, settings.mirrorGrouping());
                 removed = plus(removedMoments(pa.removed(), tol), coincident.removedByLayer());
-                pieces = PieceAssembler.assemble(pa, plan, tol, settings.bendStandard());
+                pieces = PieceAssembler.assemble(pa, plan, tol, settings.bendStandard(), settings.threads());
                 stageFindings = new ArrayList<>(coincident.findings());
                 stageFindings.addAll(pa.findings());
                 Map<Integer, List<Segment>> ordered = new TreeMap<>();

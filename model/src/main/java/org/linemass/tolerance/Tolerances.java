@@ -193,6 +193,14 @@ public record Tolerances(double joinM, double gapLimitM, double noiseM, double g
      */
     public static final double CHECK_LENGTH_RELATIVE = 1e-9;
 
+    /**
+     * Relative slack (dimensionless) between a piece's length by the piece stage's fixed rule and by
+     * the grouping's arc-length tables, when grouping decides from the first which pieces need the
+     * second at all: both are accurate to far better (well below a micrometre on metres of drawn
+     * curve). Common practice, no source.
+     */
+    public static final double GROUP_LENGTH_SCREEN_RELATIVE = 1e-5;
+
     // ---- bends, coils and schedule shapes (engine.bender, engine.shape; fixed, not user-set) ----
 
     /**

@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import org.linemass.engine.error.AnalysisException;
+import org.linemass.engine.parallel.IndexedWork;
 import org.linemass.engine.field.FieldDensity;
 import org.linemass.engine.integrate.LinearDensity;
 import org.linemass.engine.integrate.MomentIntegrator;
@@ -15,6 +16,7 @@ import org.linemass.engine.moments.MomentsAccumulator;
 import org.linemass.engine.piece.Piece;
 import org.linemass.engine.pieces.PieceAnalysis;
 import org.linemass.engine.result.MarkResult;
+import org.linemass.engine.result.PieceForm;
 import org.linemass.engine.result.PieceResult;
 import org.linemass.engine.result.SourceRef;
 import org.linemass.engine.section.Section;
@@ -72,16 +74,30 @@ public final class PieceAssembler {
     /** As {@link #assemble(PieceAnalysis, MaterialPlan, Tolerances)}, schedule radii checked by {@code standard}. */
     public static Output assemble(PieceAnalysis analysis, MaterialPlan plan, Tolerances tol, BendStandard standard)
             throws AnalysisException {
+        return assemble(analysis, plan, tol, standard, 1);
+    }
+
+    /**
+     * As {@link #assemble(PieceAnalysis, MaterialPlan, Tolerances, BendStandard)}, measuring pieces and
+     * working out their forms on up to {@code threads} threads; the output is the same for any number.
+     */
+    public static Output assemble(PieceAnalysis analysis, MaterialPlan plan, Tolerances tol, BendStandard standard,
+            int threads) throws AnalysisException {
         double relative = tol.integrationRelative();
-        List<Computed> computed = new ArrayList<>();
         List<Piece> pieces = analysis.pieces();
-        for (int i = 0; i < pieces.size(); i++) {
+        // every layer's material looked up first, in piece order (the plan fills a cache; a bad
+        // expression is reported for the first piece that needs it), so the jobs below only read it
+        for (Piece p : pieces) {
+            plan.forLayer(p.layer());
+        }
+        List<Computed> computed = new ArrayList<>(IndexedWork.map(threads, pieces.size(), i -> {
             Piece p = pieces.get(i);
             LayerMaterial mat = plan.forLayer(p.layer());
             Moments lm = lengthMoments(p.segments(), relative);
             Moments mass = null;
             if (mat.field().isPresent()) {
-                mass = fieldMass(p.segments(), new FieldDensity(mat.field().get()), relative);
+                // an expression keeps its variables while it is evaluated: one copy per job
+                mass = fieldMass(p.segments(), new FieldDensity(mat.field().get().copy()), relative);
             } else if (mat.section().isPresent()) {
                 mass = lm.scaledDensity(mat.section().get().kgPerM());
             }
@@ -89,8 +105,8 @@ public final class PieceAssembler {
                 // beyond the range of numbers: the layer's overflow finding says so; no mass for the piece
                 mass = null;
             }
-            computed.add(new Computed(i, p, lm, mass, mat.section()));
-        }
+            return new Computed(i, p, lm, mass, mat.section());
+        }));
         computed.sort(Comparator.comparing((Computed c) -> c.piece().layer())
                 .thenComparingDouble(c -> c.length().centroid().x())
                 .thenComparingDouble(c -> c.length().centroid().y())
@@ -128,6 +144,16 @@ public final class PieceAssembler {
                     massKnown ? first.mass().mass() : null, lengthTotal, massKnown ? massTotal : null,
                     first.piece().bends().size(), ids));
         }
+        // the forms (bends, runs, shape) of each piece, side by side; the rest in piece order
+        List<PieceForm> forms = IndexedWork.map(threads, computed.size(), k -> {
+            Computed c = computed.get(k);
+            if (!analysis.runs().isEmpty()) {
+                return PieceForms.ofSection(c.piece().segments(), c.piece().closed(), analysis.runs().get(c.original()),
+                        c.section().orElse(null), c.length().mass(), tol.angleRad(), tol.joinM(), standard);
+            }
+            return PieceForms.ofSection(c.piece().segments(), c.piece().closed(), c.section().orElse(null),
+                    c.length().mass(), tol.angleRad(), tol.joinM(), standard);
+        });
         List<PieceResult> results = new ArrayList<>();
         Map<String, Integer> perLayer = new TreeMap<>();
         Map<String, MomentsAccumulator> fieldMass = new TreeMap<>();
@@ -145,9 +171,7 @@ public final class PieceAssembler {
                     c.length().mass(), c.mass() == null ? null : c.mass().mass(),
                     c.mass() == null ? c.length().centroid() : c.mass().centroid(), c.length().inertia(),
                     c.mass() == null ? null : c.mass().inertia(), start, end, p.closed(), p.segments().size(),
-                    markOf[k + 1], p.bends(), sources, c.length().errorBound(),
-                    PieceForms.ofSection(p.segments(), p.closed(), c.section().orElse(null),
-                            c.length().mass(), tol.angleRad(), tol.joinM(), standard)));
+                    markOf[k + 1], p.bends(), sources, c.length().errorBound(), forms.get(k)));
         }
         Map<String, Moments> fm = new TreeMap<>();
         fieldMass.forEach((l, a) -> fm.put(l, a.result()));

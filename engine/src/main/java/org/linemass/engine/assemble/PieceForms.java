@@ -55,12 +55,29 @@ public final class PieceForms {
                 angleRad, joinM, standard);
     }
 
+    /**
+     * As {@link #ofSection(List, boolean, Section, double, double, double, BendStandard)} from the
+     * piece's runs as {@link RunSplitter#split} gave them for these segments and tolerances.
+     */
+    public static PieceForm ofSection(List<Segment> segments, boolean closed, List<FormRun> runs, Section section,
+            double lengthM, double angleRad, double joinM, BendStandard standard) {
+        if (segments.isEmpty()) {
+            return new PieceForm(PieceForm.NONE.program(), List.of(), null, BendLimits.of(section));
+        }
+        return of(closed, runs, section == null ? null : section.diameterM(), BendLimits.of(section), lengthM,
+                standard);
+    }
+
     private static PieceForm of(List<Segment> segments, boolean closed, Double diameterM, BendLimit limit,
             double lengthM, double angleRad, double joinM, BendStandard standard) {
         if (segments.isEmpty()) {
             return new PieceForm(PieceForm.NONE.program(), List.of(), null, limit);
         }
-        List<FormRun> runs = RunSplitter.split(segments, closed, angleRad, joinM);
+        return of(closed, RunSplitter.split(segments, closed, angleRad, joinM), diameterM, limit, lengthM, standard);
+    }
+
+    private static PieceForm of(boolean closed, List<FormRun> runs, Double diameterM, BendLimit limit,
+            double lengthM, BendStandard standard) {
         List<Coil> coils = new ArrayList<>();
         for (FormRun r : runs) {
             if (r instanceof FormRun.Wind w) {

@@ -30,6 +30,9 @@ import org.linemass.engine.pieces.join.JoinClasses;
 import org.linemass.engine.pieces.join.JoinResult;
 import org.linemass.engine.pieces.join.Joiner;
 import org.linemass.engine.pieces.marks.Grouper;
+import org.linemass.engine.bender.FormRun;
+import org.linemass.engine.bender.RunSplitter;
+import org.linemass.engine.parallel.IndexedWork;
 import org.linemass.engine.result.Bend;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.section.LayerJoin;
@@ -75,6 +78,17 @@ public final class PieceAnalyzer {
      */
     public static PieceAnalysis analyze(List<Segment> world, Tolerances tol, SectionLookup sections,
             boolean mirrorGrouping, List<LayerJoin> joins) {
+        return analyze(world, tol, sections, mirrorGrouping, joins, ContactCheck.MAX_LISTED, 1);
+    }
+
+    /**
+     * As {@link #analyze(List, Tolerances, SectionLookup, boolean, List)}, listing at most
+     * {@code listedNotes} T-junction and crossing notes one by one (the rest counted in the totals and
+     * one {@code limit_reached} note), on up to {@code threads} threads: the analysis is the same for
+     * any number of threads.
+     */
+    public static PieceAnalysis analyze(List<Segment> world, Tolerances tol, SectionLookup sections,
+            boolean mirrorGrouping, List<LayerJoin> joins, int listedNotes, int threads) {
         Objects.requireNonNull(world, "world segments");
         Objects.requireNonNull(tol, "tolerances");
         Objects.requireNonNull(sections, "section lookup");
@@ -83,7 +97,12 @@ public final class PieceAnalyzer {
         SegmentIndex index = new SegmentIndex(world, tol.joinM());
         // every layer: welds between layers (cross wires on a frame layer) count as contacts
         CandidatePairs pairs = CandidatePairs.of(index, world.size(), (i, j) -> true);
-        DedupResult dedup = Deduplicator.run(world, pairs, tol, cache);
+        List<Double> worldLength = IndexedWork.map(threads, world.size(), i -> Curves.length(world.get(i)));
+        double[] lengthOf = new double[world.size()];
+        for (int i = 0; i < lengthOf.length; i++) {
+            lengthOf[i] = worldLength.get(i);
+        }
+        DedupResult dedup = Deduplicator.run(world, lengthOf, pairs, tol, cache);
         List<Finding> findings = new ArrayList<>(dedup.findings());
         if (pairs.truncated()) {
             findings.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
@@ -94,18 +113,27 @@ public final class PieceAnalyzer {
 
         List<Segment> joinable = new ArrayList<>(dedup.kept().size());
         int[] origin = new int[dedup.kept().size()];
+        // each kept segment measured once; pieces, gaps and grouping read these
+        double[] joinableLength = new double[dedup.kept().size()];
+        List<Double> pieceLength = new ArrayList<>();
+        List<List<FormRun>> pieceRuns = new ArrayList<>();
         int[] keptOrigin = dedup.origin();
         List<Piece> pieces = new ArrayList<>();
         for (int k = 0; k < dedup.kept().size(); k++) {
             Segment s = dedup.kept().get(k);
-            double len = Curves.length(s);
+            // a segment kept whole was measured above; a trimmed or split one is measured here
+            double len = s == world.get(keptOrigin[k]) ? lengthOf[keptOrigin[k]] : Curves.length(s);
             Finding f = SizeCheck.check(s, len, tol);
             if (f != null) {
                 findings.add(f);
                 if (len > tol.noiseM()) {
-                    pieces.add(piece(List.of(s), false, cache, tol, findings, classes));
+                    Built b = piece(List.of(s), false, cache, tol, findings, classes);
+                    pieces.add(b.piece());
+                    pieceRuns.add(b.runs());
+                    pieceLength.add(len);
                 }
             } else {
+                joinableLength[joinable.size()] = len;
                 origin[joinable.size()] = keptOrigin[k];
                 joinable.add(s);
             }
@@ -116,11 +144,24 @@ public final class PieceAnalyzer {
         findings.addAll(joined.findings());
         double[] chainLength = new double[joined.chains().size()];
         for (int c = 0; c < chainLength.length; c++) {
-            Chain chain = joined.chains().get(c);
-            for (Segment s : chain.segments()) {
-                chainLength[c] += Curves.length(s);
+            for (int i : joined.chains().get(c).indices()) {
+                chainLength[c] += joinableLength[i];
             }
-            pieces.add(piece(chain.segments(), chain.closed(), cache, tol, findings, classes));
+        }
+        // the caches are filled here, in order, so the jobs below only read them
+        for (Segment s : joinable) {
+            cache.forLayer(s.source().layer());
+            classes.ruleOf(s.source().layer());
+        }
+        List<Built> built = IndexedWork.map(threads, chainLength.length, c -> {
+            Chain chain = joined.chains().get(c);
+            return piece(chain.segments(), chain.closed(), cache, tol, new ArrayList<>(0), classes);
+        });
+        for (int c = 0; c < chainLength.length; c++) {
+            findings.addAll(built.get(c).findings());
+            pieces.add(built.get(c).piece());
+            pieceRuns.add(built.get(c).runs());
+            pieceLength.add(chainLength[c]);
         }
         boolean[] gapEnds = new boolean[joined.freeEnd().length];
         findings.addAll(GapCheck.check(joinable, layerOf, joined.freeEnd(), joined.endPoint(),
@@ -129,28 +170,47 @@ public final class PieceAnalyzer {
                 java.util.Arrays.copyOf(origin, joinable.size()), tol.joinM());
         findings.addAll(TeeGapCheck.check(joinable, joinIndex, joined.freeEnd(), joined.endPoint(), gapEnds, tol));
         findings.addAll(ContactCheck.check(joinable, joinIndex, pairs, layerOf, joined.freeEnd(), joined.chainOfSegment(),
-                tol));
+                tol, listedNotes, threads));
 
-        pieces.sort(PIECE_ORDER);
+        Integer[] order = new Integer[pieces.size()];
+        for (int i = 0; i < order.length; i++) {
+            order[i] = i;
+        }
+        List<Piece> unsorted = pieces;
+        java.util.Arrays.sort(order, (a, b) -> PIECE_ORDER.compare(unsorted.get(a), unsorted.get(b)));
+        List<Piece> sorted = new ArrayList<>(pieces.size());
+        double[] sortedLength = new double[pieces.size()];
+        List<List<FormRun>> sortedRuns = new ArrayList<>(pieces.size());
+        for (int i = 0; i < order.length; i++) {
+            sorted.add(pieces.get(order[i]));
+            sortedRuns.add(pieceRuns.get(order[i]));
+            sortedLength[i] = pieceLength.get(order[i]);
+        }
+        pieces = sorted;
         List<String> keys = new ArrayList<>(pieces.size());
         for (Piece p : pieces) {
             keys.add(cache.forLayer(p.layer()).map(s -> "section:" + s.id()).orElse("layer:" + p.layer()));
         }
-        List<List<Integer>> groups = Grouper.group(pieces, keys, tol, mirrorGrouping);
+        List<List<Integer>> groups = Grouper.group(pieces, keys, tol, mirrorGrouping, sortedLength, threads);
         findings.sort(Findings.ORDER);
-        return new PieceAnalysis(pieces, findings, dedup.removed(), groups);
+        return new PieceAnalysis(pieces, findings, dedup.removed(), groups, sortedRuns);
     }
 
-    private static Piece piece(List<Segment> segments, boolean closed, SectionCache cache, Tolerances tol,
+    /** A piece and the findings made while building it. */
+    private record Built(Piece piece, List<Finding> findings, List<FormRun> runs) {
+    }
+
+    private static Built piece(List<Segment> segments, boolean closed, SectionCache cache, Tolerances tol,
             List<Finding> findings, JoinClasses classes) {
-        String layer = classes.leadLayer(segments, Curves::length);
         List<String> spanned = JoinClasses.layers(segments);
+        String layer = spanned.size() == 1 ? spanned.get(0) : classes.leadLayer(segments, Curves::length);
         if (spanned.size() > 1) {
             findings.add(AcrossLayers.finding(segments, spanned, layer, classes.ruleOf(segments.get(0).source()
                     .layer())));
         }
         Optional<Section> section = cache.forLayer(layer);
-        List<BendFinder.Located> located = BendFinder.located(segments, closed, section, tol);
+        List<FormRun> runs = RunSplitter.split(segments, closed, tol.angleRad(), tol.joinM());
+        List<BendFinder.Located> located = BendFinder.located(runs, section);
         if (!located.isEmpty() && section.isPresent()) {
             findings.addAll(BendCheck.check(layer, located, section.get()));
         }
@@ -158,7 +218,7 @@ public final class PieceAnalyzer {
         for (BendFinder.Located b : located) {
             bends.add(b.bend());
         }
-        return new Piece(layer, segments, closed, bends);
+        return new Built(new Piece(layer, segments, closed, bends), findings, runs);
     }
 
     /** Layer, then start point, then end point, then segment count. */

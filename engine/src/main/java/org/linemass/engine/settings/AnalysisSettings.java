@@ -34,12 +34,20 @@ import org.linemass.tolerance.Tolerances;
  * @param maxExpandedSegments most world segments expanded for joining and checks; beyond it those stages are skipped and reports say so
  * @param layerJoins layers whose pieces join one another end to end (empty: ends join on one layer only)
  * @param bendStandard whose minimum bend radii the schedule checks bars against
+ * @param listedNotes most T-junction and crossing notes listed one by one (the rest are counted)
+ * @param threads threads the piece stage may use (1 or more); the result is the same for any number
  */
 public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimitM, Optional<Double> groupM,
         double integrationRelative, boolean mirrorGrouping, List<String> includeLayers,
         List<String> excludeLayers, boolean includeHiddenLayers, SectionTable sections,
         List<LayerAssignment> assignments, Map<String, String> densityExpressions, long maxExpandedSegments,
-        List<LayerJoin> layerJoins, BendStandard bendStandard) {
+        List<LayerJoin> layerJoins, BendStandard bendStandard, int listedNotes, int threads) {
+
+    /**
+     * T-junction and crossing notes listed by default: a sample big enough to find them in a drawing,
+     * small enough that a welded mesh's million welds do not make the report many times the drawing.
+     */
+    public static final int DEFAULT_LISTED_NOTES = 1000;
 
     public static final long DEFAULT_MAX_EXPANDED_SEGMENTS = 2_000_000L;
 
@@ -59,6 +67,23 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
         if (bendStandard == null) {
             throw new IllegalArgumentException("bend standard must be given (BendStandard.AUTO by default)");
         }
+        if (listedNotes < 0) {
+            throw new IllegalArgumentException("listed notes must not be negative, got " + listedNotes);
+        }
+        if (threads < 1) {
+            throw new IllegalArgumentException("threads must be 1 or more, got " + threads);
+        }
+    }
+
+    /** The settings listing {@link #DEFAULT_LISTED_NOTES} notes, on every core the machine has. */
+    public AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimitM, Optional<Double> groupM,
+            double integrationRelative, boolean mirrorGrouping, List<String> includeLayers,
+            List<String> excludeLayers, boolean includeHiddenLayers, SectionTable sections,
+            List<LayerAssignment> assignments, Map<String, String> densityExpressions, long maxExpandedSegments,
+            List<LayerJoin> layerJoins, BendStandard bendStandard) {
+        this(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers, excludeLayers,
+                includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments, layerJoins,
+                bendStandard, DEFAULT_LISTED_NOTES, Runtime.getRuntime().availableProcessors());
     }
 
     /** The settings with the bend standard that follows the bar size ({@link BendStandard#AUTO}). */
@@ -92,7 +117,7 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
     public AnalysisSettings unfiltered() {
         return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, List.of(),
                 List.of(), includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments,
-                layerJoins, bendStandard);
+                layerJoins, bendStandard, listedNotes, threads);
     }
 
     /**
@@ -120,20 +145,34 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
     public AnalysisSettings withAssignments(List<LayerAssignment> a) {
         return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers,
                 excludeLayers, includeHiddenLayers, sections, a, densityExpressions, maxExpandedSegments, layerJoins,
-                bendStandard);
+                bendStandard, listedNotes, threads);
     }
 
     /** The same settings with {@code joins} as the layer joins. */
     public AnalysisSettings withLayerJoins(List<LayerJoin> joins) {
         return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers,
                 excludeLayers, includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments,
-                joins, bendStandard);
+                joins, bendStandard, listedNotes, threads);
     }
 
     /** The same settings with {@code standard} for the schedule's radius check. */
     public AnalysisSettings withBendStandard(BendStandard standard) {
         return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers,
                 excludeLayers, includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments,
-                layerJoins, standard);
+                layerJoins, standard, listedNotes, threads);
+    }
+
+    /** The same settings listing at most {@code notes} T-junction and crossing notes one by one. */
+    public AnalysisSettings withListedNotes(int notes) {
+        return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers,
+                excludeLayers, includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments,
+                layerJoins, bendStandard, notes, threads);
+    }
+
+    /** The same settings with the piece stage on {@code n} threads (the result does not change). */
+    public AnalysisSettings withThreads(int n) {
+        return new AnalysisSettings(joinM, gapLimitM, groupM, integrationRelative, mirrorGrouping, includeLayers,
+                excludeLayers, includeHiddenLayers, sections, assignments, densityExpressions, maxExpandedSegments,
+                layerJoins, bendStandard, listedNotes, n);
     }
 }

@@ -41,9 +41,14 @@ public final class BendFinder {
      */
     public static List<Located> located(List<Segment> path, boolean closed, Optional<Section> section,
             Tolerances tol) {
+        return located(RunSplitter.split(path, closed, tol.angleRad(), tol.joinM()), section);
+    }
+
+    /** As {@link #located(List, boolean, Optional, Tolerances)} from the path's runs, already split. */
+    public static List<Located> located(List<FormRun> runs, Optional<Section> section) {
         Double halfDiameter = section.map(Section::diameterM).map(d -> d / 2).orElse(null);
         List<Located> out = new ArrayList<>();
-        for (FormRun run : RunSplitter.split(path, closed, tol.angleRad(), tol.joinM())) {
+        for (FormRun run : runs) {
             if (run instanceof FormRun.Turn t) {
                 Double r = t.circleRadiusM() != null ? t.circleRadiusM() : t.minRadiusM();
                 Double inside = r == null || halfDiameter == null ? r : Double.valueOf(r - halfDiameter);

@@ -10,6 +10,7 @@ import org.linemass.engine.pieces.geom.PlanarCrossing;
 import org.linemass.engine.pieces.index.BoxIndex;
 import org.linemass.engine.pieces.index.CandidatePairs;
 import org.linemass.engine.pieces.index.DerivedIndex;
+import org.linemass.engine.parallel.IndexedWork;
 import org.linemass.engine.result.Finding;
 import org.linemass.engine.result.FindingKind;
 import org.linemass.engine.result.Severity;
@@ -69,8 +70,18 @@ public final class ContactCheck {
      */
     public static List<Finding> check(List<Segment> segments, DerivedIndex index, CandidatePairs pairs,
             int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol) {
-        return check(segments, index, pairs, layerOf, free, chainOf, tol, MAX_LISTED, MAX_COUNTED,
-                EndSearchBudget.MAX_CANDIDATES);
+        return check(segments, index, pairs, layerOf, free, chainOf, tol, MAX_LISTED, 1);
+    }
+
+    /**
+     * As {@link #check(List, DerivedIndex, CandidatePairs, int[], boolean[], int[], Tolerances)}
+     * listing at most {@code maxListed} T-junction and crossing notes, on {@code threads} threads
+     * (the findings are the same for any number).
+     */
+    public static List<Finding> check(List<Segment> segments, DerivedIndex index, CandidatePairs pairs,
+            int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol, int maxListed, int threads) {
+        return check(segments, index, pairs, layerOf, free, chainOf, tol, maxListed, MAX_COUNTED,
+                EndSearchBudget.MAX_CANDIDATES, threads);
     }
 
     /**
@@ -82,6 +93,22 @@ public final class ContactCheck {
     static List<Finding> check(List<Segment> segments, DerivedIndex index, CandidatePairs pairs,
             int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol, int maxListed, int maxCounted,
             long maxEndCandidates) {
+        return check(segments, index, pairs, layerOf, free, chainOf, tol, maxListed, maxCounted, maxEndCandidates,
+                1);
+    }
+
+    /** Free ends, or candidate pairs, worked out side by side before their results are taken in order. */
+    static final int BLOCK = 1 << 14;
+
+    private record Tee(Hit hit, long spent) {
+    }
+
+    private record Touch(int a, int b, Vec3 at) {
+    }
+
+    static List<Finding> check(List<Segment> segments, DerivedIndex index, CandidatePairs pairs,
+            int[] layerOf, boolean[] free, int[] chainOf, Tolerances tol, int maxListed, int maxCounted,
+            long maxEndCandidates, int threads) {
         if (maxListed < 0 || maxCounted < 0) {
             throw new IllegalArgumentException("limits must not be negative: listed " + maxListed + ", counted "
                     + maxCounted);
@@ -94,18 +121,30 @@ public final class ContactCheck {
         EndSearchBudget budget = new EndSearchBudget(maxEndCandidates);
         long ends = 0;
         long endsLeft = 0;
-        for (int e = 0; e < free.length; e++) {
-            if (free[e]) {
+        int[] freeEnds = freeEnds(free);
+        // each end's search is worked out on its own (side by side), then taken in end order against the
+        // budget, exactly as one search after another would spend it
+        for (int lo = 0; lo < freeEnds.length; lo += BLOCK) {
+            int hi = Math.min(freeEnds.length, lo + BLOCK);
+            if (budget.exhausted()) {
+                ends += hi - lo;
+                endsLeft += hi - lo;
+                continue;
+            }
+            final int base = lo;
+            List<Tee> found = IndexedWork.map(threads, hi - lo,
+                    k -> tJunction(segments, index, freeEnds[base + k], j));
+            for (Tee t : found) {
                 ends++;
                 if (budget.exhausted()) {
                     endsLeft++;
                     continue;
                 }
-                Hit h = tJunction(segments, layerOf, index, e, j, budget);
-                if (h != null) {
+                budget.spend(t.spent());
+                if (t.hit() != null) {
                     tees[0]++;
                     if (tees[0] + crossings[0] <= maxListed) {
-                        hits.add(h);
+                        hits.add(t.hit());
                     } else {
                         tees[1]++;
                     }
@@ -113,38 +152,44 @@ public final class ContactCheck {
             }
         }
         ContactPlaces seen = new ContactPlaces();
-        boolean[] stopped = {false};
-        pairs.forEach((oi, oj) -> index.derivedOf(oi, ii -> index.derivedOf(oj, k -> {
-            if (stopped[0] || ii == k || !index.box(ii).intersects(index.box(k))) {
-                return;
-            }
-            for (Vec3 at : crossings(segments.get(ii), segments.get(k), 2 * ii, 2 * k, free, j)) {
-                if (seen.size() == maxCounted) {
-                    stopped[0] = true;
-                    return;
-                }
-                int ca = Math.min(chainOf[ii], chainOf[k]);
-                int cb = Math.max(chainOf[ii], chainOf[k]);
-                if (!seen.addIfNew(ca, cb, at, j)) {
-                    continue;
-                }
-                Hit h = new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, at,
-                        Math.min(ii, k), Math.max(ii, k));
-                if (ca == cb) {
-                    hits.add(h);
-                } else {
-                    crossings[0]++;
-                    if (tees[0] + crossings[0] <= maxListed) {
+        boolean stopped = false;
+        for (int lo = 0; lo < pairs.size() && !stopped; lo += BLOCK) {
+            final int base = lo;
+            List<List<Touch>> touches = IndexedWork.map(threads, Math.min(pairs.size(), lo + BLOCK) - lo,
+                    k -> touches(segments, index, pairs.first(base + k), pairs.second(base + k), free, j));
+            for (List<Touch> list : touches) {
+                for (Touch t : list) {
+                    if (seen.size() == maxCounted) {
+                        stopped = true;
+                        break;
+                    }
+                    int ca = Math.min(chainOf[t.a()], chainOf[t.b()]);
+                    int cb = Math.max(chainOf[t.a()], chainOf[t.b()]);
+                    if (!seen.addIfNew(ca, cb, t.at(), j)) {
+                        continue;
+                    }
+                    Hit h = new Hit(ca == cb ? FindingKind.SELF_CROSSING : FindingKind.CROSSING, t.at(),
+                            Math.min(t.a(), t.b()), Math.max(t.a(), t.b()));
+                    if (ca == cb) {
                         hits.add(h);
                     } else {
-                        crossings[1]++;
+                        crossings[0]++;
+                        if (tees[0] + crossings[0] <= maxListed) {
+                            hits.add(h);
+                        } else {
+                            crossings[1]++;
+                        }
                     }
                 }
+                if (stopped) {
+                    break;
+                }
             }
-        })));
+        }
+        boolean[] stoppedFlag = {stopped};
         // pairs beyond the candidate-pair limit were never looked at: then the totals are lower bounds too
         String totals = String.format(Locale.ROOT, " Drawing total: %s%d T-junction%s and %d crossing%s.",
-                stopped[0] || pairs.truncated() || endsLeft > 0 ? "at least " : "", tees[0],
+                stoppedFlag[0] || pairs.truncated() || endsLeft > 0 ? "at least " : "", tees[0],
                 tees[0] == 1 ? "" : "s", crossings[0], crossings[0] == 1 ? "" : "s");
         List<Finding> out = new ArrayList<>(hits.size() + 2);
         for (Hit h : hits) {
@@ -178,7 +223,7 @@ public final class ContactCheck {
                             tees[1] == 1 ? "" : "s", crossings[1], crossings[1] == 1 ? "" : "s", maxListed)));
         }
         out.addAll(budget.finding("T-junctions", endsLeft, ends));
-        if (stopped[0]) {
+        if (stoppedFlag[0]) {
             out.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
                     String.format(Locale.ROOT, "more than %d places where pieces touch or cross: the search for"
                             + " crossings stopped there, so the T-junction and crossing totals are lower bounds and"
@@ -187,17 +232,32 @@ public final class ContactCheck {
         return out;
     }
 
-    private static Hit tJunction(List<Segment> segments, int[] layerOf, BoxIndex index, int end, double tol,
-            EndSearchBudget budget) {
+    private static int[] freeEnds(boolean[] free) {
+        int m = 0;
+        for (boolean f : free) {
+            m += f ? 1 : 0;
+        }
+        int[] out = new int[m];
+        int k = 0;
+        for (int e = 0; e < free.length; e++) {
+            if (free[e]) {
+                out[k++] = e;
+            }
+        }
+        return out;
+    }
+
+    /** The T-junction at free end {@code end}, if any, and the candidates looked at. */
+    private static Tee tJunction(List<Segment> segments, BoxIndex index, int end, double tol) {
         int own = end >> 1;
         Segment s = segments.get(own);
         Vec3 p = (end & 1) == 0 ? s.start() : s.end();
         org.linemass.geometry.Box3 box = new org.linemass.geometry.Box3(p, p).expandedBy(tol);
         double[] best = {Double.POSITIVE_INFINITY};
         int[] who = {-1};
-        Vec3[] at = {null};
+        long[] spent = {0};
         index.query(box, k -> {
-            budget.spend();
+            spent[0]++;
             if (k == own) {
                 return;
             }
@@ -209,10 +269,24 @@ public final class ContactCheck {
             if (ct.distance() < best[0] || (ct.distance() == best[0] && k < who[0])) {
                 best[0] = ct.distance();
                 who[0] = k;
-                at[0] = ct.pa();
             }
         });
-        return who[0] < 0 ? null : new Hit(FindingKind.T_JUNCTION, p, own, who[0]);
+        return new Tee(who[0] < 0 ? null : new Hit(FindingKind.T_JUNCTION, p, own, who[0]), spent[0]);
+    }
+
+    /** The places where the derived segments of input pair (oi, oj) cross, in the order a loop finds them. */
+    private static List<Touch> touches(List<Segment> segments, DerivedIndex index, int oi, int oj, boolean[] free,
+            double tol) {
+        List<Touch> out = new ArrayList<>(0);
+        index.derivedOf(oi, ii -> index.derivedOf(oj, k -> {
+            if (ii == k || !index.box(ii).intersects(index.box(k))) {
+                return;
+            }
+            for (Vec3 at : crossings(segments.get(ii), segments.get(k), 2 * ii, 2 * k, free, tol)) {
+                out.add(new Touch(ii, k, at));
+            }
+        }));
+        return out.isEmpty() ? List.of() : out;
     }
 
     /** Where a and b cross without a shared vertex (possibly several places for curves). */

@@ -35,6 +35,11 @@ final class EndSearchBudget {
         spent++;
     }
 
+    /** Counts {@code n} candidates looked at. */
+    void spend(long n) {
+        spent += n;
+    }
+
     /** True once more than the limit was looked at. */
     boolean exhausted() {
         return spent > limit;

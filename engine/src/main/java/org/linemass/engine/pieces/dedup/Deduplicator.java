@@ -47,12 +47,21 @@ public final class Deduplicator {
      */
     public static DedupResult run(List<Segment> segments, CandidatePairs pairs, Tolerances tol,
             SectionCache sections) {
-        double tolM = tol.joinM();
-        int n = segments.size();
-        double[] length = new double[n];
-        for (int i = 0; i < n; i++) {
+        double[] length = new double[segments.size()];
+        for (int i = 0; i < length.length; i++) {
             length[i] = Curves.length(segments.get(i));
         }
+        return run(segments, length, pairs, tol, sections);
+    }
+
+    /**
+     * As {@link #run(List, CandidatePairs, Tolerances, SectionCache)} given each segment's length
+     * ({@link Curves#length}).
+     */
+    public static DedupResult run(List<Segment> segments, double[] length, CandidatePairs pairs, Tolerances tol,
+            SectionCache sections) {
+        double tolM = tol.joinM();
+        int n = segments.size();
         UnionFind uf = new UnionFind(n);
         boolean[] any = new boolean[n];
         pairs.forEach((i, j) -> {

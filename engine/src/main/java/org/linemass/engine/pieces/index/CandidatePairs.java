@@ -72,6 +72,16 @@ public final class CandidatePairs {
         return pairs.length;
     }
 
+    /** The smaller segment number of pair {@code p} (pairs in the order they were found). */
+    public int first(int p) {
+        return (int) (pairs[p] >>> 32);
+    }
+
+    /** The larger segment number of pair {@code p}. */
+    public int second(int p) {
+        return (int) pairs[p];
+    }
+
     public void forEach(Visitor v) {
         for (long p : pairs) {
             v.pair((int) (p >>> 32), (int) p);

@@ -5,6 +5,10 @@ import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.linemass.engine.integrate.MomentIntegrator;
+import org.linemass.engine.parallel.IndexedWork;
+import org.linemass.engine.pieces.geom.Curves;
+import org.linemass.geometry.Segment;
 import org.linemass.tolerance.Tolerances;
 import org.linemass.engine.piece.Piece;
 
@@ -59,28 +63,69 @@ public final class Grouper {
      */
     public static List<List<Integer>> group(List<Piece> pieces, List<String> sectionKeys, Tolerances tol,
             boolean mirror) {
-        List<PieceShape> shapes = new ArrayList<>(pieces.size());
-        for (Piece p : pieces) {
-            shapes.add(new PieceShape(p, tol.angleRad(), tol.joinM()));
+        double[] approx = new double[pieces.size()];
+        for (int i = 0; i < approx.length; i++) {
+            for (Segment s : pieces.get(i).segments()) {
+                approx[i] += Curves.length(s);
+            }
+        }
+        return group(pieces, sectionKeys, tol, mirror, approx, 1);
+    }
+
+    /**
+     * As {@link #group(List, List, Tolerances, boolean)} given each piece's length as the piece
+     * stage measured it ({@link Curves#length} per segment). Only pieces whose bucket holds another
+     * piece of about the same length (within the length window plus
+     * {@link Tolerances#GROUP_LENGTH_SCREEN_RELATIVE} of either length) get the arc-length tables of
+     * a full comparison; any other piece cannot match and is a group of its own, exactly as the full
+     * comparison would make it (it would neither be compared nor be a leader within anyone's
+     * window). The arc-length tables are built on up to {@code threads} threads; the groups are the
+     * same for any number.
+     */
+    public static List<List<Integer>> group(List<Piece> pieces, List<String> sectionKeys, Tolerances tol,
+            boolean mirror, double[] approxLengthM, int threads) {
+        if (approxLengthM.length != pieces.size()) {
+            throw new IllegalArgumentException("need one length per piece: " + approxLengthM.length + " for "
+                    + pieces.size() + " pieces");
         }
         Map<String, List<Integer>> buckets = new LinkedHashMap<>();
+        int[] runs = new int[pieces.size()];
         for (int i = 0; i < pieces.size(); i++) {
-            PieceShape s = shapes.get(i);
-            String key = sectionKeys.get(i) + "\u0000" + s.kinds();
+            String kinds = PieceShape.kindsOf(pieces.get(i), tol.angleRad(), tol.joinM());
+            runs[i] = kinds.length() - kinds.indexOf(':') - 1;
+            String key = sectionKeys.get(i) + "\u0000" + kinds;
             buckets.computeIfAbsent(key, k -> new ArrayList<>()).add(i);
         }
+        PieceShape[] shapes = new PieceShape[pieces.size()];
+        boolean[] compared = new boolean[pieces.size()];
         int[] groupOf = new int[pieces.size()];
         List<List<Integer>> groups = new ArrayList<>();
-        for (List<Integer> bucket : buckets.values()) {
-            bucket.sort(Comparator.<Integer>comparingDouble(i -> shapes.get(i).length()).thenComparingInt(i -> i));
+        for (List<Integer> all : buckets.values()) {
+            List<Integer> bucket = candidates(all, pieces, approxLengthM,
+                    LENGTH_WINDOW * tol.groupM() * (runs[all.get(0)] + 1));
+            for (int i : bucket) {
+                compared[i] = true;
+            }
+            for (int i : all) {
+                if (!compared[i]) {
+                    groupOf[i] = groups.size();
+                    groups.add(new ArrayList<>(List.of(i)));
+                }
+            }
+            List<PieceShape> made = IndexedWork.map(threads, bucket.size(),
+                    k -> new PieceShape(pieces.get(bucket.get(k)), tol.angleRad(), tol.joinM()));
+            for (int k = 0; k < bucket.size(); k++) {
+                shapes[bucket.get(k)] = made.get(k);
+            }
+            bucket.sort(Comparator.<Integer>comparingDouble(i -> shapes[i].length()).thenComparingInt(i -> i));
             List<Integer> leaders = new ArrayList<>();
             List<double[][]> leaderSamples = new ArrayList<>();
             for (int i : bucket) {
-                PieceShape s = shapes.get(i);
+                PieceShape s = shapes[i];
                 double window = LENGTH_WINDOW * tol.groupM() * (s.runs() + 1);
                 int found = -1;
                 for (int k = leaders.size() - 1; k >= 0 && k >= leaders.size() - MAX_COMPARISONS; k--) {
-                    PieceShape lead = shapes.get(leaders.get(k));
+                    PieceShape lead = shapes[leaders.get(k)];
                     if (lead.length() < s.length() - window) {
                         break;
                     }
@@ -105,6 +150,44 @@ public final class Grouper {
         }
         groups.sort(Comparator.comparingInt(g -> g.get(0)));
         return groups;
+    }
+
+    /**
+     * The members of a bucket that have another member within {@code window} plus the screening
+     * slack in length (by the stage's lengths), in any order; members with a strongly
+     * weighted spline are always kept (their two length rules may differ by more than the slack).
+     */
+    private static List<Integer> candidates(List<Integer> bucket, List<Piece> pieces, double[] approx,
+            double window) {
+        Integer[] byLength = bucket.toArray(new Integer[0]);
+        java.util.Arrays.sort(byLength, Comparator.<Integer>comparingDouble(i -> approx[i]).thenComparingInt(i -> i));
+        boolean[] keep = new boolean[byLength.length];
+        for (int k = 0; k + 1 < byLength.length; k++) {
+            double a = approx[byLength[k]];
+            double b = approx[byLength[k + 1]];
+            double slack = window + Tolerances.GROUP_LENGTH_SCREEN_RELATIVE * (Math.abs(a) + Math.abs(b));
+            // NaN lengths compare as near, so such pieces keep the full comparison
+            if (!(b - a > slack)) {
+                keep[k] = true;
+                keep[k + 1] = true;
+            }
+        }
+        List<Integer> out = new ArrayList<>();
+        for (int k = 0; k < byLength.length; k++) {
+            if (keep[k] || weighted(pieces.get(byLength[k]))) {
+                out.add(byLength[k]);
+            }
+        }
+        return out;
+    }
+
+    private static boolean weighted(Piece p) {
+        for (Segment s : p.segments()) {
+            if (MomentIntegrator.stronglyWeighted(s)) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** Fewest and most samples per piece, and samples added per run (no source: enough to see every run). */

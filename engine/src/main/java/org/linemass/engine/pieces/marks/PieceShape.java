@@ -31,29 +31,61 @@ final class PieceShape {
         this.closed = piece.closed();
         this.parts = new ArcLength[segs.size()];
         this.offset = new double[segs.size() + 1];
-        StringBuilder k = new StringBuilder();
+        boolean[] starts = runStartFlags(segs, closed, angleRad, joinM);
         for (int i = 0; i < segs.size(); i++) {
             parts[i] = new ArcLength(segs.get(i));
             offset[i + 1] = offset[i] + parts[i].length();
-            if (i == 0 || !continues(segs.get(i - 1), segs.get(i), angleRad, joinM)) {
+            if (starts[i]) {
                 runStarts.add(offset[i]);
-                k.append(letter(segs.get(i)));
             }
         }
         this.length = offset[segs.size()];
-        if (closed && runStarts.size() > 1 && continues(segs.get(segs.size() - 1), segs.get(0), angleRad, joinM)) {
-            runStarts.remove(0);
-            k.deleteCharAt(0);
+        this.kinds = kinds(segs, starts, closed);
+    }
+
+    /**
+     * The kind word of a piece ({@link #kinds()}) without building its arc-length tables: what
+     * grouping buckets by before it knows which pieces need comparing at all.
+     */
+    static String kindsOf(Piece piece, double angleRad, double joinM) {
+        List<Segment> segs = piece.segments();
+        return kinds(segs, runStartFlags(segs, piece.closed(), angleRad, joinM), piece.closed());
+    }
+
+    /**
+     * Per segment, whether a run starts there; for a closed piece whose last run continues into the
+     * first, the first segment starts none (the run goes round).
+     */
+    private static boolean[] runStartFlags(List<Segment> segs, boolean closed, double angleRad, double joinM) {
+        boolean[] starts = new boolean[segs.size()];
+        int count = 0;
+        for (int i = 0; i < segs.size(); i++) {
+            if (i == 0 || !continues(segs.get(i - 1), segs.get(i), angleRad, joinM)) {
+                starts[i] = true;
+                count++;
+            }
+        }
+        if (closed && count > 1 && continues(segs.get(segs.size() - 1), segs.get(0), angleRad, joinM)) {
+            starts[0] = false;
+        }
+        return starts;
+    }
+
+    private static String kinds(List<Segment> segs, boolean[] starts, boolean closed) {
+        StringBuilder k = new StringBuilder();
+        for (int i = 0; i < segs.size(); i++) {
+            if (starts[i]) {
+                k.append(letter(segs.get(i)));
+            }
         }
         String forward = k.toString();
         if (closed) {
             char[] c = forward.toCharArray();
             java.util.Arrays.sort(c);
-            this.kinds = "closed:" + new String(c);
-        } else {
-            String backward = new StringBuilder(forward).reverse().toString();
-            this.kinds = "open:" + (forward.compareTo(backward) <= 0 ? forward : backward);
+            return "closed:" + new String(c);
         }
+        String backward = new StringBuilder(forward).reverse().toString();
+        return "open:" + (forward.compareTo(backward) <= 0 ? forward : backward);
     }
 
     private static boolean continues(Segment a, Segment b, double angleRad, double joinM) {
