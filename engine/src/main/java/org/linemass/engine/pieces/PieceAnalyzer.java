@@ -96,7 +96,7 @@ public final class PieceAnalyzer {
         JoinClasses classes = new JoinClasses(joins);
         SegmentIndex index = new SegmentIndex(world, tol.joinM());
         // every layer: welds between layers (cross wires on a frame layer) count as contacts
-        CandidatePairs pairs = CandidatePairs.of(index, world.size(), (i, j) -> true);
+        CandidatePairs pairs = CandidatePairs.onThreads(index, world.size(), (i, j) -> true, threads);
         List<Double> worldLength = IndexedWork.map(threads, world.size(), i -> Curves.length(world.get(i)));
         double[] lengthOf = new double[world.size()];
         for (int i = 0; i < lengthOf.length; i++) {
@@ -168,7 +168,8 @@ public final class PieceAnalyzer {
                 joined.chainOfSegment(), chainLength, tol, gapEnds));
         DerivedIndex joinIndex = new DerivedIndex(index, world.size(), joinable,
                 java.util.Arrays.copyOf(origin, joinable.size()), tol.joinM());
-        findings.addAll(TeeGapCheck.check(joinable, joinIndex, joined.freeEnd(), joined.endPoint(), gapEnds, tol));
+        findings.addAll(TeeGapCheck.check(joinable, joinIndex, joined.freeEnd(), joined.endPoint(), gapEnds, tol,
+                threads));
         findings.addAll(ContactCheck.check(joinable, joinIndex, pairs, layerOf, joined.freeEnd(), joined.chainOfSegment(),
                 tol, listedNotes, threads));
 

@@ -3,6 +3,7 @@ package org.linemass.engine.pieces.checks;
 import java.util.ArrayList;
 import java.util.List;
 import org.linemass.tolerance.Tolerances;
+import org.linemass.engine.parallel.IndexedWork;
 import org.linemass.engine.pieces.index.BoxIndex;
 import org.linemass.engine.pieces.geom.ClosestPoints;
 import org.linemass.engine.pieces.geom.Contact;
@@ -62,70 +63,113 @@ public final class TeeGapCheck {
      */
     static List<Finding> check(List<Segment> segments, BoxIndex index, boolean[] free, Vec3[] endPoint,
             boolean[] reported, Tolerances tol, long maxCandidates) {
+        return check(segments, index, free, endPoint, reported, tol, maxCandidates, 1);
+    }
+
+    /**
+     * As {@link #check(List, BoxIndex, boolean[], Vec3[], boolean[], Tolerances)} on {@code threads}
+     * threads: each end is searched on its own, and the searches are taken in end order against the
+     * budget, so the findings are those of one search after another.
+     */
+    public static List<Finding> check(List<Segment> segments, BoxIndex index, boolean[] free, Vec3[] endPoint,
+            boolean[] reported, Tolerances tol, int threads) {
+        return check(segments, index, free, endPoint, reported, tol, EndSearchBudget.MAX_CANDIDATES, threads);
+    }
+
+    private record Search(Finding finding, long spent) {
+    }
+
+    static List<Finding> check(List<Segment> segments, BoxIndex index, boolean[] free, Vec3[] endPoint,
+            boolean[] reported, Tolerances tol, long maxCandidates, int threads) {
         List<Finding> out = new ArrayList<>();
         EndSearchBudget budget = new EndSearchBudget(maxCandidates);
         long ends = 0;
         long endsLeft = 0;
-        double join = tol.joinM();
-        double limit = tol.gapLimitM();
+        int m = 0;
+        int[] todo = new int[free.length];
         for (int e = 0; e < free.length; e++) {
-            if (!free[e] || reported[e]) {
-                continue;
+            if (free[e] && !reported[e]) {
+                todo[m++] = e;
             }
-            ends++;
+        }
+        for (int lo = 0; lo < m; lo += ContactCheck.BLOCK) {
+            int hi = Math.min(m, lo + ContactCheck.BLOCK);
             if (budget.exhausted()) {
-                endsLeft++;
+                ends += hi - lo;
+                endsLeft += hi - lo;
                 continue;
             }
-            int own = e >> 1;
-            Segment s = segments.get(own);
-            Vec3 p = endPoint[e];
-            Vec3 outward = (e & 1) == 0 ? Curves.startTangent(s).negate() : Curves.endTangent(s);
-            boolean[] touching = {false};
-            int[] best = {-1};
-            Contact[] bestContact = {null};
-            index.query(new Box3(p, p).expandedBy(limit), k -> {
-                budget.spend();
-                if (k == own || touching[0]) {
-                    return;
+            final int base = lo;
+            List<Search> found = IndexedWork.map(threads, hi - lo,
+                    k -> search(segments, index, free, endPoint, todo[base + k], tol));
+            for (Search r : found) {
+                ends++;
+                if (budget.exhausted()) {
+                    endsLeft++;
+                    continue;
                 }
-                Segment c = segments.get(k);
-                Contact ct = ClosestPoints.toPoint(c, p);
-                double d = ct.distance();
-                if (d <= join) {
-                    touching[0] = true;
-                    return;
+                budget.spend(r.spent());
+                if (r.finding() != null) {
+                    out.add(r.finding());
                 }
-                if (d > limit || (free[2 * k] && ct.pa().distance(c.start()) <= join)
-                        || (free[2 * k + 1] && ct.pa().distance(c.end()) <= join)) {
-                    return;
-                }
-                if (ct.pa().minus(p).dot(outward) < COS_MAX_AIM * d) {
-                    return;
-                }
-                Contact b = bestContact[0];
-                int place = b == null ? -1 : Curves.compare(ct.pa(), b.pa());
-                // ties (e.g. aimed at the corner two frame segments share) go by place, then by
-                // source, so the finding does not depend on input order
-                if (b == null || d < b.distance() || (d == b.distance() && (place < 0 || (place == 0
-                        && c.source().describe().compareTo(segments.get(best[0]).source().describe()) < 0)))) {
-                    bestContact[0] = ct;
-                    best[0] = k;
-                }
-            });
-            if (touching[0] || best[0] < 0) {
-                continue;
             }
-            Contact ct = bestContact[0];
-            Provenance pa = s.source();
-            Provenance pb = segments.get(best[0]).source();
-            out.add(Findings.of(FindingKind.GAP, Severity.WARNING, ct.pa(), ct.distance(), pa.layer(),
-                    List.of(pa, pb), null, "The end of " + pa.describe() + " stops " + Findings.mm(ct.distance())
-                            + " short of " + pb.describe() + ": more than the join tolerance "
-                            + Findings.mm(join) + " but within the gap limit " + Findings.mm(limit)
-                            + "; it was probably meant to meet it (a T-junction)."));
         }
         out.addAll(budget.finding("gaps to the middle of a wire", endsLeft, ends));
         return out;
+    }
+
+    /** The gap finding of free end {@code e}, if any, and the candidates looked at. */
+    private static Search search(List<Segment> segments, BoxIndex index, boolean[] free, Vec3[] endPoint, int e,
+            Tolerances tol) {
+        double join = tol.joinM();
+        double limit = tol.gapLimitM();
+        int own = e >> 1;
+        Segment s = segments.get(own);
+        Vec3 p = endPoint[e];
+        Vec3 outward = (e & 1) == 0 ? Curves.startTangent(s).negate() : Curves.endTangent(s);
+        boolean[] touching = {false};
+        int[] best = {-1};
+        Contact[] bestContact = {null};
+        long[] spent = {0};
+        index.query(new Box3(p, p).expandedBy(limit), k -> {
+            spent[0]++;
+            if (k == own || touching[0]) {
+                return;
+            }
+            Segment c = segments.get(k);
+            Contact ct = ClosestPoints.toPoint(c, p);
+            double d = ct.distance();
+            if (d <= join) {
+                touching[0] = true;
+                return;
+            }
+            if (d > limit || (free[2 * k] && ct.pa().distance(c.start()) <= join)
+                    || (free[2 * k + 1] && ct.pa().distance(c.end()) <= join)) {
+                return;
+            }
+            if (ct.pa().minus(p).dot(outward) < COS_MAX_AIM * d) {
+                return;
+            }
+            Contact b = bestContact[0];
+            int place = b == null ? -1 : Curves.compare(ct.pa(), b.pa());
+            // ties (e.g. aimed at the corner two frame segments share) go by place, then by
+            // source, so the finding does not depend on input order
+            if (b == null || d < b.distance() || (d == b.distance() && (place < 0 || (place == 0
+                    && c.source().describe().compareTo(segments.get(best[0]).source().describe()) < 0)))) {
+                bestContact[0] = ct;
+                best[0] = k;
+            }
+        });
+        if (touching[0] || best[0] < 0) {
+            return new Search(null, spent[0]);
+        }
+        Contact ct = bestContact[0];
+        Provenance pa = s.source();
+        Provenance pb = segments.get(best[0]).source();
+        return new Search(Findings.of(FindingKind.GAP, Severity.WARNING, ct.pa(), ct.distance(), pa.layer(),
+                List.of(pa, pb), null, "The end of " + pa.describe() + " stops " + Findings.mm(ct.distance())
+                        + " short of " + pb.describe() + ": more than the join tolerance "
+                        + Findings.mm(join) + " but within the gap limit " + Findings.mm(limit)
+                        + "; it was probably meant to meet it (a T-junction)."), spent[0]);
     }
 }

@@ -1,6 +1,8 @@
 package org.linemass.engine.pieces.index;
 
 import java.util.Arrays;
+import java.util.List;
+import org.linemass.engine.parallel.IndexedWork;
 
 /**
  * Every pair {@code i < j} of indexed segments whose grown boxes meet and which pass a cheap
@@ -27,6 +29,9 @@ public final class CandidatePairs {
     /** Most pairs kept (160 MB); real drawings of a million segments have a few million. */
     public static final int MAX_PAIRS = 20_000_000;
 
+    /** Segments queried side by side before their pairs are taken in order. */
+    static final int BLOCK = 1 << 14;
+
     private final long[] pairs;
     private final boolean truncated;
 
@@ -37,6 +42,47 @@ public final class CandidatePairs {
 
     public static CandidatePairs of(BoxIndex index, int count, Filter filter) {
         return of(index, count, filter, MAX_PAIRS);
+    }
+
+    /**
+     * As {@link #of(BoxIndex, int, Filter)}, querying on {@code threads} threads ({@code filter} must
+     * then be safe to call from several threads); the pairs and their order are those of one query
+     * after another.
+     */
+    public static CandidatePairs onThreads(BoxIndex index, int count, Filter filter, int threads) {
+        long[] buf = new long[Math.max(16, Math.min(count, MAX_PAIRS))];
+        int size = 0;
+        for (int lo = 0; lo < count; lo += BLOCK) {
+            final int base = lo;
+            List<int[]> found = IndexedWork.map(threads, Math.min(count, lo + BLOCK) - lo, k -> {
+                int i = base + k;
+                int[][] js = {new int[8]};
+                int[] n = {0};
+                index.query(index.box(i), j -> {
+                    if (j <= i || !filter.keep(i, j)) {
+                        return;
+                    }
+                    if (n[0] == js[0].length) {
+                        js[0] = Arrays.copyOf(js[0], 2 * n[0]);
+                    }
+                    js[0][n[0]++] = j;
+                });
+                return Arrays.copyOf(js[0], n[0]);
+            });
+            for (int k = 0; k < found.size(); k++) {
+                long i = base + k;
+                for (int j : found.get(k)) {
+                    if (size == MAX_PAIRS) {
+                        return new CandidatePairs(Arrays.copyOf(buf, size), true);
+                    }
+                    if (size == buf.length) {
+                        buf = Arrays.copyOf(buf, (int) Math.min(MAX_PAIRS, 2L * buf.length));
+                    }
+                    buf[size++] = (i << 32) | j;
+                }
+            }
+        }
+        return new CandidatePairs(Arrays.copyOf(buf, size), false);
     }
 
     /** As {@link #of(BoxIndex, int, Filter)} keeping at most {@code maxPairs} pairs. */

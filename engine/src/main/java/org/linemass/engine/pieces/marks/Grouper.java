@@ -43,7 +43,8 @@ public final class Grouper {
     public static final double LENGTH_WINDOW = 4;
 
     /**
-     * Most group leaders a piece is compared with (nearest in length first). Bounds the work when
+     * Most group leaders a piece is compared with (nearest in length first, among pieces whose
+     * ends are as far apart as its own, see {@link #mayMatch}). Bounds the work when
      * many different shapes share a bucket and a length; past it a piece starts its own group, so
      * the cap can only split a mark, never merge different shapes (no source).
      */
@@ -76,10 +77,10 @@ public final class Grouper {
      * As {@link #group(List, List, Tolerances, boolean)} given each piece's length as the piece
      * stage measured it ({@link Curves#length} per segment). Only pieces whose bucket holds another
      * piece of about the same length (within the length window plus
-     * {@link Tolerances#GROUP_LENGTH_SCREEN_RELATIVE} of either length) get the arc-length tables of
-     * a full comparison; any other piece cannot match and is a group of its own, exactly as the full
-     * comparison would make it (it would neither be compared nor be a leader within anyone's
-     * window). The arc-length tables are built on up to {@code threads} threads; the groups are the
+     * {@link Tolerances#GROUP_LENGTH_SCREEN_RELATIVE} of either length) and, for open pieces, with
+     * ends as far apart (within twice the group tolerance, {@link #mayMatch}) get the arc-length
+     * tables of a full comparison; any other piece cannot match and is a group of its own, as the
+     * full comparison would make it. The arc-length tables are built on up to {@code threads} threads; the groups are the
      * same for any number.
      */
     public static List<List<Integer>> group(List<Piece> pieces, List<String> sectionKeys, Tolerances tol,
@@ -96,13 +97,17 @@ public final class Grouper {
             String key = sectionKeys.get(i) + "\u0000" + kinds;
             buckets.computeIfAbsent(key, k -> new ArrayList<>()).add(i);
         }
+        double[] chord = new double[pieces.size()];
+        for (int i = 0; i < chord.length; i++) {
+            chord[i] = chord(pieces.get(i));
+        }
         PieceShape[] shapes = new PieceShape[pieces.size()];
         boolean[] compared = new boolean[pieces.size()];
         int[] groupOf = new int[pieces.size()];
         List<List<Integer>> groups = new ArrayList<>();
         for (List<Integer> all : buckets.values()) {
-            List<Integer> bucket = candidates(all, pieces, approxLengthM,
-                    LENGTH_WINDOW * tol.groupM() * (runs[all.get(0)] + 1));
+            List<Integer> bucket = candidates(all, pieces, approxLengthM, chord,
+                    LENGTH_WINDOW * tol.groupM() * (runs[all.get(0)] + 1), tol.groupM());
             for (int i : bucket) {
                 compared[i] = true;
             }
@@ -129,7 +134,8 @@ public final class Grouper {
                     if (lead.length() < s.length() - window) {
                         break;
                     }
-                    if (Congruence.matches(lead, leaderSamples.get(k), s, tol.groupM(), mirror)) {
+                    if (mayMatch(chord[leaders.get(k)], chord[i], tol.groupM())
+                            && Congruence.matches(lead, leaderSamples.get(k), s, tol.groupM(), mirror)) {
                         found = leaders.get(k);
                         break;
                     }
@@ -158,27 +164,81 @@ public final class Grouper {
      * weighted spline are always kept (their two length rules may differ by more than the slack).
      */
     private static List<Integer> candidates(List<Integer> bucket, List<Piece> pieces, double[] approx,
-            double window) {
-        Integer[] byLength = bucket.toArray(new Integer[0]);
-        java.util.Arrays.sort(byLength, Comparator.<Integer>comparingDouble(i -> approx[i]).thenComparingInt(i -> i));
-        boolean[] keep = new boolean[byLength.length];
-        for (int k = 0; k + 1 < byLength.length; k++) {
-            double a = approx[byLength[k]];
-            double b = approx[byLength[k + 1]];
-            double slack = window + Tolerances.GROUP_LENGTH_SCREEN_RELATIVE * (Math.abs(a) + Math.abs(b));
-            // NaN lengths compare as near, so such pieces keep the full comparison
-            if (!(b - a > slack)) {
-                keep[k] = true;
-                keep[k + 1] = true;
-            }
+            double[] chord, double window, double groupM) {
+        // one slack per bucket, the largest any pair in it could need: a looser screen only keeps more
+        double maxLength = 0;
+        double maxChord = 0;
+        for (int i : bucket) {
+            maxLength = Math.max(maxLength, Math.abs(approx[i]));
+            maxChord = Double.isNaN(chord[i]) ? maxChord : Math.max(maxChord, Math.abs(chord[i]));
         }
+        double slackL = window + 2 * Tolerances.GROUP_LENGTH_SCREEN_RELATIVE * maxLength;
+        double slackC = 2 * groupM + 2 * Tolerances.GROUP_LENGTH_SCREEN_RELATIVE * maxChord;
+        // cells of one slack by one slack in (length, end distance): a piece can only match pieces in
+        // its own cell or the eight around it; a closed piece (no ends) sits at end distance 0
+        Map<Long, List<Integer>> cells = new java.util.HashMap<>();
         List<Integer> out = new ArrayList<>();
-        for (int k = 0; k < byLength.length; k++) {
-            if (keep[k] || weighted(pieces.get(byLength[k]))) {
-                out.add(byLength[k]);
+        List<Integer> placed = new ArrayList<>();
+        for (int i : bucket) {
+            double c = Double.isNaN(chord[i]) ? 0 : chord[i];
+            if (!Double.isFinite(approx[i]) || !Double.isFinite(c) || weighted(pieces.get(i))) {
+                out.add(i);
+                continue;
+            }
+            cells.computeIfAbsent(cell(approx[i], slackL, c, slackC), k -> new ArrayList<>(1)).add(i);
+            placed.add(i);
+        }
+        for (int i : placed) {
+            double c = Double.isNaN(chord[i]) ? 0 : chord[i];
+            long cl = (long) Math.floor(approx[i] / slackL);
+            long cc = (long) Math.floor(c / slackC);
+            boolean near = false;
+            for (long dl = -1; dl <= 1 && !near; dl++) {
+                for (long dc = -1; dc <= 1 && !near; dc++) {
+                    List<Integer> others = cells.get(key(cl + dl, cc + dc));
+                    if (others == null) {
+                        continue;
+                    }
+                    for (int j : others) {
+                        double cj = Double.isNaN(chord[j]) ? 0 : chord[j];
+                        if (j != i && Math.abs(approx[j] - approx[i]) <= slackL && Math.abs(cj - c) <= slackC) {
+                            near = true;
+                            break;
+                        }
+                    }
+                }
+            }
+            if (near) {
+                out.add(i);
             }
         }
         return out;
+    }
+
+    private static long cell(double length, double slackL, double chord, double slackC) {
+        return key((long) Math.floor(length / slackL), (long) Math.floor(chord / slackC));
+    }
+
+    private static long key(long a, long b) {
+        return a * 0x9E3779B97F4A7C15L + b;
+    }
+
+    /**
+     * Whether two pieces with these distances between their ends (NaN: closed, no ends) can be
+     * congruent within {@code groupM}: a rigid motion keeps the distance, and a match moves each end
+     * by at most the tolerance, so the distances differ by at most twice it.
+     */
+    static boolean mayMatch(double chordA, double chordB, double groupM) {
+        double slack = 2 * groupM + Tolerances.GROUP_LENGTH_SCREEN_RELATIVE * (Math.abs(chordA) + Math.abs(chordB));
+        return !(Math.abs(chordA - chordB) > slack);
+    }
+
+    /** The distance between an open piece's ends; NaN for a closed piece. */
+    static double chord(Piece p) {
+        if (p.closed() || p.segments().isEmpty()) {
+            return Double.NaN;
+        }
+        return p.segments().get(0).start().distance(p.segments().get(p.segments().size() - 1).end());
     }
 
     private static boolean weighted(Piece p) {
