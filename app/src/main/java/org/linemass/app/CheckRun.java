@@ -191,7 +191,8 @@ final class CheckRun {
         sink.commit();
         boolean quietStdout = outputs.usesStdout() || plan.targets().contains(OutputOptions.STDOUT);
         if (!quietStdout) {
-            new ConsoleReport(units, ctx.terminal(), common.quiet, common.listNotes).printOutcomes(outcomes, ctx.out());
+            new ConsoleReport(units, ctx.terminal(), common.quiet, common.listNotes, common.allFindings,
+                    TerminalWidth.of(ctx.terminal())).printOutcomes(outcomes, ctx.out());
             if (!common.quiet) {
                 marked.forEach(m -> ctx.out().println("marked-up drawing: " + m));
             }

@@ -17,6 +17,10 @@ public final class CommonOptions {
             + "(by default they list the first 1000 and count the rest).")
     boolean listNotes;
 
+    @Option(names = "--all-findings", description = "List every finding in the console findings table, also "
+            + "alike ones (by default findings that say the same thing at different places share one row).")
+    boolean allFindings;
+
     @Option(names = "--imperial", description = "Show lengths in ft and in and masses in lb (JSON stays in SI).")
     boolean imperial;
 

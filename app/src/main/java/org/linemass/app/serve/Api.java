@@ -18,6 +18,7 @@ import java.util.concurrent.ExecutorService;
 import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.result.MarkResult;
 import org.linemass.engine.section.Section;
+import org.linemass.reports.FindingGroups;
 import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
 import org.linemass.reports.html.HtmlReportWriter;
@@ -155,6 +156,17 @@ final class Api {
         out.put("revision", revision);
         out.set("report", document(List.of(report)));
         out.put("picture", new HtmlReportWriter(units).picture(report, "d" + d.id + "-"));
+        // alike findings, so the page lists them as one entry each (the JSON report lists every finding)
+        ArrayNode groups = out.putArray("finding_groups");
+        for (FindingGroups.Group g : FindingGroups.of(report.result())) {
+            ObjectNode o = groups.addObject();
+            o.put("severity", g.severity().jsonName());
+            o.put("kind", g.kind());
+            o.put("headline", g.headline());
+            o.put("message", g.message());
+            ArrayNode n = o.putArray("numbers");
+            g.numbers().forEach(n::add);
+        }
         json(ctx, 200, out);
     }
 

@@ -264,12 +264,35 @@
     box.appendChild(el('h3', null, 'Findings'));
     if (!r.findings.length) { box.appendChild(el('p', null, 'No findings.')); }
     var ol = el('ol', {'class': 'findings'});
-    r.findings.forEach(function (f, i) {
-      var li = el('li', {'class': 'finding ' + f.severity, id: 'd' + id + '-finding-' + (i + 1), 'data-n': String(i + 1)});
+    function item(n) {
+      var f = r.findings[n - 1];
+      var li = el('li', {'class': 'finding ' + f.severity, id: 'd' + id + '-finding-' + n, 'data-n': String(n), value: String(n)});
       li.appendChild(el('span', {'class': 'sev'}, f.severity === 'info' ? 'note' : f.severity));
       li.appendChild(document.createTextNode(' '));
       li.appendChild(el('span', {'class': 'what'}, f.message));
-      li.addEventListener('click', function () { showFinding(pic, ol, li, id, i + 1); });
+      li.addEventListener('click', function (e) { e.stopPropagation(); showFinding(pic, ol, li, id, n); });
+      return li;
+    }
+    // alike findings share one entry; its button shows their own entries
+    (full.finding_groups || []).forEach(function (g) {
+      if (g.numbers.length === 1) { ol.appendChild(item(g.numbers[0])); return; }
+      var li = el('li', {'class': 'group ' + g.severity, value: String(g.numbers[0])});
+      li.appendChild(el('span', {'class': 'sev'}, g.severity === 'info' ? 'note' : g.severity));
+      li.appendChild(document.createTextNode(' '));
+      li.appendChild(el('strong', {'class': 'headline'}, g.headline));
+      li.appendChild(el('span', {'class': 'what'}, ': ' + g.message + ' '));
+      var button = el('button', {type: 'button', 'class': 'open-group', 'aria-expanded': 'false'}, 'list the ' + g.numbers.length);
+      var inner = el('ol', {'class': 'members'});
+      inner.hidden = true;
+      g.numbers.forEach(function (n) { inner.appendChild(item(n)); });
+      button.addEventListener('click', function (e) {
+        e.stopPropagation();
+        inner.hidden = !inner.hidden;
+        button.setAttribute('aria-expanded', String(!inner.hidden));
+        button.textContent = (inner.hidden ? 'list the ' : 'hide the ') + g.numbers.length;
+      });
+      li.appendChild(button);
+      li.appendChild(inner);
       ol.appendChild(li);
     });
     box.appendChild(ol);
@@ -279,11 +302,18 @@
     Array.prototype.forEach.call(ol.querySelectorAll('li.hit'), function (o) { o.classList.remove('hit'); });
     Array.prototype.forEach.call(pic.querySelectorAll('.marker.hit'), function (o) { o.classList.remove('hit'); });
     li.classList.add('hit');
+    var group = li.parentNode;
+    if (group && group.hidden) {
+      group.hidden = false;
+      var b = group.parentNode.querySelector('button.open-group');
+      if (b) { b.setAttribute('aria-expanded', 'true'); b.textContent = 'hide the ' + group.children.length; }
+    }
     var m = pic.querySelector('[id="d' + id + '-marker-' + n + '"]');
     if (!m) { say('Finding ' + n + ' has no place in the drawing.'); return; }
     say('');
     m.classList.add('hit');
     var svg = m.ownerSVGElement;
+    if (svg && svg.linemassReveal) { svg.linemassReveal(m); }
     if (svg && svg.linemassCentre) {
       svg.linemassCentre(parseFloat(m.getAttribute('data-x')), parseFloat(m.getAttribute('data-y')));
     }

@@ -130,7 +130,7 @@ class PageBrowserTest {
         assertEquals(cliLength, Double.parseDouble(length.getDomAttribute("data-value")), 0.0,
                 "the page shows the number of the JSON report (the same engine on the same bytes)");
         assertEquals(String.format(java.util.Locale.ROOT, "%.3f m", cliLength), length.getText());
-        assertEquals(cli.get("findings").size(), browser.findElements(By.cssSelector("ol.findings li")).size());
+        assertEquals(cli.get("findings").size(), browser.findElements(By.cssSelector("ol.findings li.finding")).size());
 
         // a finding: its row and its marker are highlighted, and the picture is centred on the marker
         WebElement first = browser.findElement(By.cssSelector("ol.findings li[data-n='1']"));
@@ -186,6 +186,26 @@ class PageBrowserTest {
         Files.delete(cliBom);
 
         screenshot("serve-page.png");
+    }
+
+    @Test
+    void alikeFindings_oneEntry_listedOnClick_memberShownInThePicture() throws Exception {
+        openWithDrawing();
+        // the shelf's 40 T-junction welds say the same thing at 40 places: one entry for them
+        WebElement group = browser.findElement(By.cssSelector("ol.findings li.group"));
+        assertTrue(group.findElement(By.cssSelector(".headline")).getText().matches("[0-9]+ T-junctions on .*"),
+                group.getText());
+        WebElement members = group.findElement(By.cssSelector("ol.members"));
+        assertTrue(!members.isDisplayed(), "the alike findings are one click away, not listed at first");
+        group.findElement(By.cssSelector("button.open-group")).click();
+        assertTrue(members.isDisplayed());
+        WebElement member = members.findElement(By.cssSelector("li.finding"));
+        String n = member.getDomAttribute("data-n");
+        member.click();
+        WebElement marker = browser.findElement(By.id("d1-marker-" + n));
+        assertTrue(marker.getDomAttribute("class").contains("hit"));
+        // a marker inside a count badge is brought out of it
+        assertEquals(null, marker.getDomAttribute("display"), "marker " + n + " still hidden in its badge");
     }
 
     @Test

@@ -26,6 +26,7 @@ import org.linemass.reports.Report;
 import org.linemass.reports.UnitSystem;
 import org.linemass.reports.html.HtmlReportWriter;
 import org.openqa.selenium.By;
+import org.openqa.selenium.WebElement;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.chrome.ChromeDriver;
 import org.openqa.selenium.chrome.ChromeDriverService;
@@ -155,5 +156,134 @@ class ReportPictureTest {
         Path out = PageClient.repo().resolve("app/target/screenshots");
         Files.createDirectories(out);
         Files.write(out.resolve(name), png);
+        if (Boolean.getBoolean("linemass.screenshot.update")) {
+            Path docs = PageClient.repo().resolve("docs/images");
+            Files.createDirectories(docs);
+            Files.write(docs.resolve(name), png);
+        }
+    }
+
+    /** The sections of the dense rebar cage v07 used in the README: bars by their layers' diameters. */
+    static final String[] V07_SECTIONS = {"-a", "REBAR_MAIN*=RB16", "-a", "*_D8=RB8", "-a", "CAGE*=RB8", "-a",
+        "*_D6=RB6", "-a", "CLIP*=round:3:steel"};
+
+    private static ChromeDriver chromium(Path dir, int width, int height) {
+        Optional<Path> chromium = PageBrowserTest.onPath("chromium");
+        Optional<Path> driver = PageBrowserTest.onPath("chromedriver");
+        assumeTrue(chromium.isPresent() && driver.isPresent(), "no chromium and chromedriver on the PATH (Debian "
+                + "packages chromium and chromium-driver, which .ci/run installs): browser test skipped");
+        ChromeOptions options = new ChromeOptions();
+        options.setBinary(chromium.get().toFile());
+        options.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
+                "--disable-background-networking", "--disable-component-update", "--disable-sync",
+                "--user-data-dir=" + dir.resolve("profile"), "--window-size=" + width + "," + height,
+                "--force-device-scale-factor=1");
+        return new ChromeDriver(new ChromeDriverService.Builder().usingDriverExecutable(driver.get().toFile())
+                .usingAnyFreePort().build(), options);
+    }
+
+    /** Screen boxes (left, top, right, bottom) of the balloons and badges shown in the first picture. */
+    private static List<double[]> shownBoxes(ChromeDriver b) {
+        List<?> raw = (List<?>) b.executeScript("var svg = document.querySelector('svg.view'), out = [];"
+                + "svg.querySelectorAll('a.marker:not([display]) circle.balloon, g.cluster rect').forEach(function (c) {"
+                + "  var r = c.getBoundingClientRect(); out.push([r.left, r.top, r.right, r.bottom]); });"
+                + "return out;");
+        List<double[]> boxes = new ArrayList<>();
+        for (Object o : raw) {
+            List<?> l = (List<?>) o;
+            boxes.add(new double[] {((Number) l.get(0)).doubleValue(), ((Number) l.get(1)).doubleValue(),
+                ((Number) l.get(2)).doubleValue(), ((Number) l.get(3)).doubleValue()});
+        }
+        return boxes;
+    }
+
+    @Test
+    void denseCage_markersClusterIntoBadges_openOnClick_alikeFindingsListedOnClick() throws Exception {
+        Path v07 = PageBrowserTest.corpus().resolve("v07_rebar_cage_blocks_r2000_mm.dxf");
+        assumeTrue(Files.isRegularFile(v07), "../shared/corpus is not beside this checkout: test skipped");
+        Path dir = Files.createTempDirectory("linemass-dense-report");
+        Path file = dir.resolve("v07-report.html");
+        List<String> args = new ArrayList<>(List.of("check", v07.toString(), "--html", file.toString(), "-q"));
+        args.addAll(List.of(V07_SECTIONS));
+        PageClient.cli(args.toArray(new String[0]));
+        ChromeDriver b = chromium(dir, 1280, 1400);
+        try {
+            b.get(file.toUri().toString());
+            long markers = ((Number) b.executeScript(
+                    "return document.querySelector('svg.view').querySelectorAll('a.marker').length")).longValue();
+            List<double[]> boxes = shownBoxes(b);
+            long badges = ((Number) b.executeScript(
+                    "return document.querySelector('svg.view').querySelectorAll('g.cluster').length")).longValue();
+            assertTrue(badges > 0, "no count badge on the dense cage");
+            assertTrue(boxes.size() < markers / 2, boxes.size() + " balloons and badges for " + markers + " markers");
+            // readable: no two balloons or badges overlap by more than a sliver (1 px of anti-aliased edge)
+            int overlaps = 0;
+            for (int i = 0; i < boxes.size(); i++) {
+                for (int j = i + 1; j < boxes.size(); j++) {
+                    double w = Math.min(boxes.get(i)[2], boxes.get(j)[2]) - Math.max(boxes.get(i)[0], boxes.get(j)[0]);
+                    double h = Math.min(boxes.get(i)[3], boxes.get(j)[3]) - Math.max(boxes.get(i)[1], boxes.get(j)[1]);
+                    if (w > 1 && h > 1) {
+                        overlaps++;
+                    }
+                }
+            }
+            // a badge may sit on a lone balloon next to its cluster: a few, never the pile the fans made
+            assertTrue(overlaps <= boxes.size() / 10, overlaps + " overlapping of " + boxes.size());
+            save(b.getScreenshotAs(OutputType.BYTES), "report-dense.png");
+
+            // a badge clicked zooms in to its markers: the view narrows and more markers come out
+            double before = ((Number) b.executeScript(
+                    "return document.querySelector('svg.view').viewBox.baseVal.width")).doubleValue();
+            long shownBefore = ((Number) b.executeScript("return document.querySelector('svg.view')"
+                    + ".querySelectorAll('a.marker:not([display])').length")).longValue();
+            b.executeScript("arguments[0].dispatchEvent(new MouseEvent('click', {bubbles: true}))",
+                    b.findElement(By.cssSelector("svg.view g.cluster")));
+            double after = ((Number) b.executeScript(
+                    "return document.querySelector('svg.view').viewBox.baseVal.width")).doubleValue();
+            long shownAfter = ((Number) b.executeScript("return document.querySelector('svg.view')"
+                    + ".querySelectorAll('a.marker:not([display])').length")).longValue();
+            assertTrue(after < before, "zoomed from " + before + " to " + after);
+            assertTrue(shownAfter > shownBefore || after < before / 2, shownBefore + " -> " + shownAfter);
+
+            // the 76 tight bends of mark M02 are one row, their own rows one click away
+            WebElement group = b.findElement(By.xpath("//tr[contains(@class, 'group')][.//strong[starts-with(., "
+                    + "'76 tight bends on M02')]]"));
+            String gid = group.getDomAttribute("id");
+            List<WebElement> members = b.findElements(By.cssSelector("tr.member[data-group='" + gid + "']"));
+            assertEquals(76, members.size());
+            assertTrue(members.stream().noneMatch(WebElement::isDisplayed), "listed before the click");
+            group.findElement(By.cssSelector("button.open-group")).click();
+            assertTrue(members.stream().allMatch(WebElement::isDisplayed), "not listed after the click");
+        } finally {
+            b.quit();
+        }
+    }
+
+    @Test
+    void weldedMesh_22000Notes_pictureFittedToTheWire_fewBadges() throws Exception {
+        // a 1 m square frame with 22,000 weld notes spread over it: the picture frame is the frame's alone
+        Report r = demo();
+        DrawingResult d = r.result();
+        List<Finding> many = new ArrayList<>(d.findings());
+        for (int i = 0; i < 22_000; i++) {
+            double x = 0.6 * (i % 148) / 147.0;
+            double y = 0.25 * (i / 148) / 148.0;
+            many.add(new Finding("crossing", Severity.INFO, new Vec3(x, y, 0), null, "WIRES_D4", List.of(), null,
+                    "a crossing, counted as one weld"));
+        }
+        Report dense = new Report(new DrawingResult(d.drawing(), d.entities(), d.layers(), d.pieces(), d.groups(), many,
+                d.totals(), d.sections(), d.incompleteReasons()), r.pieceShapes());
+        String plain = new HtmlReportWriter(UnitSystem.METRIC).picture(r, "");
+        String withNotes = new HtmlReportWriter(UnitSystem.METRIC).picture(dense, "");
+        double[] a = viewBox(plain);
+        double[] b = viewBox(withNotes);
+        for (int i = 0; i < 4; i++) {
+            assertEquals(a[i], b[i], 0.005, "view box component " + i);
+        }
+        String first = withNotes.split("<svg class=\"view\"")[1];
+        int badges = first.split("<g class=\"cluster ", -1).length - 1;
+        int shown = first.split("<a class=\"marker ", -1).length - 1 - (first.split("display=\"none\"", -1).length - 1);
+        // the plan view is about 960 x 400 px: at most one badge or balloon per 40 px reach
+        assertTrue(badges > 0 && badges + shown < 960 * 600 / (40 * 40), badges + " badges, " + shown + " balloons");
     }
 }

@@ -16,6 +16,7 @@ import org.linemass.geometry.Vec3;
 import org.linemass.reports.Caution;
 import org.linemass.engine.result.CombinedTotals;
 import org.linemass.reports.DrawingOutcome;
+import org.linemass.reports.FindingGroups;
 import org.linemass.reports.Report;
 import org.linemass.reports.Words;
 import org.linemass.reports.UnitSystem;
@@ -29,8 +30,10 @@ import org.linemass.reports.UnitSystem;
  */
 public final class ConsoleReport {
 
-    /** Finding messages wrap at this many characters so the table fits a wide terminal. */
+    /** Finding messages wrap at this many characters at most, however wide the terminal. */
     static final int MESSAGE_WIDTH = 60;
+    /** Width assumed when the terminal's is not known (output to a file or a pipe), characters. */
+    public static final int DEFAULT_WIDTH = 100;
 
     private final UnitSystem units;
     private final boolean colour;
@@ -39,6 +42,8 @@ public final class ConsoleReport {
 
     private final boolean quiet;
     private final boolean listNotes;
+    private final boolean allFindings;
+    private final int width;
 
     /** A report that lists notes one by one only when there are at most {@link #NOTES_LISTED}. */
     public ConsoleReport(UnitSystem units, boolean colour, boolean quiet) {
@@ -51,10 +56,25 @@ public final class ConsoleReport {
      *        mesh has hundreds), keeping their numbers so the rows shown match the HTML, CSV and JSON
      */
     public ConsoleReport(UnitSystem units, boolean colour, boolean quiet, boolean listNotes) {
+        this(units, colour, quiet, listNotes, false, DEFAULT_WIDTH);
+    }
+
+    /**
+     * @param allFindings whether alike findings (see {@link FindingGroups}) get a row each; when false
+     *        a group of alike findings is one row saying how many there are and which numbers they have
+     * @param width the terminal's width in characters: the caution and long messages wrap to fit it
+     */
+    public ConsoleReport(UnitSystem units, boolean colour, boolean quiet, boolean listNotes, boolean allFindings,
+            int width) {
+        if (width < 20) {
+            throw new IllegalArgumentException("terminal width " + width + " is below 20 characters");
+        }
         this.units = units;
         this.colour = colour;
         this.quiet = quiet;
         this.listNotes = listNotes;
+        this.allFindings = allFindings;
+        this.width = width;
     }
 
     public void print(List<Report> reports, PrintWriter out) {
@@ -114,7 +134,9 @@ public final class ConsoleReport {
             }
         }
         if (!quiet) {
-            out.print("Caution: " + Caution.TEXT + "\n");
+            for (String line : TextTable.wrap("Caution: " + Caution.TEXT, width - 1)) {
+                out.print(line + "\n");
+            }
         }
         out.flush();
     }
@@ -137,7 +159,7 @@ public final class ConsoleReport {
                     Integer.toString(n.getOrDefault(Severity.WARNING, 0)),
                     Integer.toString(n.getOrDefault(Severity.INFO, 0)), orDash(String.join("; ", r.incompleteReasons()))));
         }
-        out.print(bold("Drawings") + "\n" + t.render("  ", MESSAGE_WIDTH) + "\n");
+        out.print(bold("Drawings") + "\n" + t.renderFitting("  ", MESSAGE_WIDTH, width) + "\n");
     }
 
     private String oneLine(String name, Totals t, List<Finding> findings, boolean complete) {
@@ -247,6 +269,8 @@ public final class ConsoleReport {
      * The findings table: errors and warnings first, each under its number in every report; notes
      * follow in the table while there are at most {@value #NOTES_LISTED}, else they are summed up
      * by kind in one line (a welded frame has dozens of weld notes that would bury the errors).
+     * Alike findings ({@link FindingGroups}) share one row unless every finding is asked for: its
+     * number column reads "x76", its message starts with what they are and ends with their numbers.
      */
     private void findings(DrawingResult r, PrintWriter out) {
         if (r.findings().isEmpty()) {
@@ -258,30 +282,44 @@ public final class ConsoleReport {
         long notes = r.findings().stream().filter(f -> f.severity() == Severity.INFO).count();
         boolean showNotes = listNotes || notes <= NOTES_LISTED;
         Map<String, Integer> noteKinds = new TreeMap<>();
-        for (Severity level : new Severity[] {Severity.ERROR, Severity.WARNING, Severity.INFO}) {
-            int n = 0;
-            for (Finding f : r.findings()) {
-                n++;
-                if (f.severity() != level) {
-                    continue;
-                }
-                if (level == Severity.INFO && !showNotes) {
-                    noteKinds.merge(f.kind(), 1, Integer::sum);
-                    continue;
-                }
-                Vec3 a = f.atM();
-                t.add(List.of(Integer.toString(n), f.severity().jsonName(), f.kind(),
-                        a == null ? "-" : units.longLength(a.x()), a == null ? "-" : units.longLength(a.y()),
-                        a == null ? "-" : units.longLength(a.z()), orDash(units.defectSize(f.sizeM())),
-                        orDash(f.layer()), f.message()));
+        int grouped = 0;
+        for (FindingGroups.Group g : FindingGroups.of(r)) {
+            if (g.severity() == Severity.INFO && !showNotes) {
+                noteKinds.merge(g.kind(), g.count(), Integer::sum);
+                continue;
             }
+            if (g.count() == 1 || allFindings) {
+                for (int n : g.numbers()) {
+                    Finding f = r.findings().get(n - 1);
+                    Vec3 a = f.atM();
+                    t.add(List.of(Integer.toString(n), f.severity().jsonName(), f.kind(),
+                            a == null ? "-" : units.longLength(a.x()), a == null ? "-" : units.longLength(a.y()),
+                            a == null ? "-" : units.longLength(a.z()), orDash(units.defectSize(f.sizeM())),
+                            orDash(f.layer()), f.message()));
+                }
+                continue;
+            }
+            grouped++;
+            t.add(List.of("x" + g.count(), g.severity().jsonName(), g.kind(), "-", "-", "-",
+                    orDash(units.defectSize(g.sizeM())), g.layers().size() == 1 ? g.layers().get(0)
+                            : g.layers().isEmpty() ? "-" : g.layers().size() + " layers",
+                    g.headline() + ": " + g.message() + " (findings " + g.numberText() + ")"));
         }
-        out.print(bold("Findings") + "\n" + (t.isEmpty() ? "" : t.render("  ", MESSAGE_WIDTH)));
+        out.print(bold("Findings") + "\n" + (t.isEmpty() ? "" : t.renderFitting("  ", MESSAGE_WIDTH, width)));
+        List<String> tail = new ArrayList<>();
         if (!noteKinds.isEmpty()) {
             StringBuilder b = new StringBuilder();
             noteKinds.forEach((k, c) -> b.append(b.length() == 0 ? "" : ", ").append(c).append(' ').append(k));
-            out.print("  " + Words.count((int) notes, "note") + " not listed here (" + b + "): each is in the findings CSV, "
-                    + "the JSON and the HTML report, or add --list-notes\n");
+            tail.add(Words.count((int) notes, "note") + " not listed here (" + b + "): each is in the findings CSV, "
+                    + "the JSON and the HTML report, or add --list-notes");
+        }
+        if (grouped > 0) {
+            tail.add("Rows marked xN stand for N alike findings; --all-findings lists each one.");
+        }
+        for (String line : tail) {
+            for (String part : TextTable.wrap(line, width - 3)) {
+                out.print("  " + part + "\n");
+            }
         }
         out.print("\n");
     }

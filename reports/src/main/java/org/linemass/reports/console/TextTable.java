@@ -79,20 +79,51 @@ final class TextTable {
         return sb.toString();
     }
 
+    /** Narrowest last column kept beside the others; narrower, it goes on lines of its own. */
+    static final int MIN_LAST_BESIDE = 40;
+
+    /**
+     * The table fitted to a terminal {@code columns} characters wide: the last (text) column wraps at
+     * {@code maxLast} characters or at what the other columns leave of the width, whichever is less;
+     * when they leave less than {@value #MIN_LAST_BESIDE}, the last column is written under each row,
+     * indented by four more spaces and wrapped at the full width. Lines of the other columns may
+     * still pass the width when those columns alone are wider.
+     */
+    String renderFitting(String indent, int maxLast, int columns) {
+        int n = header.size();
+        int last = n - 1;
+        int lastStart = 0;
+        for (int i = 0; i < last; i++) {
+            int w = header.get(i).length();
+            for (List<String> r : rows) {
+                w = Math.max(w, r.get(i).length());
+            }
+            lastStart += w + 2;
+        }
+        int room = columns - 1 - indent.length() - lastStart;
+        if (room >= MIN_LAST_BESIDE) {
+            return render(indent, Math.min(maxLast, room));
+        }
+        boolean[] firstNumeric = java.util.Arrays.copyOf(numeric, last);
+        TextTable head = new TextTable(header.subList(0, last), firstNumeric);
+        rows.forEach(r -> head.rows.add(r.subList(0, last)));
+        String[] lines = head.render(indent).split("\n", -1);
+        StringBuilder sb = new StringBuilder();
+        sb.append(lines[0]).append('\n').append(lines[1]).append('\n');
+        String under = indent + "    ";
+        int wrapAt = Math.max(MIN_LAST_BESIDE, columns - 1 - under.length());
+        for (int k = 0; k < rows.size(); k++) {
+            sb.append(lines[k + 2]).append('\n');
+            for (String part : wrap(rows.get(k).get(last), wrapAt)) {
+                sb.append(under).append(part).append('\n');
+            }
+        }
+        return sb.toString();
+    }
+
     /** Splits text into lines of at most {@code width} characters at spaces (longer words are cut). */
     static List<String> wrap(String text, int width) {
-        List<String> out = new ArrayList<>();
-        String rest = text;
-        while (rest.length() > width) {
-            int cut = rest.lastIndexOf(' ', width);
-            if (cut <= 0) {
-                cut = width;
-            }
-            out.add(rest.substring(0, cut).stripTrailing());
-            rest = rest.substring(cut).stripLeading();
-        }
-        out.add(rest);
-        return out;
+        return org.linemass.reports.Words.wrap(text, width);
     }
 
     private void line(StringBuilder sb, String indent, List<String> cells, int[] width) {

@@ -7,6 +7,7 @@ import org.linemass.engine.result.MarkResult;
 import org.linemass.engine.result.SectionUse;
 import org.linemass.engine.result.Totals;
 import org.linemass.geometry.Vec3;
+import org.linemass.reports.FindingGroups;
 import org.linemass.reports.UnitSystem;
 
 /**
@@ -116,6 +117,12 @@ final class HtmlTables {
         s.append("</table>\n");
     }
 
+    /**
+     * The findings table. Alike findings ({@link FindingGroups}) get one row saying how many there
+     * are, on which marks, and what they say, with a button that shows their own rows (hidden until
+     * then; the report's script also opens them when a marker links to one). A finding unlike any
+     * other is one row as it always was.
+     */
     void findings(StringBuilder s, DrawingResult r, String ids) {
         s.append("<h3>Findings</h3>\n");
         if (r.findings().isEmpty()) {
@@ -123,37 +130,63 @@ final class HtmlTables {
             return;
         }
         String lu = units.longUnit();
-        s.append("<table class=\"data\">\n<tr><th>#</th><th>severity</th><th>kind</th><th>x [").append(lu)
+        s.append("<table class=\"data findings\">\n<tr><th>#</th><th>severity</th><th>kind</th><th>x [").append(lu)
                 .append("]</th><th>y [").append(lu).append("]</th><th>z [").append(lu).append("]</th><th>size [").append(units.shortUnit()).append("]</th><th>layer</th><th>entities (line:handle)</th>")
                 .append("<th>message</th></tr>\n");
-        int n = 0;
-        for (Finding f : r.findings()) {
-            n++;
-            s.append("<tr id=\"").append(ids).append("finding-").append(n).append("\" class=\"")
-                    .append(f.severity().jsonName()).append("\"><td>");
-            if (f.atM() != null && f.atM().isFinite()) {
-                s.append("<a href=\"#").append(ids).append("marker-").append(n).append("\" title=\"show in the picture\">")
-                        .append(n).append("</a>");
-            } else {
-                s.append(n);
+        int g = 0;
+        for (FindingGroups.Group group : FindingGroups.of(r)) {
+            if (group.count() == 1) {
+                int n = group.numbers().get(0);
+                findingRow(s, r.findings().get(n - 1), n, ids, null, r.findings().get(n - 1).message());
+                continue;
             }
-            s.append("</td>");
-            cell(s, f.severity().jsonName(), false);
-            cell(s, f.kind(), false);
-            Vec3 at = f.atM();
-            cell(s, at == null ? "" : units.longLength(at.x()), true);
-            cell(s, at == null ? "" : units.longLength(at.y()), true);
-            cell(s, at == null ? "" : units.longLength(at.z()), true);
-            cell(s, units.defectSize(f.sizeM()), true);
-            cell(s, f.layer(), false);
-            StringBuilder refs = new StringBuilder();
-            f.entities().forEach(e -> refs.append(refs.length() == 0 ? "" : " ").append(e.line())
-                    .append(e.handle() == null || e.handle().isEmpty() ? "" : ":" + e.handle()));
-            cell(s, refs.toString(), false);
-            cell(s, f.message(), false);
-            s.append("</tr>\n");
+            g++;
+            String gid = ids + "group-" + g;
+            s.append("<tr id=\"").append(gid).append("\" class=\"group ").append(group.severity().jsonName())
+                    .append("\"><td>&times;").append(group.count()).append("</td>");
+            cell(s, group.severity().jsonName(), false);
+            cell(s, group.kind(), false);
+            s.append("<td></td><td></td><td></td>");
+            cell(s, units.defectSize(group.sizeM()), true);
+            cell(s, String.join(", ", group.layers()), false);
+            s.append("<td></td><td><strong>").append(Html.escape(group.headline())).append("</strong>: ")
+                    .append(Html.escape(group.message())).append(" <button type=\"button\" class=\"open-group\" "
+                            + "aria-expanded=\"false\" data-count=\"").append(group.count()).append("\" data-group=\"").append(gid)
+                    .append("\">list the ")
+                    .append(group.count()).append("</button></td></tr>\n");
+            for (int n : group.numbers()) {
+                findingRow(s, r.findings().get(n - 1), n, ids, gid, "");
+            }
         }
         s.append("</table>\n");
+    }
+
+    /** One finding's row; a member of a group ({@code group} not null) is hidden and leaves its message to the group's row. */
+    private void findingRow(StringBuilder s, Finding f, int n, String ids, String group, String message) {
+        s.append("<tr id=\"").append(ids).append("finding-").append(n).append("\" class=\"")
+                .append(f.severity().jsonName()).append(group == null ? "\"" : " member\" data-group=\"" + group
+                        + "\" hidden").append("><td>");
+        if (f.atM() != null && f.atM().isFinite()) {
+            s.append("<a href=\"#").append(ids).append("marker-").append(n).append("\" title=\"show in the picture\">")
+                    .append(n).append("</a>");
+        } else {
+            s.append(n);
+        }
+        s.append("</td>");
+        cell(s, f.severity().jsonName(), false);
+        cell(s, f.kind(), false);
+        Vec3 at = f.atM();
+        cell(s, at == null ? "" : units.longLength(at.x()), true);
+        cell(s, at == null ? "" : units.longLength(at.y()), true);
+        cell(s, at == null ? "" : units.longLength(at.z()), true);
+        cell(s, units.defectSize(f.sizeM()), true);
+        cell(s, f.layer(), false);
+        StringBuilder refs = new StringBuilder();
+        f.entities().forEach(e -> refs.append(refs.length() == 0 ? "" : " ").append(e.line())
+                .append(e.handle() == null || e.handle().isEmpty() ? "" : ":" + e.handle()));
+        cell(s, refs.toString(), false);
+        cell(s, message, false);
+        s.append("</tr>\n");
     }
 
     void sections(StringBuilder s, DrawingResult r) {

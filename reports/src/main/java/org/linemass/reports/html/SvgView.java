@@ -96,7 +96,13 @@ final class SvgView {
         }
         // balloons near the edge may reach past the padding: the picture grows to show them whole
         double[] reach = {0, 0, w, h};
-        markers(body, r, f, ids, view, primary, reach, w, h);
+        java.util.Set<Integer> grouped = new java.util.HashSet<>();
+        for (org.linemass.reports.FindingGroups.Group g : org.linemass.reports.FindingGroups.of(r)) {
+            if (g.count() > 1) {
+                grouped.addAll(g.numbers());
+            }
+        }
+        markers(body, r, f, ids, view, primary, reach, w, h, grouped);
         double x0 = reach[0];
         double y0 = reach[1];
         double vw = reach[2] - x0;
@@ -203,10 +209,15 @@ final class SvgView {
 
     /**
      * Writes the markers; widens {@code reach} (min x, min y, max x, max y, picture px) to take in
-     * every balloon with a margin.
+     * every balloon shown in the first view with a margin. Markers are clustered as the page's
+     * script clusters them at every zoom ({@link MarkerClusters}): the markers of a cell with more
+     * one anchor are written hidden behind one count badge, so the picture reads without the script
+     * (printed) too; a marker alone has its balloon up and to the right ({@link MarkerLayout#lone}).
+     * A finding with alike ones ({@code grouped}) leaves its message to the findings table's group
+     * row and gets a short tooltip, which keeps a drawing with many thousands of notes small.
      */
     private static void markers(StringBuilder s, DrawingResult r, Frame f, String ids, View view, boolean primary,
-            double[] reach, double w, double h) {
+            double[] reach, double w, double h, java.util.Set<Integer> grouped) {
         List<Integer> numbers = new ArrayList<>();
         List<Finding> placed = new ArrayList<>();
         int n = 0;
@@ -223,7 +234,19 @@ final class SvgView {
             xs[i] = f.x(placed.get(i).atM());
             ys[i] = f.y(placed.get(i).atM());
         }
-        List<MarkerLayout.Offset> offsets = MarkerLayout.place(xs, ys);
+        MarkerClusters clusters = MarkerClusters.of(xs, ys);
+        MarkerLayout.Offset[] offsets = new MarkerLayout.Offset[placed.size()];
+        boolean[] hidden = new boolean[placed.size()];
+        for (int[] cell : clusters.cells()) {
+            if (cell.length > 1) {
+                for (int i : cell) {
+                    hidden[i] = true;
+                    offsets[i] = MarkerLayout.lone();
+                }
+                continue;
+            }
+            offsets[cell[0]] = MarkerLayout.lone();
+        }
         // notes first, errors last: later elements are drawn on top, so an error is never hidden by a note
         List<Integer> order = new ArrayList<>();
         for (int i = 0; i < placed.size(); i++) {
@@ -233,15 +256,15 @@ final class SvgView {
         for (int i : order) {
             Finding fd = placed.get(i);
             int num = numbers.get(i);
-            MarkerLayout.Offset o = offsets.get(i);
+            MarkerLayout.Offset o = offsets[i];
             String marker = ids + "marker-" + num + (primary ? "" : "-" + view.name().toLowerCase(Locale.ROOT));
             boolean wide = Integer.toString(num).length() > 2;
             double br = fd.severity() == Severity.INFO ? (wide ? BALLOON_R : NOTE_BALLOON_R)
                     : wide ? WIDE_BALLOON_R : BALLOON_R;
             double margin = br + EDGE_MARGIN_PX;
-            // only a marker on the drawing widens the picture to show its balloon whole; one outside
+            // only a shown marker on the drawing widens the picture to show its balloon whole; one outside
             // it is reached by panning, so it cannot push the drawing into a corner
-            if (xs[i] >= 0 && xs[i] <= w && ys[i] >= 0 && ys[i] <= h) {
+            if (!hidden[i] && xs[i] >= 0 && xs[i] <= w && ys[i] >= 0 && ys[i] <= h) {
                 reach[0] = Math.min(reach[0], xs[i] + o.dx() - margin);
                 reach[1] = Math.min(reach[1], ys[i] + o.dy() - margin);
                 reach[2] = Math.max(reach[2], xs[i] + o.dx() + margin);
@@ -252,9 +275,15 @@ final class SvgView {
             s.append("<a class=\"marker fixed ").append(fd.severity().jsonName()).append("\" id=\"").append(marker)
                     .append("\" href=\"#").append(ids).append("finding-").append(num).append('"');
             anchor(s, xs[i], ys[i]);
+            if (hidden[i]) {
+                s.append(" display=\"none\"");
+            }
             s.append("><title>").append(num).append(" (").append(fd.severity().jsonName()).append(", ")
-                    .append(Html.escape(fd.kind())).append("): ").append(Html.escape(fd.message()))
-                    .append("</title><circle class=\"ring\" r=\"").append(num(RING_R)).append("\"/>")
+                    .append(Html.escape(fd.kind())).append(')');
+            if (!grouped.contains(num)) {
+                s.append(": ").append(Html.escape(fd.message()));
+            }
+            s.append("</title><circle class=\"ring\" r=\"").append(num(RING_R)).append("\"/>")
                     .append("<line x1=\"0\" y1=\"0\" x2=\"").append(num(o.dx() * lead)).append("\" y2=\"")
                     .append(num(o.dy() * lead)).append("\"/><circle class=\"balloon\" cx=\"").append(num(o.dx()))
                     .append("\" cy=\"").append(num(o.dy())).append("\" r=\"").append(num(br))
@@ -262,6 +291,37 @@ final class SvgView {
                     .append(num(o.dy() + (fd.severity() == Severity.INFO ? 3 : 4)))
                     .append("\">").append(num).append("</text></a>\n");
         }
+        for (int[] cell : clusters.cells()) {
+            if (cell.length > 1) {
+                badge(s, cell, xs, ys, placed);
+            }
+        }
+    }
+
+    /**
+     * The count badge of a cluster: a ring at its first anchor (the one the others lie within
+     * {@value MarkerClusters#RADIUS_PX} px of) and the count on a leader, where a lone marker's balloon
+     * would be, coloured by the most severe of them; the page's script replaces it with its own at
+     * every zoom (class {@code cluster}).
+     */
+    private static void badge(StringBuilder s, int[] cell, double[] xs, double[] ys, List<Finding> placed) {
+        Severity worst = Severity.INFO;
+        for (int i : cell) {
+            if (placed.get(i).severity().ordinal() < worst.ordinal()) {
+                worst = placed.get(i).severity();
+            }
+        }
+        String count = Integer.toString(cell.length);
+        MarkerLayout.Offset o = MarkerLayout.lone();
+        double bw = MarkerClusters.badgeWidth(cell.length);
+        s.append("<g class=\"cluster fixed ").append(worst.jsonName()).append('"');
+        anchor(s, xs[cell[0]], ys[cell[0]]);
+        s.append("><title>").append(count).append(" findings here: click or zoom in to see them</title>")
+                .append("<circle class=\"ring\" r=\"").append(num(RING_R)).append("\"/><line x1=\"0\" y1=\"0\" x2=\"")
+                .append(num(o.dx())).append("\" y2=\"").append(num(o.dy())).append("\"/><rect x=\"")
+                .append(num(o.dx() - bw / 2)).append("\" y=\"").append(num(o.dy() - 10)).append("\" width=\"")
+                .append(num(bw)).append("\" height=\"20\" rx=\"10\"/><text x=\"").append(num(o.dx())).append("\" y=\"")
+                .append(num(o.dy() + 4)).append("\">&times;").append(count).append("</text></g>\n");
     }
 
     /** transform and data attributes of a group drawn at screen size around picture point (x, y). */

@@ -115,8 +115,7 @@ public final class AtomicWrite {
         try {
             Files.createDirectories(dir);
             removeStale(dir);
-            tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".linemass-" + ProcessHandle.current().pid()
-                    + "-", ".part");
+            tmp = newTemporary(dir, "." + abs.getFileName() + ".linemass-" + ProcessHandle.current().pid() + "-");
         } catch (IOException e) {
             throw failure(target, e);
         }
@@ -140,6 +139,26 @@ public final class AtomicWrite {
         } finally {
             if (!written) {
                 Files.deleteIfExists(tmp);
+            }
+        }
+    }
+
+    /** Numbers the temporaries of this process (several outputs in one folder, several threads). */
+    private static final java.util.concurrent.atomic.AtomicLong TEMPORARIES = new java.util.concurrent.atomic.AtomicLong();
+
+    /**
+     * Creates an empty temporary {@code prefix + N + ".part"} in {@code dir}. Created without explicit
+     * permissions, so the file gets the user's usual ones (the process umask), as the report file
+     * moved from it then has; {@link Files#createTempFile} would make every report owner-only (0600).
+     */
+    private static Path newTemporary(Path dir, String prefix) throws IOException {
+        while (true) {
+            Path p = dir.resolve(prefix + TEMPORARIES.incrementAndGet() + ".part");
+            try {
+                Files.newByteChannel(p, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE).close();
+                return p;
+            } catch (java.nio.file.FileAlreadyExistsException e) {
+                // left by an earlier process with the same id: take the next number
             }
         }
     }

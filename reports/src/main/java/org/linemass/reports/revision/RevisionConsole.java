@@ -50,7 +50,7 @@ public final class RevisionConsole {
                 out.println("missing prices: " + String.join("; ", cost.missing()));
             }
             out.println();
-            out.println("Caution: " + Caution.TEXT);
+            org.linemass.reports.Words.wrap("Caution: " + Caution.TEXT, 99).forEach(out::println);
         }
         out.flush();
     }

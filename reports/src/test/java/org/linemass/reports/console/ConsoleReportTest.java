@@ -28,6 +28,65 @@ class ConsoleReportTest {
         return w.toString();
     }
 
+    /** The frame with {@code n} alike warnings (same kind and text, each naming its own entity) added. */
+    private static List<Report> alikeWarnings(int n) {
+        DrawingResult r = Fixtures.flatFrame("a.dxf");
+        List<Finding> findings = new ArrayList<>(r.findings());
+        for (int i = 0; i < n; i++) {
+            org.linemass.engine.result.SourceRef e = new org.linemass.engine.result.SourceRef(200 + i, "", "ARC",
+                    List.of());
+            findings.add(new Finding(FindingKind.TIGHT_BEND, Severity.WARNING, new Vec3(0.1 * i, 0, 0), 0.012, "BARS",
+                    List.of(e), null, "Bend of ARC at line " + (200 + i) + " has an inside radius of 12.000 mm, below "
+                            + "the minimum 16.000 mm for section B10."));
+        }
+        return List.of(Report.of(new DrawingResult(r.drawing(), r.entities(), r.layers(), r.pieces(), r.groups(),
+                findings, r.totals(), r.sections(), r.incompleteReasons())));
+    }
+
+    @Test
+    void print_alikeFindings_oneRowUnlessAllAsked() {
+        StringWriter g = new StringWriter();
+        new ConsoleReport(UnitSystem.METRIC, false, false, false, false, 200).print(alikeWarnings(76), new PrintWriter(g));
+        // wrapped lines joined again, so the checks do not depend on where the message wraps
+        String grouped = g.toString().replaceAll("\\s+", " ");
+        assertTrue(grouped.contains("x76 warning tight_bend"), grouped);
+        assertTrue(grouped.contains("76 tight bends on layer BARS: Bend of ARC has an inside radius of 12.000 mm"),
+                grouped);
+        // the frame's three findings come first: the bends are findings 4 to 79
+        assertTrue(grouped.contains("(findings 4-79)"), grouped);
+        assertTrue(grouped.contains("--all-findings lists each one"), grouped);
+        assertFalse(grouped.contains("line 237"), "no single bend row: " + grouped);
+        StringWriter a = new StringWriter();
+        new ConsoleReport(UnitSystem.METRIC, false, false, false, true, 200).print(alikeWarnings(76), new PrintWriter(a));
+        String all = a.toString().replaceAll("\\s+", " ");
+        for (int line = 200; line < 276; line++) {
+            assertTrue(all.contains("Bend of ARC at line " + line + " "), "bend at line " + line);
+        }
+        assertFalse(all.contains("x76"), all);
+    }
+
+    @Test
+    void print_narrowTerminal_everyTextLineFits() {
+        for (int width : new int[] {80, 100, 120}) {
+            StringWriter w = new StringWriter();
+            new ConsoleReport(UnitSystem.METRIC, false, false, false, false, width).print(alikeWarnings(3),
+                    new PrintWriter(w));
+            String out = w.toString();
+            // the tables of numbers (bill, layers) are as wide as their columns; everything else fits
+            boolean inNumbers = false;
+            for (String l : out.split("\n")) {
+                if (l.equals("Bill of materials") || l.equals("Layers")) {
+                    inNumbers = true;
+                } else if (l.isEmpty()) {
+                    inNumbers = false;
+                } else if (!inNumbers && !l.startsWith("    #") && !l.startsWith("  ---") && !l.matches("  (x?[0-9]+) .*")) {
+                    assertTrue(l.length() < width, width + " columns: " + l.length() + " characters in '" + l + "'");
+                }
+            }
+            assertTrue(out.contains("Caution: These lengths"), out);
+        }
+    }
+
     @Test
     void print_manyNotesCountedUnlessListed() {
         org.linemass.engine.result.DrawingResult r = Fixtures.flatFrame("a.dxf");
@@ -183,7 +242,8 @@ class ConsoleReportTest {
                 DrawingOutcome.failed("bad.dxf", "bad.dxf:17: LINE 2F: group 10 value 'abc' is not a number", 0),
                 DrawingOutcome.of(Report.of(Fixtures.frame("b.dxf", 0, true)), 0));
         StringWriter w = new StringWriter();
-        new ConsoleReport(UnitSystem.METRIC, false, false).printOutcomes(outcomes, new PrintWriter(w));
+        // a wide terminal: each drawing's message stays on its row
+        new ConsoleReport(UnitSystem.METRIC, false, false, false, false, 200).printOutcomes(outcomes, new PrintWriter(w));
         String s = w.toString();
         String table = s.substring(s.indexOf("Drawings\n"), s.indexOf("All 2 drawings together"));
         List<String> rows = table.lines().skip(3).filter(l -> !l.isBlank()).toList();

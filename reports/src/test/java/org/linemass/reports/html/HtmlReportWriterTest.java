@@ -129,10 +129,11 @@ class HtmlReportWriterTest {
     }
 
     @Test
-    void write_balloonsStayInsideThePicture() throws IOException {
-        // 30 notes at the drawing's corner (0, 0): their fan (radius 30 * 24 px / 2 pi = 115 px) is far
-        // wider than the 40 px padding, so the picture must grow to show it
+    void write_manyNotesOnOneSpot_oneCountBadge_pictureNotGrown() throws IOException {
+        // 30 notes at the drawing's corner (0, 0): fanned they would need a circle of 115 px radius,
+        // far past the 40 px padding; clustered they are one badge and the picture keeps its frame
         DrawingResult base = Fixtures.flatFrame("a.dxf");
+        String plain = html(List.of(Report.of(base)));
         List<Finding> findings = new ArrayList<>(base.findings());
         for (int i = 0; i < 30; i++) {
             findings.add(new Finding(FindingKind.T_JUNCTION, Severity.INFO, Vec3.ZERO, null, "BARS", List.of(), null,
@@ -143,24 +144,30 @@ class HtmlReportWriterTest {
         String s = html(List.of(Report.of(r)));
         Matcher vb = Pattern.compile("viewBox=\"(-?[0-9.]+) (-?[0-9.]+) ([0-9.]+) ([0-9.]+)\"").matcher(s);
         assertTrue(vb.find());
+        Matcher vbPlain = Pattern.compile("viewBox=\"[^\"]+\"").matcher(plain);
+        assertTrue(vbPlain.find());
+        assertEquals(vbPlain.group(), vb.group(), "the notes' badge does not widen the picture");
         double x0 = Double.parseDouble(vb.group(1));
         double y0 = Double.parseDouble(vb.group(2));
         double x1 = x0 + Double.parseDouble(vb.group(3));
         double y1 = y0 + Double.parseDouble(vb.group(4));
+        // the two findings of the frame stay markers with their balloons inside the picture
         Matcher m = Pattern.compile("id=\"marker-[0-9]+\" href=\"#finding-[0-9]+\" data-x=\"(-?[0-9.]+)\" "
-                + "data-y=\"(-?[0-9.]+)\".*?<circle class=\"balloon\" cx=\"(-?[0-9.]+)\" cy=\"(-?[0-9.]+)\" "
-                + "r=\"([0-9.]+)\"").matcher(s);
-        int n = 0;
+                + "data-y=\"(-?[0-9.]+)\" transform=\"[^\"]+\"><title>.*?<circle class=\"balloon\" cx=\"(-?[0-9.]+)\" "
+                + "cy=\"(-?[0-9.]+)\" r=\"([0-9.]+)\"").matcher(s);
+        int shown = 0;
         while (m.find()) {
-            n++;
+            shown++;
             double x = Double.parseDouble(m.group(1)) + Double.parseDouble(m.group(3));
             double y = Double.parseDouble(m.group(2)) + Double.parseDouble(m.group(4));
             double radius = Double.parseDouble(m.group(5));
             assertTrue(x - radius >= x0 && x + radius <= x1 && y - radius >= y0 && y + radius <= y1,
                     "balloon at " + x + "," + y + " outside " + vb.group());
         }
-        assertEquals(32, n);
-        assertTrue(x0 < 0 && y1 > 0, "the view box grew past the origin");
+        assertEquals(base.findings().stream().filter(f -> f.atM() != null).count(), shown);
+        assertEquals(30, s.split("display=\"none\"", -1).length - 1, "the 30 notes are hidden behind their badge");
+        assertTrue(s.contains("<g class=\"cluster fixed info\""), "one badge for the notes");
+        assertTrue(s.contains("&times;30</text></g>"), "the badge counts them");
     }
 
     @Test

@@ -31,6 +31,19 @@ class AtomicWriteTest {
     }
 
     @Test
+    void write_newReport_getsTheUsersUsualPermissions() throws IOException {
+        org.junit.jupiter.api.Assumptions.assumeTrue(dir.getFileSystem().supportedFileAttributeViews().contains("posix"),
+                "no POSIX permissions on this file system");
+        // the reference: a file created plainly, which gets the permissions the process umask gives
+        Path plain = dir.resolve("plain.txt");
+        Files.writeString(plain, "x");
+        Path f = dir.resolve("report.json");
+        AtomicWrite.write(f, out -> out.write("{}".getBytes(StandardCharsets.UTF_8)));
+        assertEquals(Files.getPosixFilePermissions(plain), Files.getPosixFilePermissions(f),
+                "a report is created like any other file the user makes, not owner-only");
+    }
+
+    @Test
     void write_failingHalfway_keepsPreviousFile() throws IOException {
         Path f = dir.resolve("report.html");
         Files.writeString(f, "previous complete report");
