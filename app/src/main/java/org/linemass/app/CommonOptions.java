@@ -21,10 +21,15 @@ public final class CommonOptions {
             + "alike ones (by default findings that say the same thing at different places share one row).")
     boolean allFindings;
 
-    @Option(names = "--imperial", description = "Show lengths in ft and in and masses in lb (JSON stays in SI).")
+    @Option(names = "--imperial", description = "Show lengths in ft and in and masses in lb, in every table and "
+            + "message (JSON stays in SI).")
     boolean imperial;
 
+    @Option(names = "--feet-inches", description = "As --imperial, with the cut lengths of the bill of materials in "
+            + "feet, inches and sixteenths (4' 11-1/4\").")
+    boolean feetInches;
+
     UnitSystem units() {
-        return imperial ? UnitSystem.IMPERIAL : UnitSystem.METRIC;
+        return feetInches ? UnitSystem.IMPERIAL_FEET_INCHES : imperial ? UnitSystem.IMPERIAL : UnitSystem.METRIC;
     }
 }

@@ -90,14 +90,14 @@ final class DrawingBatch {
         long held = need;
         boolean admitted = true;
         try {
-            Done d = attempt(file, System.nanoTime());
+            Done d = attempt(ticket, file, System.nanoTime(), progress);
             if (beside && ranOutOfHeap(d.error())) {
                 gate.release(held);
                 admitted = false;
                 gate.acquireAlone();
                 admitted = true;
                 held = gate.budgetBytes();
-                d = attempt(file, System.nanoTime());
+                d = attempt(ticket, file, System.nanoTime(), progress);
             }
             return d;
         } finally {
@@ -108,9 +108,9 @@ final class DrawingBatch {
         }
     }
 
-    private Done attempt(Path file, long t0) {
+    private Done attempt(long ticket, Path file, long t0, Progress progress) {
         try {
-            Report r = pipeline.analyse(file, importOptions, settings);
+            Report r = pipeline.analyse(file, importOptions, settings, stage -> progress.stage(ticket, stage));
             if (!keepShapes) {
                 r = Report.of(r.result());
             }

@@ -1,6 +1,7 @@
 package org.linemass.app;
 
 import java.nio.file.Path;
+import org.linemass.engine.Analyzer;
 import org.linemass.engine.error.AnalysisException;
 import org.linemass.engine.settings.AnalysisSettings;
 import org.linemass.importer.DxfInputException;
@@ -19,4 +20,14 @@ public interface DrawingPipeline {
      */
     Report analyse(Path file, ImportOptions importOptions, AnalysisSettings settings)
             throws DxfInputException, AnalysisException;
+
+    /**
+     * As {@link #analyse(Path, ImportOptions, AnalysisSettings)}, telling {@code watch} as the work
+     * moves from stage to stage ("reading the drawing", then the engine's stages); a pipeline without
+     * stages of its own tells it nothing.
+     */
+    default Report analyse(Path file, ImportOptions importOptions, AnalysisSettings settings,
+            Analyzer.StageWatch watch) throws DxfInputException, AnalysisException {
+        return analyse(file, importOptions, settings);
+    }
 }

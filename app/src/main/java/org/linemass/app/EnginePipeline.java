@@ -20,9 +20,16 @@ public final class EnginePipeline implements DrawingPipeline {
     @Override
     public Report analyse(Path file, ImportOptions importOptions, AnalysisSettings settings)
             throws DxfInputException, AnalysisException {
+        return analyse(file, importOptions, settings, Analyzer.StageWatch.NONE);
+    }
+
+    @Override
+    public Report analyse(Path file, ImportOptions importOptions, AnalysisSettings settings,
+            Analyzer.StageWatch watch) throws DxfInputException, AnalysisException {
         try {
+            watch.entering(Progress.READING);
             Drawing drawing = DxfImporter.read(file, importOptions);
-            return Report.of(Analyzer.analyze(drawing, settings));
+            return Report.of(Analyzer.analyze(drawing, settings, watch));
         } catch (OutOfMemoryError | StackOverflowError e) {
             throw OutOfResources.of(file, e);
         }

@@ -31,7 +31,7 @@ final class MaterialsCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         List<Material> rows = Materials.all();
-        boolean imperial = common.units() == UnitSystem.IMPERIAL;
+        boolean imperial = common.units().isImperial();
         // 1 lb/ft3 = 0.45359237 kg / 0.3048^3 m3 = 16.018463 kg/m3 (exact definitions of lb and ft)
         double perUnit = imperial ? 0.45359237 / Math.pow(0.3048, 3) : 1.0;
         List<String[]> cells = new ArrayList<>();

@@ -15,8 +15,11 @@ import me.tongfei.progressbar.ProgressBarBuilder;
 /**
  * A progress bar on stderr that appears only when the work is still running after
  * {@value #DELAY_MS} ms and the session is interactive; otherwise it prints nothing. It counts
- * drawings done out of the total and, while drawings run side by side, names the one that has been
- * running longest and for how long (refreshed every {@value #REFRESH_MS} ms). Thread-safe.
+ * drawings done out of the total, each drawing in {@value #STAGES} steps (reading, then the engine's
+ * stages: expanding blocks, joining and checking, grouping), so the bar moves during one long
+ * drawing too; it names the drawing that has been running longest, for how long and at which stage
+ * (refreshed every {@value #REFRESH_MS} ms). Within a stage the bar stands still: the engine tells
+ * only when a stage starts. Thread-safe.
  */
 final class Progress implements AutoCloseable {
 
@@ -24,6 +27,10 @@ final class Progress implements AutoCloseable {
     static final long DELAY_MS = 1000;
     /** How often the running time of the slowest drawing is brought up to date. */
     static final long REFRESH_MS = 1000;
+    /** Steps of one drawing on the bar: reading and the engine's three stages ({@code Analyzer.StageWatch}). */
+    static final int STAGES = 4;
+    /** The first stage, told by the pipeline before the importer reads the file. */
+    static final String READING = "reading the drawing";
 
     private final PrintWriter err;
     private final long total;
@@ -35,7 +42,17 @@ final class Progress implements AutoCloseable {
     private long done;
     private String last = "";
 
-    private record Running(String name, long startNanos) {
+    /** A drawing running now: its name, start, the stages it has entered and the latest one. */
+    private static final class Running {
+        final String name;
+        final long startNanos;
+        int stages;
+        String stage = "";
+
+        Running(String name, long startNanos) {
+            this.name = name;
+            this.startNanos = startNanos;
+        }
     }
 
     Progress(PrintWriter err, long total, boolean interactive) {
@@ -61,13 +78,37 @@ final class Progress implements AutoCloseable {
 
     private synchronized void show() {
         if (bar == null && done < total) {
-            bar = new ProgressBarBuilder().setTaskName("weighing").setInitialMax(total)
+            bar = new ProgressBarBuilder().setTaskName("weighing").setInitialMax(total * STAGES)
+                    .setUnit(" drawings", STAGES)
                     .setConsumer(new DelegatingProgressBarConsumer(s -> {
                         err.print('\r' + s);
                         err.flush();
                     })).build();
-            bar.stepTo(done);
+            bar.stepTo(steps());
             bar.setExtraMessage(message());
+        }
+    }
+
+    /** Steps done: {@value #STAGES} per finished drawing and one per stage entered by those running. */
+    synchronized long steps() {
+        long s = done * STAGES;
+        for (Running r : running.values()) {
+            s += Math.min(r.stages, STAGES);
+        }
+        return s;
+    }
+
+    /** Drawing {@code id} enters {@code stage} (a few words: "joining and checking pieces"). */
+    synchronized void stage(long id, String stage) {
+        Running r = running.get(id);
+        if (r == null) {
+            return;
+        }
+        r.stages++;
+        r.stage = stage;
+        if (bar != null) {
+            bar.setExtraMessage(message());
+            bar.stepTo(steps());
         }
     }
 
@@ -86,7 +127,7 @@ final class Progress implements AutoCloseable {
     /** Drawing {@code id} is done (analysed or failed). */
     synchronized void finished(long id) {
         Running r = running.remove(id);
-        step(r == null ? "" : r.name());
+        step(r == null ? "" : r.name);
     }
 
     /** One more drawing done, {@code name} the last one. */
@@ -95,7 +136,7 @@ final class Progress implements AutoCloseable {
         last = name;
         if (bar != null) {
             bar.setExtraMessage(message());
-            bar.stepTo(done);
+            bar.stepTo(steps());
         }
     }
 
@@ -105,8 +146,9 @@ final class Progress implements AutoCloseable {
             return last;
         }
         Running slowest = running.values().iterator().next();
-        long s = Math.max(0, (clock.getAsLong() - slowest.startNanos()) / 1_000_000_000L);
-        return String.format(Locale.ROOT, "%d running, longest %s (%d s)", running.size(), slowest.name(), s);
+        long s = Math.max(0, (clock.getAsLong() - slowest.startNanos) / 1_000_000_000L);
+        return String.format(Locale.ROOT, "%d running, longest %s (%d s%s)", running.size(), slowest.name, s,
+                slowest.stage.isEmpty() ? "" : ", " + slowest.stage);
     }
 
     @Override

@@ -31,7 +31,7 @@ final class SectionsCommand implements Callable<Integer> {
             return ExitCodes.OK;
         }
         UnitSystem u = common.units();
-        double perLong = u == UnitSystem.IMPERIAL ? 0.3048 / 0.45359237 : 1.0;
+        double perLong = u.isImperial() ? 0.3048 / 0.45359237 : 1.0;
         String massPer = u.massUnit() + "/" + u.longUnit();
         ctx.out().print(SectionList.render(rows, u, perLong, massPer));
         ctx.out().flush();

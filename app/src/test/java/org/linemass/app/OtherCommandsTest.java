@@ -155,4 +155,33 @@ class OtherCommandsTest {
             assertTrue(DemoCommand.class.getResource(DemoCommand.RESOURCE_DIR + n) != null, n);
         }
     }
+
+    @Test
+    void integrate_imperial_variablesAndLengthInFeet() throws Exception {
+        // layer LEGS_D8 of the demo holds four straight legs of one length L (testdata/demo/README.md):
+        // the integral of 1 ds is 4 L, that of s ds is 4 L^2 / 2 (closed form), here with L in feet
+        java.nio.file.Path demo = CorpusJsonTest.repo().resolve("testdata/demo/garden-planter.dxf");
+        StringWriter out = new StringWriter();
+        AppContext sys = AppContext.system();
+        AppContext ctx = new AppContext(new PrintWriter(out), new PrintWriter(new StringWriter()), sys.pipeline(),
+                sys.sections(), sys.integrator(), false);
+        assertEquals(0, Cli.run(ctx, "integrate", "--field", "1", "--only-layer", "LEGS_D8", demo.toString()));
+        double metres = total(out.toString());
+        StringWriter outFt = new StringWriter();
+        AppContext ft = new AppContext(new PrintWriter(outFt), new PrintWriter(new StringWriter()), sys.pipeline(),
+                sys.sections(), sys.integrator(), false);
+        assertEquals(0, Cli.run(ft, "integrate", "--imperial", "--field", "s", "--only-layer", "LEGS_D8",
+                demo.toString()));
+        assertTrue(outFt.toString().contains("(x, y, z, s in feet)"), outFt.toString());
+        assertTrue(outFt.toString().contains("length [ft]"), outFt.toString());
+        // four legs of equal length L m: sum of (L/0.3048)^2 / 2 square feet; 1e-9 relative covers the
+        // quadrature's bound and the 12 significant digits printed
+        double legFt = metres / 4 / 0.3048;
+        assertEquals(4 * legFt * legFt / 2, total(outFt.toString()), 1e-9 * legFt * legFt);
+    }
+
+    private static double total(String out) {
+        String line = out.lines().filter(l -> l.startsWith("total")).findFirst().orElseThrow();
+        return Double.parseDouble(line.trim().split("\\s+")[1]);
+    }
 }

@@ -55,4 +55,33 @@ class ProgressTest {
             assertEquals("b.dxf", p.message(), "the last one done when none runs");
         }
     }
+
+    @Test
+    void stage_oneLongDrawing_barMovesStageByStage_messageNamesTheStage() {
+        long[] now = {0};
+        try (Progress p = new Progress(new PrintWriter(new StringWriter()), 1, false, () -> now[0])) {
+            p.started(0, "mesh.dxf");
+            assertEquals(0, p.steps());
+            p.stage(0, Progress.READING);
+            p.stage(0, "expanding blocks and adding up layers");
+            p.stage(0, "joining and checking pieces");
+            assertEquals(3, p.steps(), "three of the drawing's four steps entered");
+            now[0] = 7_000_000_000L;
+            assertEquals("1 running, longest mesh.dxf (7 s, joining and checking pieces)", p.message());
+            p.finished(0);
+            assertEquals(Progress.STAGES, p.steps(), "a finished drawing counts all its steps");
+        }
+    }
+
+    @Test
+    void stage_realEngine_toldEveryStage() throws Exception {
+        // the demo drawing through the real pipeline: reading and the engine's three stages, in order
+        java.util.List<String> stages = new java.util.ArrayList<>();
+        java.nio.file.Path demo = CorpusJsonTest.repo().resolve("testdata/demo/garden-planter.dxf");
+        PageSetup setup = PageSetup.defaults();
+        new EnginePipeline().analyse(demo, setup.importOptions(), setup.settings(null, java.util.List.of()), stages::add);
+        assertEquals(java.util.List.of(Progress.READING, "expanding blocks and adding up layers",
+                "joining and checking pieces", "grouping marks and writing totals"), stages);
+        assertEquals(Progress.STAGES, stages.size());
+    }
 }

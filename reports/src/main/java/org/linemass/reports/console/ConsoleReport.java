@@ -237,12 +237,12 @@ public final class ConsoleReport {
             return;
         }
         TextTable t = new TextTable(List.of("mark", "qty", "section", "material",
-                "cut length each [" + units.shortUnit() + "]", "bends", "mass each [" + units.massUnit() + "]",
+                "cut length each [" + units.cutUnit() + "]", "bends", "mass each [" + units.massUnit() + "]",
                 "mass total [" + units.massUnit() + "]", "layer"),
                 false, true, false, false, true, true, true, true, false);
         for (MarkResult m : r.groups()) {
             t.add(List.of(m.mark(), Integer.toString(m.quantity()), orDash(m.section()), orDash(m.material()),
-                    units.shortLength(m.lengthEachM()), Integer.toString(m.bendsEach()), orDash(units.mass(m.massEachKg())),
+                    units.cutLength(m.lengthEachM()), Integer.toString(m.bendsEach()), orDash(units.mass(m.massEachKg())),
                     orDash(units.mass(m.massTotalKg())), orDash(m.layer())));
         }
         out.print(bold("Bill of materials") + "\n" + t.render("  ") + "\n");
@@ -295,7 +295,7 @@ public final class ConsoleReport {
                     t.add(List.of(Integer.toString(n), f.severity().jsonName(), f.kind(),
                             a == null ? "-" : units.longLength(a.x()), a == null ? "-" : units.longLength(a.y()),
                             a == null ? "-" : units.longLength(a.z()), orDash(units.defectSize(f.sizeM())),
-                            orDash(f.layer()), f.message()));
+                            orDash(f.layer()), units.message(f.message())));
                 }
                 continue;
             }
@@ -303,7 +303,7 @@ public final class ConsoleReport {
             t.add(List.of("x" + g.count(), g.severity().jsonName(), g.kind(), "-", "-", "-",
                     orDash(units.defectSize(g.sizeM())), g.layers().size() == 1 ? g.layers().get(0)
                             : g.layers().isEmpty() ? "-" : g.layers().size() + " layers",
-                    g.headline() + ": " + g.message() + " (findings " + g.numberText() + ")"));
+                    g.headline() + ": " + units.message(g.message()) + " (findings " + g.numberText() + ")"));
         }
         out.print(bold("Findings") + "\n" + (t.isEmpty() ? "" : t.renderFitting("  ", MESSAGE_WIDTH, width)));
         List<String> tail = new ArrayList<>();

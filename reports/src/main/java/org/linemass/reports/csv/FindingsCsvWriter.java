@@ -56,7 +56,7 @@ public final class FindingsCsvWriter {
                 row.add(CsvCell.text(f.layer()));
                 row.add(units.mass(f.massKg()));
                 row.add(CsvCell.text(PiecesCsvWriter.refs(f.entities())));
-                row.add(CsvCell.text(f.message()));
+                row.add(CsvCell.text(units.message(f.message())));
                 table.row(row);
             }
         }

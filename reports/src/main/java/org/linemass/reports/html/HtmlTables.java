@@ -62,7 +62,7 @@ final class HtmlTables {
             return;
         }
         s.append("<table class=\"data\">\n<tr><th>mark</th><th>qty</th><th>section</th><th>material</th>")
-                .append("<th>cut length each [").append(units.shortUnit()).append("]</th><th>bends each</th>")
+                .append("<th>cut length each [").append(units.cutUnit()).append("]</th><th>bends each</th>")
                 .append("<th>mass each [").append(units.massUnit()).append("]</th><th>mass total [")
                 .append(units.massUnit()).append("]</th><th>layer</th></tr>\n");
         double mass = 0;
@@ -74,7 +74,7 @@ final class HtmlTables {
             cell(s, Integer.toString(m.quantity()), true);
             cell(s, m.section(), false);
             cell(s, m.material(), false);
-            cell(s, units.shortLength(m.lengthEachM()), true);
+            cell(s, units.cutLength(m.lengthEachM()), true);
             cell(s, Integer.toString(m.bendsEach()), true);
             cell(s, units.massReadable(m.massEachKg()), true);
             cell(s, units.mass(m.massTotalKg()), true);
@@ -137,7 +137,7 @@ final class HtmlTables {
         for (FindingGroups.Group group : FindingGroups.of(r)) {
             if (group.count() == 1) {
                 int n = group.numbers().get(0);
-                findingRow(s, r.findings().get(n - 1), n, ids, null, r.findings().get(n - 1).message());
+                findingRow(s, r.findings().get(n - 1), n, ids, null, units.message(r.findings().get(n - 1).message()));
                 continue;
             }
             g++;
@@ -150,7 +150,7 @@ final class HtmlTables {
             cell(s, units.defectSize(group.sizeM()), true);
             cell(s, String.join(", ", group.layers()), false);
             s.append("<td></td><td><strong>").append(Html.escape(group.headline())).append("</strong>: ")
-                    .append(Html.escape(group.message())).append(" <button type=\"button\" class=\"open-group\" "
+                    .append(Html.escape(units.message(group.message()))).append(" <button type=\"button\" class=\"open-group\" "
                             + "aria-expanded=\"false\" data-count=\"").append(group.count()).append("\" data-group=\"").append(gid)
                     .append("\">list the ")
                     .append(group.count()).append("</button></td></tr>\n");
@@ -198,7 +198,7 @@ final class HtmlTables {
         s.append("<table class=\"data\">\n<tr><th>section</th><th>description</th><th>material</th>")
                 .append("<th>mass per length [").append(units.massUnit()).append('/').append(units.longUnit())
                 .append("]</th><th>diameter [").append(units.shortUnit()).append("]</th><th>source</th></tr>\n");
-        double perLong = units == UnitSystem.IMPERIAL ? 0.3048 / 0.45359237 : 1.0;
+        double perLong = units.isImperial() ? 0.3048 / 0.45359237 : 1.0;
         for (SectionUse u : r.sections()) {
             s.append("<tr>");
             cell(s, u.section(), false);

@@ -102,7 +102,7 @@ final class SvgView {
                 grouped.addAll(g.numbers());
             }
         }
-        markers(body, r, f, ids, view, primary, reach, w, h, grouped);
+        markers(body, r, f, ids, view, primary, reach, w, h, grouped, units);
         double x0 = reach[0];
         double y0 = reach[1];
         double vw = reach[2] - x0;
@@ -113,7 +113,7 @@ final class SvgView {
                 .append(num(y0)).append(' ').append(num(vw)).append(' ').append(num(vh)).append("\" width=\"")
                 .append(num(vw)).append("\" height=\"").append(num(vh)).append("\" role=\"img\" aria-label=\"")
                 .append(Html.escape(view.title)).append("\" data-px-per-m=\"").append(num(k))
-                .append("\" data-units=\"").append(units.name().toLowerCase(Locale.ROOT)).append("\">\n");
+                .append("\" data-units=\"").append(units.isImperial() ? "imperial" : "metric").append("\">\n");
         s.append("<rect class=\"paper\" x=\"-100000\" y=\"-100000\" width=\"200000\" height=\"200000\"/>\n");
         s.append(body);
         if (view != View.ISO) {
@@ -217,7 +217,7 @@ final class SvgView {
      * row and gets a short tooltip, which keeps a drawing with many thousands of notes small.
      */
     private static void markers(StringBuilder s, DrawingResult r, Frame f, String ids, View view, boolean primary,
-            double[] reach, double w, double h, java.util.Set<Integer> grouped) {
+            double[] reach, double w, double h, java.util.Set<Integer> grouped, UnitSystem units) {
         List<Integer> numbers = new ArrayList<>();
         List<Finding> placed = new ArrayList<>();
         int n = 0;
@@ -281,7 +281,7 @@ final class SvgView {
             s.append("><title>").append(num).append(" (").append(fd.severity().jsonName()).append(", ")
                     .append(Html.escape(fd.kind())).append(')');
             if (!grouped.contains(num)) {
-                s.append(": ").append(Html.escape(fd.message()));
+                s.append(": ").append(Html.escape(units.message(fd.message())));
             }
             s.append("</title><circle class=\"ring\" r=\"").append(num(RING_R)).append("\"/>")
                     .append("<line x1=\"0\" y1=\"0\" x2=\"").append(num(o.dx() * lead)).append("\" y2=\"")
@@ -359,8 +359,8 @@ final class SvgView {
      */
     record ScaleBar(double metres, String label) {
         static ScaleBar fitting(UnitSystem units, double wantedM) {
-            double longM = units == UnitSystem.IMPERIAL ? 0.3048 : 1.0;
-            double shortM = units == UnitSystem.IMPERIAL ? 0.0254 : 0.001;
+            double longM = units.isImperial() ? 0.3048 : 1.0;
+            double shortM = units.isImperial() ? 0.0254 : 0.001;
             if (wantedM >= longM) {
                 double n = niceBelow(wantedM / longM);
                 return new ScaleBar(n * longM, plain(n) + " " + units.longUnit());

@@ -48,9 +48,9 @@ final class BomSheet implements XlsxSheet {
             for (MarkResult m : r.groups()) {
                 CheckSheets.start(rows, reports, report).text(m.mark()).integer(m.quantity()).text(m.section())
                         .text(m.material()).number(units.inShortUnit(m.lengthEachM()), units.shortDecimals())
-                        .integer(m.bendsEach()).number(kg(m.massEachKg()), units.massDecimals())
+                        .integer(m.bendsEach()).number(kg(m.massEachKg()), units.massDecimals(m.massEachKg()))
                         .number(units.inLongUnit(m.lengthTotalM()), units.longDecimals())
-                        .number(kg(m.massTotalKg()), units.massDecimals()).text(m.layer()).end();
+                        .number(kg(m.massTotalKg()), units.massDecimals(m.massTotalKg())).text(m.layer()).end();
                 quantity += m.quantity();
                 length += m.lengthTotalM();
                 if (m.massTotalKg() != null) {

@@ -47,11 +47,11 @@ final class FindingsSheet implements XlsxSheet {
                 rows.number(f.sizeM() == null ? null : units.inShortUnit(f.sizeM()),
                         units.shortDecimals() + SIZE_EXTRA_DECIMALS)
                         .text(f.layer()).number(f.massKg() == null ? null : units.inMassUnit(f.massKg()),
-                                units.massDecimals())
+                                units.massDecimals(f.massKg()))
                         .text(f.entities().stream().map(s -> "line " + s.line()
                                 + (s.handle() == null || s.handle().isEmpty() ? "" : " handle " + s.handle()))
                                 .collect(Collectors.joining("; ")))
-                        .text(f.message()).end();
+                        .text(units.message(f.message())).end();
             }
         }
     }

@@ -41,7 +41,7 @@ final class LayersSheet implements XlsxSheet {
                 CheckSheets.start(rows, reports, report).text(l.name()).text(l.section()).integer(l.pieces())
                         .number(units.inLongUnit(l.lengthM()), units.longDecimals())
                         .number(units.inLongUnit(l.drawnLengthM()), units.longDecimals())
-                        .number(l.massKg() == null ? null : units.inMassUnit(l.massKg()), units.massDecimals());
+                        .number(l.massKg() == null ? null : units.inMassUnit(l.massKg()), units.massDecimals(l.massKg()));
                 PiecesSheet.point(rows, cog, units);
                 rows.text(cog == null ? "" : l.centroidM() != null ? "mass" : "length").end();
             }

@@ -42,7 +42,7 @@ final class PiecesSheet implements XlsxSheet {
             for (PieceResult p : report.result().pieces()) {
                 CheckSheets.start(rows, reports, report).integer(p.id()).text(p.mark()).text(p.layer())
                         .text(p.section()).number(units.inShortUnit(p.lengthM()), units.shortDecimals())
-                        .number(p.massKg() == null ? null : units.inMassUnit(p.massKg()), units.massDecimals())
+                        .number(p.massKg() == null ? null : units.inMassUnit(p.massKg()), units.massDecimals(p.massKg()))
                         .text(p.closed() ? "yes" : "no").integer(p.segments()).integer(p.bends().size());
                 point(rows, p.centroidM());
                 point(rows, p.startM());

@@ -14,17 +14,32 @@ public final class SheetRows {
     private final int columns;
     private int row;
     private int col;
+    /** Characters of the widest cell written in each column, as shown. */
+    private final int[] widest;
 
     SheetRows(Worksheet sheet, int columns, int firstRow) {
         this.sheet = sheet;
         this.columns = columns;
         this.row = firstRow;
+        this.widest = new int[columns];
+    }
+
+    /** Characters of the widest cell written so far in column {@code c} (0 for none). */
+    int widest(int c) {
+        return widest[c];
+    }
+
+    private void seen(int length) {
+        if (col < widest.length) {
+            widest[col] = Math.max(widest[col], length);
+        }
     }
 
     /** A string cell; null or empty gives an empty cell. */
     public SheetRows text(String value) {
         if (value != null && !value.isEmpty()) {
             sheet.value(row, col, value);
+            seen(value.length());
         }
         col++;
         return this;
@@ -38,6 +53,7 @@ public final class SheetRows {
         if (value != null && Double.isFinite(value)) {
             sheet.value(row, col, value);
             sheet.style(row, col).format(format(decimals)).set();
+            seen(org.linemass.reports.UnitSystem.fixed(value, Math.max(0, decimals)).length());
         }
         col++;
         return this;
@@ -46,6 +62,7 @@ public final class SheetRows {
     /** A whole-number cell. */
     public SheetRows integer(long value) {
         sheet.value(row, col, value);
+        seen(Long.toString(value).length());
         col++;
         return this;
     }

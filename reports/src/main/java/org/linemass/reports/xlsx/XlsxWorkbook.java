@@ -48,10 +48,14 @@ public final class XlsxWorkbook {
             for (int c = 0; c < header.size(); c++) {
                 ws.value(0, c, header.get(c));
                 ws.style(0, c).bold().set();
-                ws.width(c, Math.max(MIN_WIDTH, Math.min(MAX_WIDTH, header.get(c).length() + 2)));
             }
             SheetRows rows = new SheetRows(ws, header.size(), 1);
             s.fill(rows);
+            // each column as wide as its header or its widest cell, whichever is wider, within bounds
+            for (int c = 0; c < header.size(); c++) {
+                int chars = Math.max(header.get(c).length(), rows.widest(c)) + 2;
+                ws.width(c, Math.max(MIN_WIDTH, Math.min(MAX_WIDTH, chars)));
+            }
             ws.freezePane(0, 1);
             ws.setAutoFilter(0, 0, header.size() - 1);
             ws.finish();

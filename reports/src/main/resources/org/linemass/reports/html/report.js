@@ -84,7 +84,7 @@ root.querySelectorAll('svg.view').forEach(function (svg) {
     g.addEventListener('click', function (e) {
       e.preventDefault(); e.stopPropagation();
       if (moved) { return; }
-      var x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+      var x0 = ms[0].x, y0 = ms[0].y, x1 = x0, y1 = y0;
       ms.forEach(function (m) { x0 = Math.min(x0, m.x); y0 = Math.min(y0, m.y); x1 = Math.max(x1, m.x); y1 = Math.max(y1, m.y); });
       if (Math.max(x1 - x0, y1 - y0) / s < 2) { spread[key] = true; cluster(true); return; }
       // zoom so the badge's markers fill the middle half of the view
