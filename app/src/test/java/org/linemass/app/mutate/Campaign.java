@@ -24,7 +24,12 @@ public final class Campaign {
 
     /** What the campaign is told. */
     public record Config(List<Seed> seeds, int count, long seed, long boundMillis, int cliEvery, int ezdxfEvery,
-            Path work, Path jar) {
+            Path work, Path jar, java.util.function.Consumer<Campaign> progress) {
+
+        public Config(List<Seed> seeds, int count, long seed, long boundMillis, int cliEvery, int ezdxfEvery,
+                Path work, Path jar) {
+            this(seeds, count, seed, boundMillis, cliEvery, ezdxfEvery, work, jar, null);
+        }
     }
 
     /** One distinct failure: its class, its shape, the first time it was seen, and how often. */
@@ -39,6 +44,7 @@ public final class Campaign {
     private final Map<String, Failure> failures = new LinkedHashMap<>();
     private final Map<String, int[]> perKind = new TreeMap<>();
     private final Map<String, Integer> outcomes = new TreeMap<>();
+    private volatile int ran;
     private int referenceChecked;
     private int referenceSkipped;
     private int wrongBounds;
@@ -85,7 +91,13 @@ public final class Campaign {
             boolean sections = (i & 1) == 1;
             MutantRun.Result r = runner.run(MutantRun.args(in, outDir, binary, sections, false, mutant.args()), outDir,
                     bound(bytes));
-            List<String> problems = classify(r, bytes, "mutant.dxf");
+            List<String> problems;
+            try {
+                problems = classify(r, bytes, "mutant.dxf");
+            } catch (OutOfMemoryError e) {
+                // checking this run's outputs did not fit the campaign's heap: a failure of the run's size
+                problems = List.of("output-too-large: checking the outputs ran out of memory (" + e.getMessage() + ")");
+            }
             if (r.code() == 3 && !r.overBound()) {
                 MutantRun.Result d = runner.run(MutantRun.args(in, outDir, binary, sections, true, mutant.args()), outDir,
                         bound(bytes));
@@ -121,9 +133,14 @@ public final class Campaign {
                 }
                 cliRuns++;
             }
+            ran = i + 1;
             if ((i + 1) % 500 == 0) {
                 System.out.printf(Locale.ROOT, "mutate: %d of %d mutants, %d distinct failures, %.0f s%n", i + 1,
                         cfg.count(), failures.size(), (System.nanoTime() - startNanos) / 1e9);
+            }
+            if ((i + 1) % 100 == 0 && cfg.progress() != null) {
+                totalNanos = System.nanoTime() - startNanos;
+                cfg.progress().accept(this);
             }
         }
         if (!ezdxfPairs.isEmpty()) {
@@ -266,12 +283,12 @@ public final class Campaign {
         return String.join(" | ", s.strip().lines().limit(n).map(String::strip).toList());
     }
 
-    /** The figures of the campaign as a Markdown section. */
-    public String report() {
+    /** The figures of the campaign as a Markdown section (so far, while it runs). */
+    public synchronized String report() {
         StringBuilder sb = new StringBuilder();
-        sb.append(String.format(Locale.ROOT, "mutants: %d (seed %d), %d seed drawings, bound %d ms + %d ms per KiB per run, "
-                + "%.0f s in all (%.1f mutants/s)%n%n", cfg.count(), cfg.seed(), cfg.seeds().size(), cfg.boundMillis(), MILLIS_PER_KIB,
-                totalNanos / 1e9, cfg.count() / Math.max(1e-9, totalNanos / 1e9)));
+        sb.append(String.format(Locale.ROOT, "mutants: %d run of %d asked (seed %d), %d seed drawings, bound %d ms + %d ms per "
+                + "KiB per run, %.0f s in all (%.2f mutants/s)%n%n", ran, cfg.count(), cfg.seed(), cfg.seeds().size(),
+                cfg.boundMillis(), MILLIS_PER_KIB, totalNanos / 1e9, ran / Math.max(1e-9, totalNanos / 1e9)));
         sb.append("| outcome | runs |\n|---|---|\n");
         outcomes.forEach((k, v) -> sb.append("| ").append(k).append(" | ").append(v).append(" |\n"));
         sb.append("\n| kind | mutants | problems |\n|---|---|---|\n");

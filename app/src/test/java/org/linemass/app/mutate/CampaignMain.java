@@ -34,9 +34,20 @@ public final class CampaignMain {
             System.exit(2);
         }
         Path jar = repo.resolve("app/target/linemass.jar");
+        // REPORT.md is rewritten every 100 mutants, so a campaign stopped part-way leaves its figures so far
+        java.util.function.Consumer<Campaign> progress = c -> {
+            try {
+                Files.writeString(work.resolve("REPORT.md.part"), "(stopped or still running; figures so far)\n\n"
+                        + c.report(), StandardCharsets.UTF_8);
+                Files.move(work.resolve("REPORT.md.part"), work.resolve("REPORT.md"),
+                        java.nio.file.StandardCopyOption.REPLACE_EXISTING, java.nio.file.StandardCopyOption.ATOMIC_MOVE);
+            } catch (IOException e) {
+                System.err.println("mutate: cannot write the progress report: " + e.getMessage());
+            }
+        };
         Campaign c = new Campaign(new Campaign.Config(seeds, count, seed, Long.getLong("linemass.mutate.bound", 20_000L),
                 Integer.getInteger("linemass.mutate.cliEvery", 200), Integer.getInteger("linemass.mutate.ezdxfEvery", 100),
-                work, Files.exists(jar) ? jar : null));
+                work, Files.exists(jar) ? jar : null, progress));
         List<Campaign.Failure> failures = c.run();
         String report = c.report();
         Files.writeString(work.resolve("REPORT.md"), report, StandardCharsets.UTF_8);

@@ -20,7 +20,8 @@ import org.linemass.importer.ImportOptions;
  * Checks of one run's outputs: the JSON parses strictly and holds only finite numbers; no text
  * output (console, CSV, HTML, marked-up DXF) holds a non-finite number; the marked-up DXF has an
  * even number of lines, ends with EOF and imports again; no temporary is left; a failed run wrote
- * no report. Each problem is one line starting with a short class name and a colon.
+ * no report; no report is larger than {@link #outputLimit}. Each problem is one line starting with a
+ * short class name and a colon.
  */
 final class OutputChecks {
 
@@ -46,6 +47,13 @@ final class OutputChecks {
                 }
                 continue;
             }
+            long size = Files.size(p);
+            if (size > outputLimit(input)) {
+                // work and output are to stay proportional to what a person can read; not read into memory
+                problems.add("output-too-large: " + name + " is " + size / (1 << 20) + " MiB from a drawing of "
+                        + input.length / 1024 + " KiB");
+                continue;
+            }
             String text = Files.readString(p, name.endsWith(".dxf") ? StandardCharsets.ISO_8859_1 : StandardCharsets.UTF_8);
             if (name.endsWith(".json")) {
                 json(text, problems);
@@ -58,6 +66,14 @@ final class OutputChecks {
         }
         temporaries(r.outDir(), problems);
         return problems;
+    }
+
+    /**
+     * The largest report checked (bytes): 64 MiB, or 8 times the drawing for the marked-up copy of
+     * a large drawing. Larger outputs count as a problem of their own and are not read.
+     */
+    static long outputLimit(byte[] input) {
+        return Math.max(64L << 20, 8L * input.length);
     }
 
     /** Problems of a run that failed (exit 2): no report may exist, and no temporary. */
