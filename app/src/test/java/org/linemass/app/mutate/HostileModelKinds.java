@@ -189,13 +189,17 @@ final class HostileModelKinds {
     }
 
     /**
-     * Blocks nested two to six deep, each placing the next 2 to 100 times with a non-uniform
-     * scale (x 1.5, y 0.8 or random), as one array insert or as separate inserts; the innermost
-     * holds one LINE.
+     * Blocks nested with a non-uniform scale (x 1.5, y 0.8 or random) at each level, as one array
+     * insert or as separate inserts; the innermost holds one LINE. Either small (two or three
+     * levels of 2 to 10 copies: expanded and checked like any drawing) or huge (five or six levels of
+     * 50 to 100 copies, 10^8 copies and more: beyond the expansion limit, so the totals come from
+     * instancing alone). Nests in between expand to a hundred thousand segments or so and measure
+     * only how fast the machine checks an ordinary large drawing, so they are left out.
      */
     static Mutation nonUniformNest() {
         return GroupKinds.pairs("model-nonuniform-nest", (p, r) -> {
-            int depth = 2 + r.nextInt(5);
+            boolean huge = r.nextBoolean();
+            int depth = huge ? 6 + r.nextInt(2) : 3 + r.nextInt(2); // levels of inserts + the innermost block
             String prefix = "MUTANT_NEST_" + Integer.toHexString(r.nextInt(1 << 16)) + "_";
             List<String[]> blocks = new ArrayList<>();
             for (int level = depth; level >= 1; level--) {
@@ -203,7 +207,7 @@ final class HostileModelKinds {
                 if (level == depth) {
                     content.addAll(line("0", 0, 0, 0, 10, 3, 0));
                 } else {
-                    int copies = 2 + r.nextInt(99);
+                    int copies = huge ? 50 + r.nextInt(51) : 2 + r.nextInt(9);
                     double sx = r.nextBoolean() ? 1.5 : 0.2 + 2 * r.nextDouble();
                     double sy = r.nextBoolean() ? 0.8 : 0.2 + 2 * r.nextDouble();
                     if (r.nextBoolean()) {
