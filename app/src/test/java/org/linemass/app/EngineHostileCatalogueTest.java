@@ -120,4 +120,57 @@ class EngineHostileCatalogueTest {
         assertTrue(m.get(0).startsWith("layer WIRE: its mass moments exceed the range of numbers with section HEAVY"),
                 m.get(0));
     }
+
+    @Test
+    void farStrays_leaveTheRestAlone_andAreReportedWithTheirDistance() throws IOException {
+        for (List<String> extra : List.of(List.<String>of(), List.of("--join", "0.01mm"))) {
+            List<String> args = new ArrayList<>(List.of("check", "--json", "-", "-a", "WIRE=RB10"));
+            args.addAll(extra);
+            args.add(catalogue("far-strays.dxf").toString());
+            Run r = cli(args.toArray(new String[0]));
+            // a duplicate is an error finding: exit 1 with the default threshold
+            assertEquals(1, r.code(), r.err());
+            JsonNode j = MAPPER.readTree(r.out());
+            // 8 L-shaped wires, the two halves of the wire with the 0.05 mm gap, the two strays
+            assertEquals(12, j.get("pieces").size(), extra.toString());
+            List<String> gaps = messages(j, "gap");
+            assertEquals(1, gaps.size(), r.out());
+            assertTrue(gaps.get(0).contains("0.050 mm apart"), gaps.get(0));
+            assertEquals(List.of(), messages(j, "zero_length"));
+            assertEquals(1, messages(j, "duplicate").size());
+            List<String> far = messages(j, "remote_entity");
+            assertEquals(2, far.size(), far.toString());
+            assertTrue(far.stream().anyMatch(m -> m.startsWith("LINE at line 245, handle 3C lies 1.00e+06 m away")), far.toString());
+            assertTrue(far.stream().anyMatch(m -> m.startsWith("LINE at line 263, handle 3D lies 1.00e+09 m away")), far.toString());
+            // weighed: 8 x 440 + 400 - 0.05 + 2 x 10 mm (the duplicate counted once); sums of a few
+            // decimal lengths, 1e-12 m covers their rounding
+            assertEquals(3.52 + 0.39995 + 0.02, j.get("totals").get("length_m").asDouble(), 1e-12);
+        }
+    }
+
+    @Test
+    void coincidentArrayWithTinySpacing_collapsesToOneCopy() throws IOException {
+        Run r = cli("check", "--json", "-", "-a", "WIRE=RB10", catalogue("coincident-array-tiny-spacing.dxf").toString());
+        assertEquals(1, r.code(), r.err());
+        JsonNode j = MAPPER.readTree(r.out());
+        assertEquals(1, j.get("pieces").size());
+        List<String> d = messages(j, "duplicate");
+        assertEquals(1, d.size(), r.out());
+        assertTrue(d.get(0).contains("is placed 1000000 times in the same place"), d.get(0));
+        // one 100 mm line counted once, within the reported bound (the 999999 copies are taken out of a
+        // drawn sum of 10^5 m, so rounding of that sum shows); drawn 10^6 times (closed form)
+        JsonNode t = j.get("totals");
+        assertTrue(Math.abs(t.get("length_m").asDouble() - 0.1) <= t.get("error_bound_m").asDouble(), t.toString());
+        assertEquals(1e5, t.get("drawn_length_m").asDouble(), 1e-6);
+    }
+
+    @Test
+    void splineWithEndWeight1e99_bendingTablesHoldOnlyFiniteNumbers() throws IOException {
+        Path html = dir.resolve("r.html");
+        Run r = cli("check", "--fail-at", "never", "-a", "WIRE=round:8:steel", "--html", html.toString(),
+                catalogue("spline-end-weight-1e99.dxf").toString());
+        assertEquals(0, r.code(), r.err());
+        String text = Files.readString(html, StandardCharsets.UTF_8);
+        assertFalse(text.contains("Infinity") || text.contains("NaN"), "no non-finite number in the report");
+    }
 }

@@ -87,7 +87,7 @@ public class JoinBenchmark {
                 }
             }
         }
-        tolerances = Tolerances.defaultsFor(length * Math.sqrt(2));
+        tolerances = Tolerances.defaults();
     }
 
     @Benchmark

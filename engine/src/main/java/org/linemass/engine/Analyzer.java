@@ -102,7 +102,7 @@ public final class Analyzer {
             throws AnalysisException {
         MaterialPlan plan = MaterialPlan.of(settings);
         ResolvedDrawing resolved = Resolver.resolve(drawing, settings);
-        Tolerances tol = tolerances(drawing, settings, resolved.extentM());
+        Tolerances tol = tolerances(drawing, settings);
         List<Finding> findings = new ArrayList<>(ImportFindings.of(drawing));
         java.util.Set<String> wireLayers = resolved.layers().moments().keySet();
         RuleFindings.requireSomethingLeft(drawing, settings, wireLayers, wireLayers.isEmpty()
@@ -188,7 +188,7 @@ public final class Analyzer {
         if (resolved.worldSegments().isEmpty()) {
             return new FieldIntegralResult(drawing.file(), expression, List.of(), List.of(), 0, 0, reasons);
         }
-        Tolerances tol = tolerances(drawing, settings, resolved.extentM());
+        Tolerances tol = tolerances(drawing, settings);
         PieceAnalysis pa = stage.analyze(resolved.worldSegments().get(), tol, sectionLookup(plan, resolved),
                 settings.mirrorGrouping());
         PieceAssembler.Output assembled;
@@ -234,16 +234,14 @@ public final class Analyzer {
 
     /**
      * The analysis's one tolerance object ({@link AnalysisSettings#tolerances}); a user's tolerance that
-     * conflicts with a default derived from this drawing's extent is bad input.
+     * conflicts with a default is bad input.
      */
-    private static Tolerances tolerances(Drawing drawing, AnalysisSettings settings, double extentM)
-            throws AnalysisException {
+    private static Tolerances tolerances(Drawing drawing, AnalysisSettings settings) throws AnalysisException {
         try {
-            return settings.tolerances(extentM);
+            return settings.tolerances();
         } catch (IllegalArgumentException e) {
-            // the conflict comes from the drawing's extent, not from one line of it: name the file and the extent
-            throw new AnalysisException(drawing.file() + ": bad tolerance: " + e.getMessage() + " (the drawing is "
-                    + String.format(java.util.Locale.ROOT, "%.3g", extentM) + " m across)");
+            // the conflict comes from the settings, not from one line of the drawing: name the file
+            throw new AnalysisException(drawing.file() + ": bad tolerance: " + e.getMessage());
         }
     }
 

@@ -48,6 +48,11 @@ public record Vec3(double x, double y, double z) {
         return x * x + y * y + z * z;
     }
 
+    /** The largest of |x|, |y| and |z| (the magnitude rounding noise is judged from). */
+    public double maxAbs() {
+        return Math.max(Math.abs(x), Math.max(Math.abs(y), Math.abs(z)));
+    }
+
     public double distance(Vec3 o) {
         double dx = x - o.x;
         double dy = y - o.y;

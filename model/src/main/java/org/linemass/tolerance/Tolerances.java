@@ -4,8 +4,10 @@ package org.linemass.tolerance;
  * Every tolerance linemass uses, in one place, with its unit in the name or the doc.
  *
  * <p>The record holds the tolerances of one analysis: built once per drawing from the user's
- * settings and the drawing's extent ({@code AnalysisSettings.tolerances} in the engine), then
- * passed whole to each stage, the integration target included. The static constants below are
+ * settings ({@code AnalysisSettings.tolerances} in the engine), then passed whole to each stage, the
+ * integration target included. No tolerance depends on the drawing's extent: one stray entity far
+ * away must not change how the rest is joined or checked. Rounding noise is judged where it
+ * arises, from the magnitude of the coordinates there ({@link #noiseAt}). The static constants below are
  * the fixed numerical tolerances of the algorithms (rounding models, series switch points,
  * similarity tests); they do not depend on the drawing and cannot be set by the user, but they
  * live here so that one file lists every tolerance there is.
@@ -16,18 +18,19 @@ package org.linemass.tolerance;
  *
  * @param joinM segment ends closer than this join (metres)
  * @param gapLimitM ends farther apart than {@code joinM} but within this are reported as gaps (metres)
- * @param noiseM distances below this are numerical noise, not drafting (metres; about 1e-9 of the extent)
+ * @param noiseFloorM distances at or below this are numerical noise, not drafting, wherever they are
+ *        (metres); far from the origin the noise is larger, see {@link #noiseAt}
  * @param groupM largest point deviation for two pieces to count as identical (metres)
  * @param integrationRelative target relative error of every integral (dimensionless)
  * @param angleRad angles below this are "straight on" for bends and collinearity (radians)
  */
-public record Tolerances(double joinM, double gapLimitM, double noiseM, double groupM,
+public record Tolerances(double joinM, double gapLimitM, double noiseFloorM, double groupM,
         double integrationRelative, double angleRad) {
 
     public Tolerances {
         requirePositive("join tolerance", joinM);
         requirePositive("gap limit", gapLimitM);
-        requirePositive("noise", noiseM);
+        requirePositive("noise", noiseFloorM);
         requirePositive("group tolerance", groupM);
         requirePositive("integration tolerance", integrationRelative);
         requirePositive("angle tolerance", angleRad);
@@ -75,33 +78,78 @@ public record Tolerances(double joinM, double gapLimitM, double noiseM, double g
     /** Default gap limit: 5 mm (common practice, no source: larger openings are usually deliberate). */
     public static final double DEFAULT_GAP_LIMIT_M = 5e-3;
 
+    /** Default group tolerance: 0.1 mm (common practice, no source: well inside a bar's cutting tolerance). */
+    public static final double DEFAULT_GROUP_M = 1e-4;
+
     /**
-     * Defaults for a drawing of the given extent (bounding-box diagonal, metres): the join tolerance
-     * is 0.01 mm but never below 1e-9 of the extent; noise is 1e-9 of the extent.
+     * Noise floor (metres): 10 nm, a thousandth of the default join tolerance, and above the rounding
+     * of coordinates written with six decimals of a millimetre (0.5 nm each). Common practice, no source.
      */
-    public static Tolerances defaultsFor(double extentM) {
-        double extent = extentM > 0 && Double.isFinite(extentM) ? extentM : 1.0;
-        double noise = Math.max(1e-9 * extent, 1e-12);
-        double join = Math.max(DEFAULT_JOIN_M, noise);
-        return new Tolerances(join, Math.max(DEFAULT_GAP_LIMIT_M, join), noise, Math.max(join, 1e-4),
+    public static final double NOISE_FLOOR_M = 1e-8;
+
+    /**
+     * Rounding noise of a coordinate, in units in the last place of its magnitude (dimensionless):
+     * a point read, transformed through a few nested inserts and measured against another rounds by a
+     * few ulps each step; 64 leaves room for that. Common practice, no source.
+     */
+    public static final double NOISE_ULPS = 64;
+
+    /**
+     * The defaults: join 0.01 mm, gap limit 5 mm, group 0.1 mm, noise floor {@link #NOISE_FLOOR_M},
+     * integration {@link #DEFAULT_INTEGRATION_RELATIVE}, angle 0.01 degree. The same for every drawing,
+     * whatever its extent.
+     */
+    public static Tolerances defaults() {
+        return new Tolerances(DEFAULT_JOIN_M, DEFAULT_GAP_LIMIT_M, NOISE_FLOOR_M, DEFAULT_GROUP_M,
                 DEFAULT_INTEGRATION_RELATIVE, Math.toRadians(0.01));
     }
 
+    /**
+     * Rounding noise at a place whose coordinates are at most {@code magnitudeM} in absolute value
+     * (metres, the largest of |x|, |y|, |z| of the points involved, {@code Vec3.maxAbs}): the noise floor, or
+     * {@link #NOISE_ULPS} units in the last place of the magnitude where that is larger (beyond about
+     * 700 km from the origin). Distances at or below it are rounding, not drafting. A non-finite
+     * magnitude gives an infinite noise.
+     */
+    public double noiseAt(double magnitudeM) {
+        double m = Math.abs(magnitudeM);
+        if (!Double.isFinite(m)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return Math.max(noiseFloorM, NOISE_ULPS * Math.ulp(m));
+    }
+
     public Tolerances withJoin(double m) {
-        return new Tolerances(m, Math.max(gapLimitM, m), noiseM, Math.max(groupM, m), integrationRelative, angleRad);
+        return new Tolerances(m, Math.max(gapLimitM, m), noiseFloorM, Math.max(groupM, m), integrationRelative,
+                angleRad);
     }
 
     public Tolerances withGapLimit(double m) {
-        return new Tolerances(joinM, m, noiseM, groupM, integrationRelative, angleRad);
+        return new Tolerances(joinM, m, noiseFloorM, groupM, integrationRelative, angleRad);
     }
 
     public Tolerances withGroup(double m) {
-        return new Tolerances(joinM, gapLimitM, noiseM, m, integrationRelative, angleRad);
+        return new Tolerances(joinM, gapLimitM, noiseFloorM, m, integrationRelative, angleRad);
     }
 
     public Tolerances withIntegrationRelative(double r) {
-        return new Tolerances(joinM, gapLimitM, noiseM, groupM, r, angleRad);
+        return new Tolerances(joinM, gapLimitM, noiseFloorM, groupM, r, angleRad);
     }
+
+    // ---- far entities (engine.pieces.checks.RemoteCheck; fixed, not user-set) ----
+
+    /**
+     * An entity is remote when the opening between it and the main body exceeds this many times the
+     * body's size (dimensionless). Common practice, no source: a detail or a second view drawn beside
+     * a part sits within a few times its size; a thousand times is a slip.
+     */
+    public static final double REMOTE_GAP_FACTOR = 1000;
+
+    /**
+     * The main body's size counts as at least this when it is smaller (metres), so that an opening
+     * under a kilometre is never remote. Common practice, no source.
+     */
+    public static final double REMOTE_MIN_SIZE_M = 1.0;
 
     // ---- fixed numerical tolerances of the algorithms (not drawing-dependent, not user-set) ----
 

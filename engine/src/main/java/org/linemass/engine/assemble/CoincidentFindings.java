@@ -70,7 +70,7 @@ public final class CoincidentFindings {
                 u[2] += extraKg == null ? 0 : extraKg;
                 continue;
             }
-            String message = String.format(Locale.ROOT, "%s is placed %d times in exactly the same place (block copies"
+            String message = String.format(Locale.ROOT, "%s is placed %d times in the same place, to within rounding (block copies"
                     + " drawn on top of each other): the %d copies beyond the first, %s each, would be counted again"
                     + "%s; it is counted once.", s.source().describe(), c.copies(), extra, Findings.mm(lengthM),
                     extraKg == null ? "" : " (" + Findings.kg(extraKg) + ")");
@@ -80,7 +80,7 @@ public final class CoincidentFindings {
         }
         unlisted.forEach((layer, u) -> findings.add(new Finding(FindingKind.DUPLICATE, Severity.ERROR, null, u[1], layer,
                 List.of(), u[2] > 0 ? u[2] : null, String.format(Locale.ROOT, "%d more segments on layer %s are placed"
-                        + " several times in exactly the same place (not listed one by one, more than %d in the"
+                        + " several times in the same place (not listed one by one, more than %d in the"
                         + " drawing); together %.3f m of copies beyond the first, counted once.", (long) u[0], layer,
                         LISTED, u[1]))));
         Map<String, Moments> out = new TreeMap<>();

@@ -36,6 +36,12 @@ public final class BenderPrograms {
             if (run instanceof FormRun.Feed f) {
                 feed += f.lengthM();
                 end = f.end();
+            } else if (run instanceof FormRun.Turn t && !t.sharp() && t.circleRadiusM() == null
+                    && !Double.isFinite(t.lengthM() / t.angleRad())) {
+                // a curved run that turns by nothing (or by too little to give a radius: a spline whose
+                // weights crowd its parameter into one end) is fed straight, not bent
+                feed += t.lengthM();
+                end = t.end();
             } else if (run instanceof FormRun.Turn t) {
                 Vec3 axis = t.axis() != null ? t.axis() : prev != null ? prev : CoilFit.anyPerpendicular(t.tangentIn());
                 double rotation = prev == null ? 0 : signedAngleDeg(prev, axis, t.tangentIn());

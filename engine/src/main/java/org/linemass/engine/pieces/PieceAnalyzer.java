@@ -13,6 +13,7 @@ import org.linemass.engine.pieces.checks.BendFinder;
 import org.linemass.engine.pieces.checks.ContactCheck;
 import org.linemass.engine.pieces.checks.Findings;
 import org.linemass.engine.pieces.checks.GapCheck;
+import org.linemass.engine.pieces.checks.RemoteCheck;
 import org.linemass.engine.pieces.checks.SectionCache;
 import org.linemass.engine.pieces.checks.SizeCheck;
 import org.linemass.engine.pieces.checks.TeeGapCheck;
@@ -48,7 +49,8 @@ import org.linemass.tolerance.Tolerances;
  * ({@link Joiner}); each piece gets its bends ({@link BendFinder}, {@link BendCheck}); free ends
  * are checked for gaps to other ends ({@link GapCheck}) and to the middle of other wires
  * ({@link TeeGapCheck}), and pieces for T-junctions and crossings
- * ({@link ContactCheck}); identical pieces are grouped ({@link Grouper}). Every stage uses a hash
+ * ({@link ContactCheck}); identical pieces are grouped ({@link Grouper}). Entities far from the rest
+ * of the model are reported ({@link RemoteCheck}) and otherwise treated like the rest. Every stage uses a hash
  * grid or an STR-tree, so the whole costs O(n log n) for n segments.
  *
  * <p>Pieces are listed by layer, then start point, then end point (lexicographic), findings by
@@ -94,6 +96,7 @@ public final class PieceAnalyzer {
         Objects.requireNonNull(sections, "section lookup");
         SectionCache cache = new SectionCache(sections);
         JoinClasses classes = new JoinClasses(joins);
+        List<Finding> remote = RemoteCheck.check(world);
         SegmentIndex index = new SegmentIndex(world, tol.joinM());
         // every layer: welds between layers (cross wires on a frame layer) count as contacts
         CandidatePairs pairs = CandidatePairs.onThreads(index, world.size(), (i, j) -> true, threads);
@@ -104,6 +107,7 @@ public final class PieceAnalyzer {
         }
         DedupResult dedup = Deduplicator.run(world, lengthOf, pairs, tol, cache);
         List<Finding> findings = new ArrayList<>(dedup.findings());
+        findings.addAll(remote);
         if (pairs.truncated()) {
             findings.add(new Finding(FindingKind.LIMIT_REACHED, Severity.WARNING, null, null, null, List.of(), null,
                     "more than " + CandidatePairs.MAX_PAIRS + " pairs of segments lie on or against each other (many"
@@ -126,7 +130,7 @@ public final class PieceAnalyzer {
             Finding f = SizeCheck.check(s, len, tol);
             if (f != null) {
                 findings.add(f);
-                if (len > tol.noiseM()) {
+                if (!SizeCheck.isNoise(s, len, tol)) {
                     Built b = piece(List.of(s), false, cache, tol, findings, classes);
                     pieces.add(b.piece());
                     pieceRuns.add(b.runs());

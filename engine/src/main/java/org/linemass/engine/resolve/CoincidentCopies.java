@@ -7,6 +7,7 @@ import java.util.Map;
 import org.linemass.geometry.Segment;
 import org.linemass.geometry.Straight;
 import org.linemass.geometry.Vec3;
+import org.linemass.tolerance.Tolerances;
 
 /**
  * Collects expanded world segments and keeps one of every set of exact coincident copies: copies of
@@ -16,17 +17,20 @@ import org.linemass.geometry.Vec3;
  * are counted ({@link Group#copies()}) so that the caller can take them out of the totals and report
  * them as one finding with the count, instead of a million pairwise duplicates.
  *
- * <p>Equality is exact (the segments' own {@code equals}), except that a zero coordinate of a
- * straight compares equal whatever its sign (a spacing of -0.0 moves a copy by -0.0). Copies that
- * are equal only within a tolerance, or of different entities, are left to the piece stage's
- * duplicate search. Cost: one hash lookup per segment added; memory proportional to the distinct
+ * <p>Curves other than straights compare exactly (the segments' own {@code equals}). Straights
+ * compare by their end points rounded to the rounding noise where they lie (the grid of
+ * {@link Tolerances#noiseAt} of their larger end magnitude, with the default noise floor), so that
+ * a spacing of -0.0, or of 1e-300, which moves a copy by nothing or by far less than rounding,
+ * still gives one copy: two straights in one grid cell are the same straight to within rounding.
+ * Copies a little apart that fall either side of a grid line, copies farther apart, and copies of
+ * different entities are left to the piece stage's duplicate search. Cost: one hash lookup per segment added; memory proportional to the distinct
  * segments. An accumulator, not thread-safe; order of {@link #segments()} is the order of first
  * appearance.
  */
 final class CoincidentCopies {
 
     /**
-     * One segment drawn more than once in exactly the same place.
+     * One segment drawn more than once in the same place (to within rounding, for straights).
      *
      * @param kept the copy kept (the first placed)
      * @param copies how many times it is placed there in all (at least 2)
@@ -81,14 +85,29 @@ final class CoincidentCopies {
         return out;
     }
 
-    /** The straight with -0.0 coordinates as +0.0 (adding 0.0 does exactly that); other kinds as they are. */
+    /** Noise at a place with the default floor: the grid straights are compared on. */
+    private static final Tolerances NOISE = Tolerances.defaults();
+
+    /**
+     * The straight with its coordinates rounded to the noise grid where it lies (as multiples of
+     * the grid step, so -0.0 and +0.0 and anything within one cell agree); other kinds as they are.
+     */
     private static Segment canonical(Segment s) {
         if (s instanceof Straight t) {
             Vec3 a = t.a();
             Vec3 b = t.b();
-            return new Straight(a.x() + 0.0, a.y() + 0.0, a.z() + 0.0, b.x() + 0.0, b.y() + 0.0, b.z() + 0.0,
-                    t.source());
+            double step = NOISE.noiseAt(Math.max(a.maxAbs(), b.maxAbs()));
+            if (!Double.isFinite(step)) {
+                return s;
+            }
+            return new Straight(cell(a.x(), step), cell(a.y(), step), cell(a.z(), step), cell(b.x(), step),
+                    cell(b.y(), step), cell(b.z(), step), t.source());
         }
         return s;
+    }
+
+    /** The grid cell of {@code v} for a step; + 0.0 makes a -0.0 cell +0.0. */
+    private static double cell(double v, double step) {
+        return Math.floor(v / step) + 0.0;
     }
 }

@@ -30,6 +30,12 @@ public final class FindingKind {
     public static final String UNMATCHED_RULE = "unmatched_rule";
 
     /**
+     * An entity or small cluster of them far from the rest of the model (a warning with the distance;
+     * still weighed and joined like the rest).
+     */
+    public static final String REMOTE_ENTITY = "remote_entity";
+
+    /**
      * A layer whose moments exceed the range of double numbers (an error: implausible units,
      * coordinates or section data); the layer is left out of the totals.
      */

@@ -12,7 +12,7 @@ import org.linemass.tolerance.Tolerances;
 /**
  * What the user chose for one analysis: the one settings object, built once from the options and
  * passed whole. Empty optionals mean "use the default derived from the drawing" (see
- * {@link Tolerances#defaultsFor}); {@link #tolerances} turns the settings and the drawing's extent
+ * {@link Tolerances#defaults}); {@link #tolerances} turns the settings
  * into the one {@link Tolerances} object the stages share.
  *
  * <p>The constructor checks what the user gave: every tolerance positive and finite, and the gap
@@ -121,15 +121,15 @@ public record AnalysisSettings(Optional<Double> joinM, Optional<Double> gapLimit
     }
 
     /**
-     * The tolerances for a drawing of the given extent (bounding-box diagonal, metres): the defaults
-     * ({@link Tolerances#defaultsFor}) overridden by the user's join, gap and group tolerances and
-     * integration target. Built once per analysis.
+     * The tolerances of an analysis: the defaults ({@link Tolerances#defaults}) overridden by the
+     * user's join, gap and group tolerances and integration target. The same for every drawing: none
+     * depends on the drawing's extent. Built once per analysis.
      *
-     * @throws IllegalArgumentException when a user's tolerance conflicts with a default derived from the
-     *     extent (a gap limit below the join tolerance of a very large drawing)
+     * @throws IllegalArgumentException when a user's tolerance conflicts with a default (a gap limit
+     *     below the default join tolerance)
      */
-    public Tolerances tolerances(double extentM) {
-        Tolerances t = Tolerances.defaultsFor(extentM).withIntegrationRelative(integrationRelative);
+    public Tolerances tolerances() {
+        Tolerances t = Tolerances.defaults().withIntegrationRelative(integrationRelative);
         if (joinM.isPresent()) {
             t = t.withJoin(joinM.get());
         }

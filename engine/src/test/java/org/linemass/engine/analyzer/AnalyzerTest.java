@@ -290,20 +290,25 @@ class AnalyzerTest {
     }
 
     @Test
-    void gapLimitBelowTheDrawingsDefaultJoin_isAnAnalysisException() {
-        // a drawing 1e5 km across: its default join tolerance is 1e-9 of the extent, 0.1 m, above the
-        // user's 1 mm gap limit (Tolerances.defaultsFor)
+    void gapLimitBelowTheDefaultJoin_isAnAnalysisException_whateverTheExtent() throws AnalysisException {
+        // a drawing 1e5 km across: tolerances no longer grow with the extent, so the user's 1 mm gap
+        // limit stands beside the default 0.01 mm join tolerance (Tolerances.defaults)
         Drawings d = Drawings.create();
         d.model().line("W", Vec3.ZERO, new Vec3(1e11, 0, 0));
         AnalysisSettings s = settings();
-        AnalysisSettings smallGap = new AnalysisSettings(s.joinM(), java.util.Optional.of(0.001), s.groupM(),
+        AnalysisSettings oneMm = new AnalysisSettings(s.joinM(), java.util.Optional.of(0.001), s.groupM(),
+                s.integrationRelative(), false, List.of(), List.of(), false, s.sections(), List.of(), Map.of(),
+                s.maxExpandedSegments());
+        assertEquals(1, Analyzer.analyze(d.build(), oneMm, SimpleStages.CHAIN).pieces().size());
+        // a gap limit of 0.001 mm is below the default join tolerance of 0.01 mm: bad input naming the file
+        AnalysisSettings tiny = new AnalysisSettings(s.joinM(), java.util.Optional.of(1e-6), s.groupM(),
                 s.integrationRelative(), false, List.of(), List.of(), false, s.sections(), List.of(), Map.of(),
                 s.maxExpandedSegments());
         AnalysisException e = assertThrows(AnalysisException.class,
-                () -> Analyzer.analyze(d.build(), smallGap, SimpleStages.CHAIN));
-        assertTrue(e.getMessage().contains(": bad tolerance: gap limit"), e.getMessage());
+                () -> Analyzer.analyze(d.build(), tiny, SimpleStages.CHAIN));
+        assertTrue(e.getMessage().contains(": bad tolerance: gap limit 0.001 mm is below the join tolerance 0.01 mm"),
+                e.getMessage());
         assertTrue(e.getMessage().startsWith(d.build().file() + ": "), "names the file: " + e.getMessage());
-        assertTrue(e.getMessage().endsWith("(the drawing is 1.00e+08 m across)"), e.getMessage());
     }
 
     @Test

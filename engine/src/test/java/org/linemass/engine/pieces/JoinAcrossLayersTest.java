@@ -36,7 +36,7 @@ class JoinAcrossLayersTest {
             line("HOOK", 2, new Vec3(1, 0, 0), new Vec3(1, 0.2, 0)));
 
     private static PieceAnalysis analyse(List<LayerJoin> joins) {
-        return PieceAnalyzer.analyze(BAR_AND_HOOK, Tolerances.defaultsFor(1.0), layer -> Optional.empty(), false, joins);
+        return PieceAnalyzer.analyze(BAR_AND_HOOK, Tolerances.defaults(), layer -> Optional.empty(), false, joins);
     }
 
     private static double length(Piece p) {
@@ -100,7 +100,7 @@ class JoinAcrossLayersTest {
         Vec3 in = new Vec3(s, -s, 0).times(0.06);
         segs.add(line("H", 2, p1, p1.plus(in)));
         segs.add(line("H", 3, p2, p2.plus(in)));
-        Tolerances tol = Tolerances.defaultsFor(1.0);
+        Tolerances tol = Tolerances.defaults();
         PieceAnalysis apart = PieceAnalyzer.analyze(segs, tol, layer -> Optional.empty(), false, List.of());
         assertEquals(3, apart.pieces().size());
         assertEquals(1, apart.pieces().stream().filter(Piece::closed).count());

@@ -86,13 +86,14 @@ class CoincidentCopiesTest {
         Drawings d = Drawings.create();
         d.block("CELL").line("0", Vec3.ZERO, new Vec3(100, 0, 0));
         d.model().array("CELL", "WIRE", Affine.IDENTITY, 1_000_000, 1, new Vec3(-0.0, 0, 0), Vec3.ZERO);
-        long t0 = System.nanoTime();
         DrawingResult result = Analyzer.analyze(d.build(), settings());
-        double seconds = (System.nanoTime() - t0) / 1e9;
         assertEquals(LINE_M, result.totals().lengthM(), 1e6 * TOL_M);
-        assertEquals(1, result.findings().stream().filter(f -> FindingKind.DUPLICATE.equals(f.kind())).count());
-        // it used to take over 30 s and 100,000 findings; one hash lookup per copy takes well under a
-        // second on one core, 20 s leaves room for a machine shared with many builds
-        assertTrue(seconds < 20, seconds + " s");
+        // it used to take over 30 s and list 100,000 pairwise findings: now the copies collapse to one
+        // segment before joining (one piece, one finding with the count). No wall-clock bound here: a
+        // timed test fails on a loaded machine; the campaign and the hostile catalogue bound the time
+        List<Finding> dup = result.findings().stream().filter(f -> FindingKind.DUPLICATE.equals(f.kind())).toList();
+        assertEquals(1, dup.size());
+        assertTrue(dup.get(0).message().contains("placed 1000000 times"), dup.get(0).message());
+        assertEquals(1, result.pieces().size());
     }
 }

@@ -22,7 +22,7 @@ import org.linemass.geometry.Vec3;
  * closed loop starts at its lexicographically smallest vertex heading to the smaller neighbour,
  * so the result does not depend on input order or segment direction. Findings: {@code branch} (info) at every node where three or
  * more ends meet, and {@code joined_across_gap} (info) for every joined pair of ends farther apart
- * than {@link Tolerances#noiseM()}. Cost O(n) expected besides the per-node pairing.
+ * than the rounding noise there ({@link Tolerances#noiseAt}). Cost O(n) expected besides the per-node pairing.
  */
 public final class Joiner {
 
@@ -55,7 +55,7 @@ public final class Joiner {
             int f = partner[e];
             if (f > e) {
                 double d = nodes.point[e].distance(nodes.point[f]);
-                if (d > tol.noiseM()) {
+                if (d > tol.noiseAt(Math.max(nodes.point[e].maxAbs(), nodes.point[f].maxAbs()))) {
                     Provenance pa = segments.get(e >> 1).source();
                     Provenance pb = segments.get(f >> 1).source();
                     findings.add(Findings.of(FindingKind.JOINED_ACROSS_GAP, Severity.INFO,

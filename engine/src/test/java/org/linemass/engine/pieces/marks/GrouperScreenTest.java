@@ -21,7 +21,7 @@ import org.linemass.tolerance.Tolerances;
  */
 class GrouperScreenTest {
 
-    private static final Tolerances TOL = Tolerances.defaultsFor(10);
+    private static final Tolerances TOL = Tolerances.defaults();
 
     @Test
     void mayMatch_endDistancesWithinTwiceTheTolerance_pass_fartherDoNot() {
