@@ -4,11 +4,19 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * A plain-text table: columns padded to their widest cell, numeric columns right-aligned, two
+ * A plain-text table: columns padded to their widest cell (at most {@link #MAX_PAD} characters),
+ * numeric columns right-aligned, two
  * spaces between columns, a dashed rule under the header. Control characters in cells (from
  * drawing names) are replaced by '?', so a layer name cannot move the cursor or inject colour.
  */
 final class TextTable {
+
+    /**
+     * Columns before the last are padded to at most this many characters: a longer cell (a layer named with 100,000
+     * letters) is written in full and pushes the rest of its own row along, instead of widening every
+     * row of the table to its length (which made a 150 KB drawing print 335 MB).
+     */
+    static final int MAX_PAD = 64;
 
     private final List<String> header;
     private final boolean[] numeric;
@@ -52,7 +60,8 @@ final class TextTable {
         for (int i = 0; i < width.length; i++) {
             width[i] = header.get(i).length();
             for (List<String> r : rows) {
-                width[i] = Math.max(width[i], r.get(i).length());
+                // the last column is not padded, only wrapped (below)
+                width[i] = Math.max(width[i], i == last ? r.get(i).length() : Math.min(r.get(i).length(), MAX_PAD));
             }
         }
         width[last] = Math.max(header.get(last).length(), Math.min(width[last], Math.max(lastWidth, 10)));
@@ -133,7 +142,7 @@ final class TextTable {
                 l.append("  ");
             }
             String c = cells.get(i);
-            String pad = " ".repeat(width[i] - c.length());
+            String pad = " ".repeat(Math.max(0, width[i] - c.length()));
             l.append(numeric[i] ? pad + c : c + pad);
         }
         sb.append(l.toString().stripTrailing()).append('\n');
