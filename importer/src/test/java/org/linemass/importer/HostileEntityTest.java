@@ -52,6 +52,13 @@ class HostileEntityTest {
                 40, 0, 40, "NaN", 40, 1, 40, 1, 10, 0, 20, 0, 10, 1, 20, 0));
     }
 
+    /** Found by the mutation campaign: a denormal radius gave a finding a NaN place (an internal error, exit 3). */
+    @Test
+    void tinyRadius_isSkipped() throws Exception {
+        assertEquals("ARC radius 4.9E-324 is below 1.0E-99 drawing units, too small to measure",
+                skipped(0, "ARC", 10, 45, 20, 15, 40, "4.9e-324", 50, 45, 51, 135));
+    }
+
     @Test
     void ellipseRejections() throws Exception {
         assertEquals("ELLIPSE needs a non-zero major axis and a positive axis ratio, got Vec3[x=0.0, y=0.0, z=0.0] and 0.5",

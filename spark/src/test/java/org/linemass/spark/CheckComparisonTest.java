@@ -172,7 +172,7 @@ class CheckComparisonTest {
 
     private static List<CSVRecord> csv(Path file) throws IOException {
         try (Reader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            return CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).build().parse(r).getRecords();
+            return CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get().parse(r).getRecords();
         }
     }
 

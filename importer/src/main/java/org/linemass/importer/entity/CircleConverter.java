@@ -29,6 +29,10 @@ final class CircleConverter {
         if (!(radius > 0)) {
             throw new EntitySkip((arc ? "ARC" : "CIRCLE") + " radius must be positive, got " + radius);
         }
+        if (radius < Values.MIN_RADIUS) {
+            throw new EntitySkip((arc ? "ARC" : "CIRCLE") + " radius " + radius + " is below " + Values.MIN_RADIUS
+                    + " drawing units, too small to measure");
+        }
         Ocs.Frame frame = Ocs.frame(Values.extrusion(r));
         Affine ocs = frame.map();
         double t0 = 0;

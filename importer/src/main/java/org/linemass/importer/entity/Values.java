@@ -12,6 +12,13 @@ final class Values {
      */
     static final double MAX_COORDINATE = 1e99;
 
+    /**
+     * Smallest radius accepted, in drawing units: the reciprocal of {@link #MAX_COORDINATE}. Below it a
+     * radius converted to metres underflows (its square and cube, which the moments take, certainly do),
+     * so no length, centroid or place could be computed from it.
+     */
+    static final double MIN_RADIUS = 1e-99;
+
     private Values() {
     }
 
