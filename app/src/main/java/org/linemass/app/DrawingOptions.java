@@ -119,15 +119,23 @@ public final class DrawingOptions {
     long maxExpandedSegments = AnalysisSettings.DEFAULT_MAX_EXPANDED_SEGMENTS;
 
     @Option(names = "--threads", paramLabel = "N", description = "Threads each drawing's joining, checks and "
-            + "pieces may use (default: one per processor, here ${DEFAULT-VALUE}); the reports are the same "
-            + "for any number.")
-    int threads = Runtime.getRuntime().availableProcessors();
+            + "pieces may use (default: one per processor for a single drawing, one when several drawings "
+            + "run side by side with --jobs); the reports are the same for any number.")
+    Integer threads;
 
     private int threads() throws InputProblem {
+        if (threads == null) {
+            return Runtime.getRuntime().availableProcessors();
+        }
         if (threads < 1) {
             throw new InputProblem("--threads must be 1 or more, got " + threads);
         }
         return threads;
+    }
+
+    /** Whether the user set --threads (otherwise a run of several drawings gives each one thread). */
+    boolean threadsGiven() {
+        return threads != null;
     }
 
     /** Import options with the unit override, if any, and the resource limits. */
