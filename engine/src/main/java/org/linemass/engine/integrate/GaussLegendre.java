@@ -30,34 +30,17 @@ final class GaussLegendre {
         double[] w = new double[n];
         for (int i = 0; i < (n + 1) / 2; i++) {
             double z = Math.cos(Math.PI * (i + 0.75) / (n + 0.5));
-            double dp = 0;
             for (int it = 0; it < 100; it++) {
-                double p0 = 1;
-                double p1 = z;
-                for (int k = 2; k <= n; k++) {
-                    double p2 = ((2 * k - 1) * z * p1 - (k - 1) * p0) / k;
-                    p0 = p1;
-                    p1 = p2;
-                }
-                if (n == 1) {
-                    p0 = 1;
-                }
-                dp = n * (z * p1 - p0) / (z * z - 1);
-                double step = p1 / dp;
+                double[] p = legendre(n, z);
+                double step = p[0] / (n * (z * p[0] - p[1]) / (z * z - 1));
                 z -= step;
                 if (Math.abs(step) <= 1e-17) {
                     break;
                 }
             }
-            // one more derivative at the converged root for the weight
-            double p0 = 1;
-            double p1 = z;
-            for (int k = 2; k <= n; k++) {
-                double p2 = ((2 * k - 1) * z * p1 - (k - 1) * p0) / k;
-                p0 = p1;
-                p1 = p2;
-            }
-            dp = n == 1 ? 1 : n * (z * p1 - p0) / (z * z - 1);
+            // the derivative at the converged root, for the weight
+            double[] p = legendre(n, z);
+            double dp = n == 1 ? 1 : n * (z * p[0] - p[1]) / (z * z - 1);
             double weight = 2 / ((1 - z * z) * dp * dp);
             x[i] = -z;
             x[n - 1 - i] = z;
@@ -68,6 +51,18 @@ final class GaussLegendre {
             x[n / 2] = 0;
         }
         return new GaussLegendre(x, w);
+    }
+
+    /** P_n(z) and P_(n-1)(z) by the three-term recurrence (n >= 1). */
+    private static double[] legendre(int n, double z) {
+        double p0 = 1;
+        double p1 = z;
+        for (int k = 2; k <= n; k++) {
+            double p2 = ((2 * k - 1) * z * p1 - (k - 1) * p0) / k;
+            p0 = p1;
+            p1 = p2;
+        }
+        return new double[] {p1, p0};
     }
 
     int points() {
